@@ -5,36 +5,14 @@ import { readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { sourcesFileSchema, tableSchemas, type TableName } from '../../src/data/schemas.js';
+import { tableKeys } from '../../src/data/tableKeys.js';
+
+const keyOf = tableKeys as Record<TableName, (r: unknown) => string>;
 
 const dataDir = join(import.meta.dirname, '..', '..', 'data');
 const readJson = (file: string): unknown => JSON.parse(readFileSync(join(dataDir, file), 'utf8'));
 const sources = sourcesFileSchema.parse(readJson('sources.json')).sources;
 
-/** The fields that make a record unique in each table. */
-const keyOf: Record<TableName, (r: any) => string> = {
-  'elements.json': (r) => r.symbol,
-  'ions.json': (r) => r.id,
-  'shannon-radii.json': (r) => `${r.ion}|${r.coordination}|${r.spin ?? ''}`,
-  'thermochemical-radii.json': (r) => r.ion,
-  'ion-volumes.json': (r) => r.ion,
-  'ion-formation-aq.json': (r) => r.ion,
-  'ion-formation-gas.json': (r) => r.ion,
-  'ion-heat-capacities-aq.json': (r) => r.ion,
-  'compound-formation.json': (r) => `${r.formula}|${r.phase}`,
-  'solution-enthalpies.json': (r) => r.formula,
-  'hydration-enthalpies.json': (r) => r.ion,
-  'crystals.json': (r) => r.formula,
-  'solubility.json': (r) => r.formula,
-  'heat-capacities.json': (r) => `${r.formula}|${r.phase}`,
-  'ionization-energies.json': (r) => `${r.element}|${r.stage}`,
-  'electron-affinities.json': (r) => r.element,
-  'atomization-enthalpies.json': (r) => r.element,
-  'bond-dissociation.json': (r) => r.molecule,
-  'madelung-constants.json': (r) => r.structure,
-  'born-exponents.json': (r) => r.core,
-  'volume-coefficients.json': (r) => r.chargeType,
-  'hazards.json': (r) => r.subject,
-};
 
 const present = new Set(readdirSync(dataDir));
 

@@ -1,0 +1,47 @@
+import type { Salt, SaltIon } from './salt.js';
+
+const SUBSCRIPT_DIGITS = '₀₁₂₃₄₅₆₇₈₉';
+
+/** Writes ions as a formula: counts after monatomic ions, parentheses round a polyatomic ion that occurs more than once. */
+export function formatIons(ions: readonly Pick<SaltIon, 'formula' | 'count'>[]): string {
+  return ions
+    .map(({ formula, count }) => {
+      if (count === 1) return formula;
+      const monatomic = /^[A-Z][a-z]?$/.test(formula);
+      return monatomic ? `${formula}${count}` : `(${formula})${count}`;
+    })
+    .join('');
+}
+
+/** Turns the digits of a formula into subscripts, except a hydrate's leading count. */
+function subscriptDigits(formula: string): string {
+  let out = '';
+  let afterDot = false;
+  for (const c of formula) {
+    if (c === '·') afterDot = true;
+    else if (c >= '0' && c <= '9') {
+      out += afterDot ? c : SUBSCRIPT_DIGITS[Number(c)];
+      continue;
+    } else afterDot = false;
+    out += c;
+  }
+  return out;
+}
+
+/**
+ * The canonical formula of a salt, rebuilt from its ions and water: cations
+ * first, then anions, each in the order of the ion table; water after `·`.
+ * `style: 'unicode'` writes subscript digits for display (`Ca(NO₃)₂·4H₂O`).
+ * Parsing the result gives the same salt back.
+ *
+ * @example
+ * ```ts
+ * formatSalt(parseSalt('Na2SO4.10H2O')); // 'Na2SO4·10H2O'
+ * formatSalt(parseSalt('Ca(NO3)2·4H2O'), { style: 'unicode' }); // 'Ca(NO₃)₂·4H₂O'
+ * ```
+ */
+export function formatSalt(salt: Pick<Salt, 'ions' | 'water'>, options: { style?: 'plain' | 'unicode' } = {}): string {
+  const anhydrous = formatIons(salt.ions);
+  const plain = salt.water > 0 ? `${anhydrous}·${salt.water}H2O` : anhydrous;
+  return options.style === 'unicode' ? subscriptDigits(plain) : plain;
+}

@@ -1,0 +1,49 @@
+/**
+ * The salt model: what a written formula means once it has been decomposed
+ * into the ions of the table.
+ *
+ * @module
+ */
+import { z } from 'zod';
+
+export const saltIonSchema = z.strictObject({
+  /** Ion id of the table, e.g. `Ca[2+]`. */
+  ion: z.string(),
+  /** The ion's formula as written in salts, e.g. `NO3`. */
+  formula: z.string(),
+  charge: z.number().int(),
+  /** Ions of this kind per formula unit. */
+  count: z.number().int().positive(),
+});
+export type SaltIon = z.infer<typeof saltIonSchema>;
+
+export const saltSchema = z.strictObject({
+  /** Canonical formula: cations then anions, in table order; hydrate water after `·`. */
+  formula: z.string(),
+  /** The formula without its water of crystallization. */
+  anhydrous: z.string(),
+  /** `ionic` for a salt; `non-electrolyte` for a molecular solute such as urea. */
+  kind: z.enum(['ionic', 'non-electrolyte']),
+  /** Cations first, then anions (a non-electrolyte has its one molecule here, charge 0). */
+  ions: z.array(saltIonSchema),
+  /** Moles of water of crystallization per formula unit. */
+  water: z.number().nonnegative(),
+  /** Element counts of the whole formula unit, water included, symbols in alphabetical order. */
+  composition: z.record(z.string(), z.number()),
+  /** Molar mass of the formula unit as written (hydrate water included), g/mol. */
+  molarMass: z.number().positive(),
+});
+export type Salt = z.infer<typeof saltSchema>;
+
+/** `1:1`, `2:1` (CaCl2), `1:2` (Na2SO4)…: |cation charge|:|anion charge| of a salt with one kind of each. */
+export function chargeType(salt: Salt): string | undefined {
+  const cations = salt.ions.filter((i) => i.charge > 0);
+  const anions = salt.ions.filter((i) => i.charge < 0);
+  if (cations.length !== 1 || anions.length !== 1) return undefined;
+  return `${cations[0]!.charge}:${-anions[0]!.charge}`;
+}
+
+/** Total number of ions per formula unit (ν of the dissolution reaction; water excluded). */
+export function ionsPerFormulaUnit(salt: Salt): number {
+  return salt.ions.reduce((n, i) => n + i.count, 0);
+}

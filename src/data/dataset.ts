@@ -1,0 +1,156 @@
+/**
+ * A `Dataset` is an immutable bundle of data tables (built-in, or built-in with
+ * a user's override tables merged over them). Every computing function takes
+ * one as an argument, defaulting to the built-in set, so two callers with
+ * different tables never see each other's numbers.
+ *
+ * @module
+ */
+import { IonheatError } from '../error.js';
+import { tableSchemas, type SourceEntry, type TableFile, type TableName, type TableRecord } from './schemas.js';
+import { tableKeys } from './tableKeys.js';
+
+/** Every table by file name; a dataset may lack some. */
+export type Tables = { [N in TableName]?: TableFile<N> };
+
+/** A user's override set: for each table, records to merge over the base (same shape as the table's records). */
+export type TableOverrides = { [N in TableName]?: readonly unknown[] };
+
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const v of Object.values(value)) deepFreeze(v);
+  }
+  return value;
+}
+
+/** Immutable tables plus per-dataset lazily built indexes. */
+export class Dataset {
+  readonly #tables: Tables;
+  readonly #sources: Readonly<Record<string, SourceEntry>>;
+  readonly #memo = new Map<string, unknown>();
+  /** Where the tables came from, for messages: `built-in`, or the override files' names. */
+  readonly label: string;
+
+  /**
+   * Wraps already-validated tables. Use {@link Dataset.withOverrides} to add
+   * user tables; this constructor trusts its input.
+   */
+  constructor(tables: Tables, sources: Readonly<Record<string, SourceEntry>>, label = 'built-in') {
+    this.#tables = deepFreeze({ ...tables });
+    this.#sources = deepFreeze({ ...sources });
+    this.label = label;
+  }
+
+  /** The records of one table, in table order; empty when the dataset lacks the table. */
+  records<N extends TableName>(name: N): readonly TableRecord<N>[] {
+    return (this.#tables[name]?.records ?? []) as readonly TableRecord<N>[];
+  }
+
+  /** The table envelope (title, description, defaults), or undefined. */
+  table<N extends TableName>(name: N): TableFile<N> | undefined {
+    return this.#tables[name] as TableFile<N> | undefined;
+  }
+
+  /** The full citation of a source key. */
+  source(key: string): SourceEntry | undefined {
+    return Object.hasOwn(this.#sources, key) ? this.#sources[key] : undefined;
+  }
+
+  /** All source keys and citations. */
+  get sources(): Readonly<Record<string, SourceEntry>> {
+    return this.#sources;
+  }
+
+  /**
+   * The standard uncertainty of a record: its own, or its table's stated
+   * default when the record gives `null`. Undefined when neither is set.
+   */
+  uncertaintyOf<N extends TableName>(name: N, record: { uncertainty?: number | null }): number | undefined {
+    if (typeof record.uncertainty === 'number') return record.uncertainty;
+    return this.#tables[name]?.defaultUncertainty;
+  }
+
+  /**
+   * A value derived from this dataset's tables, built on first use and kept
+   * for the dataset's life (indexes, calibrations). `key` names the builder.
+   */
+  memo<T>(key: string, build: () => T): T {
+    if (this.#memo.has(key)) return this.#memo.get(key) as T;
+    const value = build();
+    this.#memo.set(key, value);
+    return value;
+  }
+
+  /**
+   * A new dataset with a user's records merged over this one's: a record
+   * whose key (formula, ion, element…) matches a built-in record replaces it;
+   * others are added. This dataset is not changed.
+   *
+   * Every record passes the same zod schema as the built-in tables. A bad
+   * record is rejected with an `INVALID_DATA` error that names the file
+   * (`label`), the table, the record number and the field.
+   *
+   * @param overrides - records per table
+   * @param label - where the records came from (a file name), for messages
+   * @param sources - extra citations the records refer to
+   * @example
+   * ```ts
+   * const mine = builtinDataset().withOverrides(
+   *   { 'solution-enthalpies.json': [{ formula: 'KNO3', value: 34.9, unit: 'kJ/mol', uncertainty: 0.2, source: 'myLab', fromMemory: false }] },
+   *   'my-values.json',
+   *   { myLab: { citation: 'Our calorimeter, run 12', kind: 'derived' } },
+   * );
+   * ```
+   */
+  withOverrides(overrides: TableOverrides, label: string, sources: Record<string, SourceEntry> = {}): Dataset {
+    if (overrides === null || typeof overrides !== 'object' || Array.isArray(overrides)) {
+      throw new IonheatError('INVALID_DATA', `${label}: an override set is an object keyed by table name`, { field: label });
+    }
+    const mergedSources: Record<string, SourceEntry> = { ...this.#sources };
+    for (const [key, entry] of Object.entries(sources)) mergedSources[key] = entry;
+    const tables: Tables = { ...this.#tables };
+    for (const name of Object.keys(overrides)) {
+      if (!Object.hasOwn(tableSchemas, name)) {
+        throw new IonheatError('INVALID_DATA', `${label}: "${name}" is not a table ionheat knows (known: ${Object.keys(tableSchemas).join(', ')})`, { field: name });
+      }
+      const tableName = name as TableName;
+      const incoming = overrides[tableName];
+      if (!Array.isArray(incoming)) throw new IonheatError('INVALID_DATA', `${label}: table "${name}" must be a list of records`, { field: name });
+      tables[tableName] = mergeTable(tableName, this.#tables[tableName], incoming, label, mergedSources) as never;
+    }
+    return new Dataset(tables, mergedSources, this.label === 'built-in' ? `built-in + ${label}` : `${this.label} + ${label}`);
+  }
+}
+
+function mergeTable<N extends TableName>(
+  name: N,
+  base: TableFile<N> | undefined,
+  incoming: readonly unknown[],
+  label: string,
+  sources: Record<string, SourceEntry>,
+): TableFile<N> {
+  const recordSchema = tableSchemas[name].shape.records.element;
+  const keyOf = tableKeys[name] as (r: TableRecord<N>) => string;
+  const seen = new Set<string>();
+  const parsed: TableRecord<N>[] = incoming.map((raw, i) => {
+    const result = recordSchema.safeParse(raw);
+    if (!result.success) {
+      const issue = result.error.issues[0]!;
+      const field = issue.path.join('.') || '(record)';
+      throw new IonheatError('INVALID_DATA', `${label}: ${name} record ${i + 1}, field "${field}": ${issue.message}`, { field: `${name}[${i}].${field}` });
+    }
+    const record = result.data as TableRecord<N>;
+    const key = keyOf(record);
+    if (seen.has(key)) throw new IonheatError('INVALID_DATA', `${label}: ${name} record ${i + 1} repeats the key "${key}" of an earlier record`, { field: `${name}[${i}]` });
+    seen.add(key);
+    if (!Object.hasOwn(sources, record.source)) {
+      throw new IonheatError('INVALID_DATA', `${label}: ${name} record ${i + 1} cites source "${record.source}", which is neither built in nor given with the overrides`, { field: `${name}[${i}].source` });
+    }
+    return record;
+  });
+  const replaced = new Map(parsed.map((r) => [keyOf(r), r]));
+  const kept = (base?.records ?? []).filter((r) => !replaced.has(keyOf(r as TableRecord<N>)));
+  const envelope = base ?? ({ title: name, description: `records from ${label}` } as TableFile<N>);
+  return { ...envelope, records: [...kept, ...parsed] } as TableFile<N>;
+}

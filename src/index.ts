@@ -1,0 +1,28 @@
+/**
+ * ionheat: the thermochemistry of dissolving salts, for people who design
+ * products that heat or cool by dissolution.
+ *
+ * This core entry runs anywhere JavaScript runs (Node, a browser, a
+ * notebook): no file or network access, the data tables bundled. File
+ * loading and the command line live in `ionheat/node`.
+ *
+ * @packageDocumentation
+ */
+export { IonheatError, isIonheatError, errorCodes, type ErrorCode, type ErrorContext } from './error.js';
+
+export { makeEstimate, roundEstimate, probabilityPositive, normalCdf, estimateSchema, basisSchema, basisOrder, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
+export { roundToUncertainty } from './quantity/rounding.js';
+export { exactSum, type Term } from './quantity/exactSum.js';
+export { quadrature, linearUncertainty } from './quantity/propagate.js';
+export * as constants from './quantity/constants.js';
+
+export { Dataset, type Tables, type TableOverrides } from './data/dataset.js';
+export { builtinDataset } from './data/builtin.js';
+export * as schemas from './data/schemas.js';
+export { tableSchemas, type TableName, type TableRecord, type TableFile, type IonRecord, type SourceEntry, type StructureType, type HazardClass } from './data/schemas.js';
+
+export { parseSalt } from './chem/parseSalt.js';
+export { formatSalt } from './chem/formatSalt.js';
+export { findIon } from './chem/ionIndex.js';
+export { molarMass } from './chem/molarMass.js';
+export { chargeType, ionsPerFormulaUnit, saltSchema, saltIonSchema, type Salt, type SaltIon } from './chem/salt.js';

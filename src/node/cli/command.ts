@@ -1,0 +1,20 @@
+import type { Dataset } from '../../data/dataset.js';
+import type { CliIO } from './io.js';
+
+/** What every command receives. */
+export interface CommandContext {
+  io: CliIO;
+  /** The built-in tables, with the user's `--data` files merged over them. */
+  dataset: Dataset;
+}
+
+/** One subcommand of `ionheat`. */
+export interface Command {
+  name: string;
+  /** One line for the command list. */
+  summary: string;
+  /** The usage block shown by `ionheat help <name>`. */
+  usage: string;
+  /** Runs with the arguments after the command name; resolves to the exit status. */
+  run(argv: readonly string[], context: CommandContext): Promise<number>;
+}

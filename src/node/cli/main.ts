@@ -1,0 +1,101 @@
+/**
+ * The `ionheat` command line: dispatches to one command per file, turns every
+ * failure into one line on stderr, and returns the exit status:
+ * 0 success, 1 a specification failed, 2 bad input or arguments, 3 a defect.
+ *
+ * @module
+ */
+import { builtinDataset } from '../../data/builtin.js';
+import { isIonheatError } from '../../error.js';
+import { loadDataset } from '../loadDataset.js';
+import type { Command } from './command.js';
+import { demoCommand } from './demoCommand.js';
+import { processIO, type CliIO } from './io.js';
+import { saltCommand } from './saltCommand.js';
+import { version as PACKAGE_VERSION } from '../../../package.json';
+
+/** Every command, in the order `ionheat help` lists them. */
+export const commands: readonly Command[] = [demoCommand, saltCommand];
+
+function overview(): string {
+  const width = Math.max(...commands.map((c) => c.name.length));
+  return [
+    'ionheat — thermochemistry of dissolving salts, for hot- and cold-pack design',
+    '',
+    'usage: ionheat <command> [arguments] [--data <overrides.json>]…',
+    '',
+    'commands:',
+    ...commands.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`),
+    `  ${'help'.padEnd(width)}  show this list, or a command's usage: ionheat help <command>`,
+    '',
+    '--data <file> merges your own tables (same schemas as the built-in ones) over the built-in data; it may repeat.',
+    'Results are screening estimates; they defer to local codes, product-safety regulation and licensed practice.',
+    '',
+  ].join('\n');
+}
+
+/** Pulls every `--data <file>` (or `--data=<file>`) out of the arguments. */
+function takeDataFiles(argv: readonly string[]): { files: string[]; rest: string[] } {
+  const files: string[] = [];
+  const rest: string[] = [];
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i]!;
+    if (a === '--data') {
+      const next = argv[i + 1];
+      if (next === undefined || next.startsWith('--')) throw Object.assign(new Error('--data needs a file name'), { usage: true });
+      files.push(next);
+      i++;
+    } else if (a.startsWith('--data=')) files.push(a.slice('--data='.length));
+    else rest.push(a);
+  }
+  return { files, rest };
+}
+
+/**
+ * Runs the command line with these arguments (without `node` and the script).
+ *
+ * @returns the exit status
+ */
+export async function runCli(argv: readonly string[], io: CliIO = processIO()): Promise<number> {
+  try {
+    const { files, rest } = takeDataFiles(argv);
+    const [name, ...args] = rest;
+    if (name === undefined || name === 'help' || name === '--help' || name === '-h') {
+      const topic = name === 'help' ? commands.find((c) => c.name === args[0]) : undefined;
+      if (name === 'help' && args[0] !== undefined && !topic) {
+        io.stderr(`ionheat: no command "${args[0]}"; try: ionheat help\n`);
+        return 2;
+      }
+      io.stdout(topic ? `${topic.summary}\n\n${topic.usage}\n` : overview());
+      return name === undefined ? 2 : 0;
+    }
+    if (name === '--version') {
+      io.stdout(`${PACKAGE_VERSION}\n`);
+      return 0;
+    }
+    const command = commands.find((c) => c.name === name);
+    if (!command) {
+      io.stderr(`ionheat: no command "${name}"; the commands are ${commands.map((c) => c.name).join(', ')} (ionheat help)\n`);
+      return 2;
+    }
+    if (args.includes('--help') || args.includes('-h')) {
+      io.stdout(`${command.summary}\n\n${command.usage}\n`);
+      return 0;
+    }
+    const dataset = files.length > 0 ? loadDataset(files.map((f) => (f.startsWith('/') ? f : `${io.cwd}/${f}`))) : builtinDataset();
+    return await command.run(args, { io, dataset });
+  } catch (e) {
+    if (isIonheatError(e)) {
+      io.stderr(`ionheat: ${e.message}\n`);
+      return 2;
+    }
+    if (e instanceof Error && (e as { usage?: boolean }).usage) {
+      io.stderr(`ionheat: ${e.message}\n`);
+      return 2;
+    }
+    // A defect in ionheat itself: say so in one line, without a stack trace.
+    io.stderr(`ionheat: internal error (please report it): ${e instanceof Error ? e.message : String(e)}\n`);
+    return 3;
+  }
+}
+

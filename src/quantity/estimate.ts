@@ -1,0 +1,144 @@
+/**
+ * The shared result shape: every number ionheat reports comes as an
+ * `Estimate`, a value with its standard uncertainty, its 95 % interval, its
+ * unit, the basis it rests on, the method that made it and the sources behind
+ * it.
+ *
+ * @module
+ */
+import { z } from 'zod';
+import { IonheatError } from '../error.js';
+import { COVERAGE_95 } from './constants.js';
+import { roundToExponent, roundToUncertainty } from './rounding.js';
+
+/**
+ * How much an estimate can be trusted, most trusted first:
+ * `measured` (a tabulated measurement), `cycle` (closed from tabulated
+ * formation enthalpies), `anchored` (a model difference added to measured
+ * values of related salts), `model` (an estimator alone).
+ */
+export const basisSchema = z.enum(['measured', 'cycle', 'anchored', 'model']);
+export type Basis = z.infer<typeof basisSchema>;
+/** The bases in order of trust. */
+export const basisOrder: readonly Basis[] = ['measured', 'cycle', 'anchored', 'model'];
+
+export const estimateSchema = z.strictObject({
+  /** What is estimated, in words: `lattice enthalpy`, `enthalpy of solution`. */
+  quantity: z.string(),
+  value: z.number(),
+  /** Standard uncertainty (one standard deviation), same unit as `value`. */
+  u: z.number().nonnegative(),
+  /** Lower end of the 95 % interval. */
+  low: z.number(),
+  /** Upper end of the 95 % interval. */
+  high: z.number(),
+  unit: z.string(),
+  basis: basisSchema,
+  /** Machine-readable method name, e.g. `kapustinskii`, `born-haber`, `anchored`. */
+  method: z.string(),
+  /** Source keys of `data/sources.json` behind the number. */
+  sources: z.array(z.string()),
+  /** Flags and caveats a reader should see beside the number. */
+  notes: z.array(z.string()),
+});
+export type Estimate = z.infer<typeof estimateSchema>;
+
+/** What a caller supplies to {@link makeEstimate}; the interval defaults to value ± 1.96·u. */
+export interface EstimateInput {
+  quantity: string;
+  value: number;
+  u: number;
+  unit: string;
+  basis: Basis;
+  method: string;
+  sources?: readonly string[];
+  notes?: readonly string[];
+  low?: number;
+  high?: number;
+}
+
+function requireFinite(x: number, what: string): void {
+  if (!Number.isFinite(x)) throw new IonheatError('INVALID_ARGUMENT', `${what} must be a finite number, got ${String(x)}`, { field: what });
+}
+
+/**
+ * Builds an {@link Estimate}, checking that every number is finite and that
+ * the interval holds the value. The interval is value ± k·u with k = 1.96
+ * (normal, 95 %) unless the caller gives its own ends.
+ *
+ * @example
+ * ```ts
+ * const e = makeEstimate({ quantity: 'lattice enthalpy', value: 787, u: 10, unit: 'kJ/mol', basis: 'model', method: 'kapustinskii' });
+ * e.low; // 767.40036...
+ * e.high; // 806.59963...
+ * ```
+ */
+export function makeEstimate(input: EstimateInput): Estimate {
+  requireFinite(input.value, 'value');
+  requireFinite(input.u, 'uncertainty');
+  if (input.u < 0) throw new IonheatError('INVALID_ARGUMENT', `an uncertainty cannot be negative, got ${input.u}`, { field: 'uncertainty' });
+  const low = input.low ?? input.value - COVERAGE_95 * input.u;
+  const high = input.high ?? input.value + COVERAGE_95 * input.u;
+  requireFinite(low, 'low');
+  requireFinite(high, 'high');
+  if (!(low <= input.value && input.value <= high)) {
+    throw new IonheatError('INVALID_ARGUMENT', `the interval [${low}, ${high}] does not hold the value ${input.value}`, { field: 'interval' });
+  }
+  return {
+    quantity: input.quantity,
+    value: input.value === 0 ? 0 : input.value, // no −0 in results
+    u: input.u,
+    low,
+    high,
+    unit: input.unit,
+    basis: input.basis,
+    method: input.method,
+    sources: [...new Set(input.sources ?? [])].sort(),
+    notes: [...(input.notes ?? [])],
+  };
+}
+
+/**
+ * Rounds an estimate for reporting: `u` to two significant digits, and the
+ * value and interval ends to the same decimal place.
+ *
+ * @example
+ * ```ts
+ * const e = makeEstimate({ quantity: 'q', value: 25.6873, u: 0.4321, unit: 'kJ/mol', basis: 'measured', method: 'table' });
+ * roundEstimate(e).value; // 25.69
+ * roundEstimate(e).u; // 0.43
+ * ```
+ */
+export function roundEstimate(e: Estimate): Estimate {
+  const { value, u, exponent } = roundToUncertainty(e.value, e.u);
+  if (e.u === 0) return { ...e };
+  const clean = (x: number): number => (x === 0 ? 0 : x);
+  return { ...e, value: clean(value), u, low: clean(roundToExponent(e.low, exponent)), high: clean(roundToExponent(e.high, exponent)) };
+}
+
+/** Probability that the true value exceeds zero, for a normal with the estimate's value and u. */
+export function probabilityPositive(e: Pick<Estimate, 'value' | 'u'>): number {
+  if (e.u === 0) return e.value > 0 ? 1 : 0;
+  return normalCdf(e.value / e.u);
+}
+
+/**
+ * The standard normal cumulative distribution Φ(x), by the complementary
+ * error function (W. J. Cody's rational approximations are overkill here; the
+ * Abramowitz–Stegun 7.1.26 form has |error| < 1.5e−7, enough for a probability
+ * reported to three digits).
+ *
+ * @see Abramowitz, M.; Stegun, I. A. Handbook of Mathematical Functions (1964), eq. 7.1.26.
+ * @example
+ * ```ts
+ * normalCdf(0); // 0.5
+ * normalCdf(1.959963984540054); // ≈ 0.975
+ * ```
+ */
+export function normalCdf(x: number): number {
+  const z = Math.abs(x) / Math.SQRT2;
+  const t = 1 / (1 + 0.3275911 * z);
+  const poly = t * (0.254829592 + t * (-0.284496736 + t * (1.421413741 + t * (-1.453152027 + t * 1.061405429))));
+  const erfc = poly * Math.exp(-z * z);
+  return x >= 0 ? 1 - erfc / 2 : erfc / 2;
+}
