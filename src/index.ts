@@ -25,4 +25,8 @@ export { parseSalt } from './chem/parseSalt.js';
 export { formatSalt } from './chem/formatSalt.js';
 export { findIon } from './chem/ionIndex.js';
 export { molarMass } from './chem/molarMass.js';
+export { dissolve, type DissolveOptions, type DissolveResult } from './solution/dissolve.js';
+export { solutionVerdict, type Verdict } from './solution/verdict.js';
+export { measuredSolutionEnthalpy } from './solution/measuredSolution.js';
+export { solutionEnthalpyFromCycle } from './solution/cycleSolution.js';
 export { chargeType, ionsPerFormulaUnit, saltSchema, saltIonSchema, type Salt, type SaltIon } from './chem/salt.js';

@@ -1,0 +1,21 @@
+import { probabilityPositive, type Estimate } from '../quantity/estimate.js';
+
+/** What a formulator reads: does the salt cool the pack, heat it, or can we not tell? */
+export type Verdict = 'endothermic' | 'exothermic' | 'undetermined';
+
+/**
+ * The verdict of an enthalpy of solution: `endothermic` (cools) when the whole
+ * 95 % interval lies above zero, `exothermic` (heats) when it lies below,
+ * `undetermined` when it spans zero; and the probability that ΔsolH > 0 for
+ * a normal distribution with the estimate's value and standard uncertainty.
+ *
+ * @example
+ * ```ts
+ * const e = makeEstimate({ quantity: 'enthalpy of solution', value: 25.69, u: 0.1, unit: 'kJ/mol', basis: 'measured', method: 'table' });
+ * solutionVerdict(e).verdict; // 'endothermic'
+ * ```
+ */
+export function solutionVerdict(e: Estimate): { verdict: Verdict; probabilityEndothermic: number } {
+  const verdict: Verdict = e.low > 0 ? 'endothermic' : e.high < 0 ? 'exothermic' : 'undetermined';
+  return { verdict, probabilityEndothermic: probabilityPositive(e) };
+}
