@@ -6,6 +6,7 @@
  * @module
  */
 import type { Dataset } from '../data/dataset.js';
+import { builtinDataset } from '../data/builtin.js';
 import type { IonRecord } from '../data/schemas.js';
 import { readFormulaSyntax, unitComposition } from './formulaSyntax.js';
 
@@ -72,6 +73,6 @@ export function ionIndex(dataset: Dataset): IonIndex {
  * findIon('SO4[2-]')?.charge; // -2
  * ```
  */
-export function findIon(id: string, dataset: Dataset): IonRecord | undefined {
+export function findIon(id: string, dataset: Dataset = builtinDataset()): IonRecord | undefined {
   return ionIndex(dataset).byId.get(id);
 }

@@ -69,8 +69,8 @@ function requireFinite(x: number, what: string): void {
  * @example
  * ```ts
  * const e = makeEstimate({ quantity: 'lattice enthalpy', value: 787, u: 10, unit: 'kJ/mol', basis: 'model', method: 'kapustinskii' });
- * e.low; // 767.40036...
- * e.high; // 806.59963...
+ * e.low; // 767.40
+ * e.high; // 806.60
  * ```
  */
 export function makeEstimate(input: EstimateInput): Estimate {

@@ -21,11 +21,8 @@ export interface Term {
  * @example
  * ```ts
  * // ΔsolH(NaCl) = ΔfH(Na⁺, aq) + ΔfH(Cl⁻, aq) − ΔfH(NaCl, cr), NBS 1982 values, kJ/mol
- * exactSum([
- *   { coefficient: 1, value: -240.12 },
- *   { coefficient: 1, value: -167.159 },
- *   { coefficient: -1, value: -411.153 },
- * ]); // 3.874
+ * const terms = [{ coefficient: 1, value: -240.12 }, { coefficient: 1, value: -167.159 }, { coefficient: -1, value: -411.153 }];
+ * exactSum(terms); // 3.874
  * ```
  */
 export function exactSum(terms: readonly Term[]): number {

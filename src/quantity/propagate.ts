@@ -19,7 +19,7 @@ export function quadrature(...us: readonly number[]): number {
  *
  * @example
  * ```ts
- * linearUncertainty([{ coefficient: 2, u: 0.5 }, { coefficient: -1, u: 1 }]); // √2 ≈ 1.4142
+ * linearUncertainty([{ coefficient: 2, u: 0.5 }, { coefficient: -1, u: 1 }]); // 1.4142 (√2)
  * ```
  */
 export function linearUncertainty(terms: readonly { coefficient: number; u: number }[]): number {

@@ -1,0 +1,112 @@
+// Runs every @example in the TSDoc of src/ so that the documentation cannot
+// drift from the code. Conventions (DEVELOPERS.md, "Worked examples"):
+// - an example is one ```ts block using names exported by src/index.ts (all
+//   of them are in scope) and plain JavaScript (no type annotations);
+// - a line `expression; // expected` asserts: `expected` starts with a
+//   literal (number, 'string', true/false/undefined, [...] or {...});
+//   a number matches to the precision written (3.874 means ±0.0005),
+//   `≈ 753` means within 1 %; text after the literal is ignored.
+import { readFileSync, readdirSync, statSync } from 'node:fs';
+import { join, relative } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import * as ionheat from '../../src/index.js';
+
+const srcDir = join(import.meta.dirname, '..', '..', 'src');
+
+function sourceFiles(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const path = join(dir, name);
+    if (statSync(path).isDirectory()) return name === 'node' ? [] : sourceFiles(path);
+    return name.endsWith('.ts') ? [path] : [];
+  });
+}
+
+interface Example {
+  file: string;
+  line: number;
+  code: string[];
+}
+
+function examplesOf(file: string): Example[] {
+  const lines = readFileSync(file, 'utf8').split('\n');
+  const found: Example[] = [];
+  for (let i = 0; i < lines.length; i++) {
+    if (!/^\s*\*\s*@example/.test(lines[i]!)) continue;
+    let j = i + 1;
+    while (j < lines.length && !/^\s*\*\s*```/.test(lines[j]!)) j++;
+    const start = j + 1;
+    let k = start;
+    while (k < lines.length && !/^\s*\*\s*```/.test(lines[k]!)) k++;
+    found.push({ file, line: start + 1, code: lines.slice(start, k).map((l) => l.replace(/^\s*\* ?/, '')) });
+    i = k;
+  }
+  return found;
+}
+
+/** Splits `expr; // expected …` into its parts, or undefined when the comment asserts nothing. */
+function assertion(line: string): { expr: string; expected: string } | undefined {
+  const m = /^(.*?);\s*\/\/\s*(.+)$/.exec(line);
+  if (!m) return undefined;
+  const expected = m[2]!.trim();
+  if (!/^(≈\s*)?[-−]?\d|^'|^"|^true\b|^false\b|^undefined\b|^null\b|^\[|^\{/.test(expected)) return undefined;
+  return { expr: m[1]!, expected };
+}
+
+/** Reads the literal at the start of an expected-value comment; returns it and its tolerance. */
+function expectedValue(text: string): { value: unknown; tolerance?: number; approx?: boolean } {
+  const approx = text.startsWith('≈');
+  const t = text.replace(/^≈\s*/, '').replace(/^−/, '-');
+  const number = /^-?\d+(\.\d+)?(e[-+]?\d+)?/i.exec(t);
+  if (number) {
+    const decimals = number[1] ? number[1].length - 1 : 0;
+    return { value: Number(number[0]), tolerance: number[2] ? Math.abs(Number(number[0])) * 1e-6 : 0.5 * 10 ** -decimals, approx };
+  }
+  for (let end = t.length; end > 0; end--) {
+    const head = t.slice(0, end);
+    try {
+      // eslint-disable-next-line no-new-func
+      return { value: new Function(`return (${head});`)() };
+    } catch {
+      /* try a shorter prefix */
+    }
+  }
+  throw new Error(`cannot read the expected value "${text}"`);
+}
+
+function check(actual: unknown, expectedText: string, where: string): void {
+  const { value, tolerance, approx } = expectedValue(expectedText);
+  if (typeof value === 'number') {
+    expect(typeof actual, `${where}: expected a number`).toBe('number');
+    const limit = approx ? Math.abs(value) * 0.01 : tolerance!;
+    expect(Math.abs((actual as number) - value), `${where}: ${actual} vs ${expectedText}`).toBeLessThanOrEqual(limit + 1e-12);
+  } else {
+    expect(actual, where).toEqual(value);
+  }
+}
+
+const examples = sourceFiles(srcDir).flatMap(examplesOf);
+
+describe('worked examples in the TSDoc', () => {
+  it('exist', () => expect(examples.length).toBeGreaterThan(10));
+  for (const example of examples) {
+    const where = `${relative(srcDir, example.file)}:${example.line}`;
+    it(where, async () => {
+      let asserted = 0;
+      const body = example.code
+        .map((line, n) => {
+          const a = assertion(line);
+          if (!a) return line;
+          asserted++;
+          return `__check(${a.expr}, ${JSON.stringify(a.expected)}, ${JSON.stringify(`${where} +${n}`)});`;
+        })
+        .join('\n');
+      // The module's own exports are in scope too, so internal helpers can carry examples.
+      const own = (await import(example.file)) as Record<string, unknown>;
+      const scope: Record<string, unknown> = { ...own, ...(ionheat as Record<string, unknown>) };
+      const names = Object.keys(scope);
+      const run = new Function('__check', ...names, `return (async () => {\n${body}\n})();`);
+      await run(check, ...names.map((n) => scope[n]));
+      expect(asserted, `${where} asserts nothing`).toBeGreaterThan(0);
+    });
+  }
+});
