@@ -251,3 +251,113 @@ describe.runIf(has('solubility.json'))('solubility.json', () => {
     expect(e('KCl')).toBeLessThan(e('Na2SO4'));
   });
 });
+
+// ---------------------------------------------------------------------------
+// Heat capacities of solids and of aqueous ions
+
+const R = 8.314462618; // J/(mol·K), CODATA 2018 exact-by-definition value of the molar gas constant
+
+/** Number of atoms in a formula unit, counting parentheses and a hydrate. */
+function atomCount(formula: string): number {
+  const [core, hydrate] = formula.split('·');
+  const count = (text: string): number => {
+    let total = 0;
+    const re = /\(([^()]*(?:\([^()]*\)[^()]*)*)\)(\d*)|([A-Z][a-z]?)(\d*)/g;
+    for (const m of text.matchAll(re)) {
+      if (m[1] !== undefined) total += count(m[1]) * (m[2] ? Number(m[2]) : 1);
+      else total += m[4] ? Number(m[4]) : 1;
+    }
+    return total;
+  };
+  let n = count(core!);
+  if (hydrate) n += 3 * splitHydrate(formula).water;
+  return n;
+}
+
+describe.runIf(has('heat-capacities.json'))('heat-capacities.json', () => {
+  const records = tableSchemas['heat-capacities.json'].parse(readJson('heat-capacities.json')).records;
+  const cp = new Map(records.map((r) => [`${r.formula}|${r.phase}`, r.value]));
+
+  it('has liquid water at 75.29 J/(mol·K) (NBS tables; the figure every Kirchhoff step uses)', () => {
+    expect(cp.get('H2O|l')).toBeCloseTo(75.291, 2);
+  });
+
+  it('has the pack salts and urea as crystals', () => {
+    for (const f of ['NH4NO3', 'NH4Cl', 'KNO3', 'KCl', 'NaCl', 'CaCl2', 'MgSO4', 'Na2SO4', 'Na2CO3', 'NaCH3COO', 'CO(NH2)2']) {
+      expect(cp.has(`${f}|cr`), f).toBe(true);
+    }
+  });
+
+  it('writes every crystal formula canonically', () => {
+    for (const r of records.filter((q) => q.phase === 'cr')) expect(readSalt(r.formula), r.formula).not.toBeNull();
+  });
+
+  it('keeps every crystal below 1.15 × 3R per atom (Dulong–Petit ceiling plus the Cp − Cv excess; common practice)', () => {
+    for (const r of records.filter((q) => q.phase === 'cr')) {
+      expect(r.value, r.formula).toBeLessThan(1.15 * 3 * R * atomCount(r.formula));
+    }
+  });
+
+  it('has the alkali halides near the Dulong–Petit value 6R ≈ 50 J/(mol·K), within 45–54 (NBS tables)', () => {
+    for (const f of ['NaF', 'NaCl', 'NaBr', 'NaI', 'KF', 'KCl', 'KBr', 'KI', 'RbCl', 'CsCl']) {
+      const v = cp.get(`${f}|cr`);
+      if (v === undefined) continue;
+      expect(v, f).toBeGreaterThan(45);
+      expect(v, f).toBeLessThan(54);
+    }
+  });
+
+  it('adds roughly 30–46 J/(mol·K) per water of crystallisation over the anhydrous salt (Neumann–Kopp; common practice)', () => {
+    let pairs = 0;
+    for (const r of records.filter((q) => q.phase === 'cr' && q.formula.includes('·'))) {
+      const { anhydrous, water } = splitHydrate(r.formula);
+      const base = cp.get(`${anhydrous}|cr`);
+      if (base === undefined) continue;
+      pairs += 1;
+      const perWater = (r.value - base) / water;
+      expect(perWater, r.formula).toBeGreaterThan(30);
+      expect(perWater, r.formula).toBeLessThan(46);
+    }
+    expect(pairs).toBeGreaterThanOrEqual(5);
+  });
+});
+
+describe.runIf(has('ion-heat-capacities-aq.json'))('ion-heat-capacities-aq.json', () => {
+  const records = tableSchemas['ion-heat-capacities-aq.json'].parse(readJson('ion-heat-capacities-aq.json')).records;
+  const ion = new Map(records.map((r) => [r.ion, r.value]));
+  const crystal = has('heat-capacities.json')
+    ? new Map(tableSchemas['heat-capacities.json'].parse(readJson('heat-capacities.json')).records.filter((r) => r.phase === 'cr').map((r) => [r.formula, r.value]))
+    : new Map<string, number>();
+
+  it('uses ids of the ion list, with H+ exactly zero (conventional scale)', () => {
+    for (const r of records) {
+      expect(ionIdSchema.safeParse(r.ion).success, r.ion).toBe(true);
+      expect(ionIds.has(r.ion), r.ion).toBe(true);
+    }
+    expect(ion.get('H[+]')).toBe(0);
+  });
+
+  it('gives Cp°(NaCl, aq) = −90 and Cp°(KCl, aq) = −114.6 J/(mol·K) as sums (NBS tables, whole-electrolyte values)', () => {
+    expect(ion.get('Na[+]')! + ion.get('Cl[-]')!).toBeCloseTo(-90.0, 1);
+    expect(ion.get('K[+]')! + ion.get('Cl[-]')!).toBeCloseTo(-114.6, 1);
+  });
+
+  it('has negative Cp° for the halide, hydroxide, nitrate and sulfate ions on this scale (NBS tables; a sign slip shows here)', () => {
+    for (const id of ['F[-]', 'Cl[-]', 'Br[-]', 'I[-]', 'OH[-]', 'NO3[-]', 'SO4[2-]']) {
+      if (ion.has(id)) expect(ion.get(id)!, id).toBeLessThan(0);
+    }
+  });
+
+  it('makes ΔsolCp° = ΣνCp°(ion, aq) − Cp°(cr) negative for every salt both tables cover (common practice: dissolving an electrolyte lowers Cp)', () => {
+    let checked = 0;
+    for (const [formula, cpCr] of crystal) {
+      const salt = readSalt(formula);
+      if (!salt || salt.water > 0 || salt.parts.some(([i]) => i.charge === 0)) continue;
+      if (salt.parts.some(([i]) => !ion.has(i.id))) continue;
+      const dsol = salt.parts.reduce((s, [i, n]) => s + n * ion.get(i.id)!, 0) - cpCr;
+      expect(dsol, formula).toBeLessThan(0);
+      checked += 1;
+    }
+    expect(checked).toBeGreaterThanOrEqual(10);
+  });
+});
