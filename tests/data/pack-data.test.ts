@@ -361,3 +361,63 @@ describe.runIf(has('ion-heat-capacities-aq.json'))('ion-heat-capacities-aq.json'
     expect(checked).toBeGreaterThanOrEqual(10);
   });
 });
+
+// ---------------------------------------------------------------------------
+// Hazards
+
+describe.runIf(has('hazards.json'))('hazards.json', () => {
+  const records = tableSchemas['hazards.json'].parse(readJson('hazards.json')).records;
+  const bySubject = new Map(records.map((r) => [r.subject, r]));
+  const ionIdForm = /^[A-Za-z0-9()]{1,40}\[(?:0|[1-9]?[+-])\]$/;
+
+  it('names every subject as a canonical salt formula or an ion id of the ion list (data/ions.json when present, else the shared list)', () => {
+    for (const r of records) {
+      if (r.subject.includes('[')) {
+        expect(r.subject, r.subject).toMatch(ionIdForm);
+        expect(ionIds.has(r.subject), `${r.subject} is not in the ion list`).toBe(true);
+      } else {
+        expect(readSalt(r.subject), r.subject).not.toBeNull();
+        expect(r.subject.includes('·'), `${r.subject}: hydrates share the anhydrous entry`).toBe(false);
+      }
+    }
+  });
+
+  it('lists each class once and keeps statements short and plain', () => {
+    for (const r of records) {
+      expect(new Set(r.classes).size, r.subject).toBe(r.classes.length);
+      expect(r.statement.length, r.subject).toBeLessThan(400);
+      // CLP class codes belong in the note, not in the plain-words statement
+      expect(r.statement, r.subject).not.toMatch(/\b(?:H\d{3}|EUH\d{3}|Ox\. Sol\.|Acute Tox\.)/);
+    }
+  });
+
+  it('marks ammonium nitrate as an oxidising, restricted explosives precursor (Regulation (EU) 2019/1148, Annex I)', () => {
+    const an = bySubject.get('NH4NO3');
+    expect(an).toBeDefined();
+    expect(an!.classes).toEqual(expect.arrayContaining(['oxidizer', 'explosive-precursor', 'restricted']));
+    expect(an!.statement).toMatch(/restricted in some jurisdictions/);
+  });
+
+  it('marks the chlorates and perchlorates as oxidisers and restricted precursors, and the alkali and calcium nitrates as reportable precursors (Regulation (EU) 2019/1148, Annexes I and II)', () => {
+    for (const s of ['KClO3', 'NaClO3', 'KClO4', 'NaClO4', 'ClO3[-]', 'ClO4[-]']) {
+      expect(bySubject.get(s)?.classes, s).toEqual(expect.arrayContaining(['oxidizer', 'explosive-precursor', 'restricted']));
+    }
+    for (const s of ['KNO3', 'NaNO3', 'Ca(NO3)2']) expect(bySubject.get(s)?.classes, s).toContain('explosive-precursor');
+  });
+
+  it('has CaCl2 as an eye irritant (CLP Annex VI, Eye Irrit. 2) and the hexavalent-chromium ions as carcinogens (CLP Annex VI, Carc. 1B)', () => {
+    expect(bySubject.get('CaCl2')?.classes).toContain('irritant');
+    expect(bySubject.get('CrO4[2-]')?.classes).toContain('carcinogen');
+    expect(bySubject.get('Cr2O7[2-]')?.classes).toContain('carcinogen');
+  });
+
+  it('covers the ions whose hazard follows the ion', () => {
+    for (const s of ['CrO4[2-]', 'Cr2O7[2-]', 'CN[-]', 'Ba[2+]', 'Tl[+]', 'Cd[2+]', 'Hg[2+]', 'Pb[2+]', 'NO2[-]', 'ClO3[-]', 'ClO4[-]', 'MnO4[-]']) {
+      expect(bySubject.has(s), s).toBe(true);
+    }
+  });
+
+  it('leaves out salts with no significant hazard at pack scale (no harmonised CLP entry)', () => {
+    for (const s of ['NaCl', 'KCl', 'MgSO4', 'Na2SO4', 'CO(NH2)2', 'NaCH3COO']) expect(bySubject.has(s), s).toBe(false);
+  });
+});
