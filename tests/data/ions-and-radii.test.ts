@@ -327,3 +327,166 @@ describe.runIf(has('born-exponents.json'))('born-exponents.json', () => {
     for (const r of ions) if (r.bornCore) expect(cores.has(r.bornCore), r.id).toBe(true);
   });
 });
+
+// --- crystals, ion volumes, thermochemical radii, volume coefficients ------
+// Conventional standard atomic weights (iupac2021) of the elements these checks need.
+const ATOMIC_WEIGHT: Record<string, number> = {
+  H: 1.008, Li: 6.94, Be: 9.0122, B: 10.81, C: 12.011, N: 14.007, O: 15.999, F: 18.998, Na: 22.99, Mg: 24.305,
+  Al: 26.982, P: 30.974, S: 32.06, Cl: 35.45, K: 39.098, Ca: 40.078, Ti: 47.867, Cr: 51.996, Mn: 54.938, Fe: 55.845,
+  Co: 58.933, Ni: 58.693, Cu: 63.546, Zn: 65.38, Se: 78.971, Br: 79.904, Rb: 85.468, Sr: 87.62, Ag: 107.87, Cd: 112.41,
+  Sn: 118.71, I: 126.9, Cs: 132.91, Ba: 137.33, Hg: 200.59, Tl: 204.38, Pb: 207.2,
+};
+const AVOGADRO = 6.02214076e23; // exact (SI, common practice)
+/** Element counts of a salt formula, hydrate water included (`CaCl2·6H2O`). */
+function saltAtoms(formula: string): Record<string, number> {
+  const total: Record<string, number> = {};
+  for (const part of formula.split('·')) {
+    const m = /^(\d*)(.*)$/.exec(part)!;
+    const times = m[1] ? Number(m[1]) : 1;
+    for (const [el, n] of Object.entries(countAtoms(m[2]!))) total[el] = (total[el] ?? 0) + n * times;
+  }
+  return total;
+}
+const molarMass = (formula: string) =>
+  Object.entries(saltAtoms(formula)).reduce((s, [el, n]) => s + n * (ATOMIC_WEIGHT[el] ?? NaN), 0);
+const crystals: any[] = has('crystals.json') ? read('crystals.json').records : [];
+const crystal = (f: string) => crystals.find((r) => r.formula === f);
+/** Formula-unit volume in nm³ from the tabulated density. */
+const formulaVolume = (f: string) => molarMass(f) / (crystal(f).density * AVOGADRO) * 1e21;
+
+describe.runIf(has('crystals.json'))('crystals.json', () => {
+  const Z: Record<string, number> = { 'rock-salt': 4, 'caesium-chloride': 1, 'zinc-blende': 4, fluorite: 4, antifluorite: 4, perovskite: 1 };
+
+  it('covers at least 60 solids, the pack hydrates among them with a density (crcInorganic)', () => {
+    expect(crystals.length).toBeGreaterThanOrEqual(60);
+    for (const f of ['CaCl2·6H2O', 'MgSO4·7H2O', 'Na2SO4·10H2O', 'NaCH3COO·3H2O', 'Na2S2O3·5H2O', 'Na2CO3·10H2O', 'CuSO4·5H2O', 'NH4NO3', 'CO(NH2)2']) {
+      expect(crystal(f)?.density, f).toBeGreaterThan(0);
+    }
+  });
+
+  it('uses elements whose atomic weights are known, and sensible densities (common practice)', () => {
+    for (const r of crystals) {
+      expect(Number.isFinite(molarMass(r.formula)), r.formula).toBe(true);
+      if (r.density !== undefined) expect(r.density, r.formula).toBeGreaterThan(0.9);
+      if (r.density !== undefined) expect(r.density, r.formula).toBeLessThan(8);
+    }
+  });
+
+  it('has a lattice parameter only for cubic structure types (schema convention)', () => {
+    for (const r of crystals.filter((x) => x.latticeParameter !== undefined)) expect(Z[r.structure], r.formula).toBeDefined();
+  });
+
+  it('agrees with the X-ray density Z·M/(N_A·a³) within 6 % (wyckoff1963 against crcInorganic)', () => {
+    const checked = crystals.filter((r) => r.latticeParameter !== undefined && r.density !== undefined);
+    expect(checked.length).toBeGreaterThan(30);
+    for (const r of checked) {
+      const xray = (Z[r.structure]! * molarMass(r.formula)) / (AVOGADRO * (r.latticeParameter * 1e-8) ** 3);
+      expect(Math.abs(r.density / xray - 1), r.formula).toBeLessThan(0.06);
+    }
+    expect(crystal('NaCl').latticeParameter).toBe(5.6402);
+  });
+
+  it('makes each hydrate less dense than its anhydrous salt (common practice)', () => {
+    for (const r of crystals.filter((x) => x.formula.includes('·') && x.density !== undefined)) {
+      const dry = crystal(r.formula.split('·')[0]);
+      if (dry?.density !== undefined) expect(r.density, r.formula).toBeLessThan(dry.density);
+    }
+  });
+
+  it('matches the stoichiometry of the structure type for binary compounds (common practice)', () => {
+    const ratio: Record<string, [number, number]> = {
+      'rock-salt': [1, 1], 'caesium-chloride': [1, 1], 'zinc-blende': [1, 1], wurtzite: [1, 1], fluorite: [1, 2],
+      antifluorite: [2, 1], rutile: [1, 2], 'cadmium-iodide': [1, 2], 'cadmium-chloride': [1, 2], corundum: [2, 3],
+    };
+    for (const r of crystals.filter((x) => x.structure && ratio[x.structure])) {
+      const counts = Object.values(countAtoms(r.formula));
+      if (counts.length !== 2) continue; // NH4Cl, Mg(OH)2 and the like
+      expect(counts, r.formula).toEqual(ratio[r.structure]);
+    }
+  });
+});
+
+describe.runIf(has('ion-volumes.json') && has('crystals.json'))('ion-volumes.json', () => {
+  const volumes: any[] = has('ion-volumes.json') ? read('ion-volumes.json').records : [];
+  const V = (id: string) => volumes.find((r) => r.ion === id)?.value as number;
+
+  it('gives simple-cation volumes of 4πr³/3 with Goldschmidt radii (jenkins1999)', () => {
+    const goldschmidt: Record<string, number> = { 'Na[+]': 0.098, 'K[+]': 0.133, 'Cs[+]': 0.165, 'Ca[2+]': 0.106, 'Ba[2+]': 0.143 };
+    for (const [id, r] of Object.entries(goldschmidt)) expect(Math.abs(V(id) - (4 / 3) * Math.PI * r ** 3), id).toBeLessThan(2e-5);
+  });
+
+  it('grows down groups 1, 2 and 17 (common practice)', () => {
+    const rising = (ids: string[]) => ids.slice(1).forEach((id, i) => expect(V(id), id).toBeGreaterThan(V(ids[i]!)));
+    rising(['Li[+]', 'Na[+]', 'K[+]', 'Rb[+]', 'Cs[+]']);
+    rising(['Ca[2+]', 'Sr[2+]', 'Ba[2+]']);
+    rising(['F[-]', 'Cl[-]', 'Br[-]', 'I[-]']);
+  });
+
+  it('sums to the formula-unit volume from the density within 25 % (jenkins1999 additivity, crcInorganic densities)', () => {
+    const cases: [string, [string, number][]][] = [
+      ['NaCl', [['Na[+]', 1], ['Cl[-]', 1]]],
+      ['KBr', [['K[+]', 1], ['Br[-]', 1]]],
+      ['CsI', [['Cs[+]', 1], ['I[-]', 1]]],
+      ['KNO3', [['K[+]', 1], ['NO3[-]', 1]]],
+      ['K2SO4', [['K[+]', 2], ['SO4[2-]', 1]]],
+      ['CaCO3', [['Ca[2+]', 1], ['CO3[2-]', 1]]],
+      ['BaF2', [['Ba[2+]', 1], ['F[-]', 2]]], // fluorides of small cations (CaF2, LiF) deviate most
+      ['KClO4', [['K[+]', 1], ['ClO4[-]', 1]]],
+      ['NH4NO3', [['NH4[+]', 1], ['NO3[-]', 1]]],
+    ];
+    for (const [f, parts] of cases) {
+      const sum = parts.reduce((s, [id, n]) => s + n * V(id), 0);
+      expect(Math.abs(sum / formulaVolume(f) - 1), f).toBeLessThan(0.25);
+    }
+  });
+});
+
+describe.runIf(has('thermochemical-radii.json'))('thermochemical-radii.json', () => {
+  const radii: any[] = has('thermochemical-radii.json') ? read('thermochemical-radii.json').records : [];
+
+  it('covers only polyatomic ions, with radii between 1 and 3 Å (roobottom1999)', () => {
+    for (const r of radii) {
+      expect(ionById.get(r.ion)?.kind, r.ion).toBe('polyatomic');
+      expect(r.value, r.ion).toBeGreaterThan(1);
+      expect(r.value, r.ion).toBeLessThan(3);
+    }
+  });
+
+  it('gives NH4+ 0.136 nm (crcLattice, Jenkins and Roobottom)', () => {
+    expect(radii.find((r) => r.ion === 'NH4[+]')?.value).toBe(1.36);
+  });
+
+  it('orders the oxoanions of chlorine by size, perchlorate largest (common practice)', () => {
+    const r = (id: string) => radii.find((x) => x.ion === id)?.value as number;
+    expect(r('ClO4[-]')).toBeGreaterThan(r('ClO3[-]'));
+    expect(r('ClO4[-]')).toBeGreaterThan(r('OH[-]'));
+  });
+});
+
+describe.runIf(has('volume-coefficients.json') && has('crystals.json'))('volume-coefficients.json', () => {
+  const rows: any[] = has('volume-coefficients.json') ? read('volume-coefficients.json').records : [];
+  const coeff = (t: string) => rows.find((r) => r.chargeType === t);
+  /** U = 2I(α/V^(1/3) + β), kJ/mol. */
+  const lattice = (f: string, type: string, I: number) => 2 * I * (coeff(type).alpha / Math.cbrt(formulaVolume(f)) + coeff(type).beta);
+  const near = (value: number, reference: number, fraction: number) => Math.abs(value / reference - 1) < fraction;
+
+  it('has the 1:1, 2:1, 1:2, 2:2 and general forms (jenkins1999, glasser2000)', () => {
+    expect(rows.map((r) => r.chargeType).sort()).toEqual(['1:1', '1:2', '2:1', '2:2', 'general']);
+  });
+
+  it('reproduces CRC lattice energies from the densities (crcLattice: NaCl 786, KCl 715, CaF2 2640, K2O 2238, CaCO3 2804 kJ/mol)', () => {
+    expect(near(lattice('NaCl', '1:1', 1), 786, 0.05)).toBe(true);
+    expect(near(lattice('KCl', '1:1', 1), 715, 0.05)).toBe(true);
+    expect(near(lattice('CaF2', '2:1', 3), 2640, 0.05)).toBe(true);
+    expect(near(lattice('K2O', '1:2', 3), 2238, 0.05)).toBe(true);
+    expect(near(lattice('CaCO3', '2:2', 4), 2804, 0.08)).toBe(true);
+    expect(near(lattice('NaCl', 'general', 1), 786, 0.1)).toBe(true);
+  });
+
+  it("gives Al2O3 near its CRC lattice energy with Glasser's form, A = 121.39 kJ/mol·nm (glasser1995; crcLattice 15916 kJ/mol)", () => {
+    const I = 15; // ½(2·3² + 3·2²)
+    const U = 121.39 * I * Math.cbrt((2 * I) / formulaVolume('Al2O3'));
+    expect(near(U, 15916, 0.05)).toBe(true);
+    expect(read('volume-coefficients.json').description).toContain('121.39');
+  });
+});
