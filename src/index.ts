@@ -48,3 +48,5 @@ export { thermalElectronEnthalpy } from './cycle/thermalElectronEnthalpy.js';
 export { ionText } from './cycle/ionText.js';
 export type { CycleStep, CycleStepKind } from './cycle/cycleStep.js';
 export type { IonShape } from './lattice/latticeIons.js';
+export { ewaldMadelung, erfc, type PointChargeCell, type EwaldOptions, type MadelungResult, type Vec3 } from './lattice/ewaldMadelung.js';
+export { idealCell, idealCellTypes } from './lattice/idealCell.js';
