@@ -50,3 +50,6 @@ export type { CycleStep, CycleStepKind } from './cycle/cycleStep.js';
 export type { IonShape } from './lattice/latticeIons.js';
 export { ewaldMadelung, erfc, type PointChargeCell, type EwaldOptions, type MadelungResult, type Vec3 } from './lattice/ewaldMadelung.js';
 export { idealCell, idealCellTypes } from './lattice/idealCell.js';
+export { bornHaberCycle, cycleUnknowns, type BornHaberCycle, type BornHaberOptions, type CycleUnknown, type KnownValue } from './cycle/bornHaberCycle.js';
+export { elementSteps, type ElementSteps } from './cycle/gaseousIon.js';
+export { bestLatticeEstimate } from './lattice/bestLatticeEstimate.js';
