@@ -53,3 +53,4 @@ export { idealCell, idealCellTypes } from './lattice/idealCell.js';
 export { bornHaberCycle, cycleUnknowns, type BornHaberCycle, type BornHaberOptions, type CycleUnknown, type KnownValue } from './cycle/bornHaberCycle.js';
 export { elementSteps, type ElementSteps } from './cycle/gaseousIon.js';
 export { bestLatticeEstimate } from './lattice/bestLatticeEstimate.js';
+export { cycleDiagram, type CycleDiagramOptions } from './render/cycleDiagram.js';
