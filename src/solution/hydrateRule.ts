@@ -112,7 +112,7 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
  *
  * @example
  * ```ts
- * hydrateRuleScatter().perWater; // ≈ 7.6 kJ/mol per water (27 NBS pairs)
+ * hydrateRuleScatter().perWater; // ≈ 7.5 kJ/mol per water (27 NBS pairs)
  * ```
  */
 export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, dataset: Dataset = builtinDataset()): HydrateRuleScatter {
