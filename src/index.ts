@@ -31,7 +31,7 @@ export { measuredSolutionEnthalpy } from './solution/measuredSolution.js';
 export { solutionEnthalpyFromCycle } from './solution/cycleSolution.js';
 export { chargeType, ionsPerFormulaUnit, saltSchema, saltIonSchema, type Salt, type SaltIon } from './chem/salt.js';
 export { gaseousIonFormationEnthalpy } from './hydration/gaseousIonFormation.js';
-export { ionHydrationEnthalpy, tabulatedHydrationTerm, protonHydration, type HydrationScale, type HydrationTerm } from './hydration/ionHydration.js';
+export { ionHydrationEnthalpy, tabulatedHydrationTerm, protonHydration, type HydrationScale, type HydrationTerm, type ProtonScale } from './hydration/ionHydration.js';
 export { bornHydrationEnthalpy, bornCalibration, bornRadius, bornEnthalpyFactor, LPS_OFFSETS, type BornCalibration, type BornClass, type BornRadius } from './hydration/bornHydration.js';
 export { saltHydrationEnthalpy, saltHydrationTerms, type SaltHydrationOptions } from './hydration/saltHydration.js';
 export { hydrateFromParent, hydrateRuleScatter, WATER_OF_CRYSTALLIZATION_ENTHALPY, type HydrateRuleInput, type HydrateRuleScatter } from './solution/hydrateRule.js';

@@ -41,7 +41,7 @@ export interface HydrationTerm {
   notes: string[];
 }
 
-interface ProtonScale {
+export interface ProtonScale {
   /** ΔhydH°abs(H⁺), kJ/mol, and its standard uncertainty. */
   value: number;
   u: number;

@@ -90,6 +90,7 @@ export function typicalSolutionHeatCapacity(dataset: Dataset = builtinDataset())
       const cp = solutionHeatCapacity(salt, dataset);
       if (cp) values.push(cp.value);
     }
+    values.sort((a, b) => a - b); // a sum independent of table order
     const rms = Math.sqrt(values.reduce((s, v) => s + v * v, 0) / Math.max(1, values.length));
     return { rms, salts: values.length };
   });
