@@ -36,5 +36,5 @@ export { bornHydrationEnthalpy, bornCalibration, bornRadius, bornEnthalpyFactor,
 export { saltHydrationEnthalpy, saltHydrationTerms, type SaltHydrationOptions } from './hydration/saltHydration.js';
 export { hydrateFromParent, hydrateRuleScatter, WATER_OF_CRYSTALLIZATION_ENTHALPY, type HydrateRuleInput, type HydrateRuleScatter } from './solution/hydrateRule.js';
 export { solutionHeatCapacity, kirchhoffCorrection, typicalSolutionHeatCapacity, KIRCHHOFF_RANGE_C } from './solution/solutionHeatCapacity.js';
-export { heatPerGramOfSalt, saturatedFill, solubilityAt25, type SaturatedFill, type Solubility25 } from './solution/heatPerGram.js';
+export { heatPerGramOfSalt, heatPerGramOfFill, saturatedFill, solubilityAt25, type SaturatedFill, type Solubility25 } from './solution/heatPerGram.js';
 export { widenEstimate } from './solution/widenEstimate.js';

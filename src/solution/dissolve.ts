@@ -15,7 +15,7 @@ import { saltHydrationEnthalpy } from '../hydration/saltHydration.js';
 import { measuredSolutionEnthalpy } from './measuredSolution.js';
 import { solutionEnthalpyFromCycle } from './cycleSolution.js';
 import { hydrateFromParent, hydrateRuleScatter, saltFormIndex } from './hydrateRule.js';
-import { heatPerGramOfSalt, saturatedFill } from './heatPerGram.js';
+import { heatPerGramOfFill, heatPerGramOfSalt, saturatedFill, type SaturatedFill } from './heatPerGram.js';
 import { checkKirchhoffTemperature, kirchhoffCorrection, solutionHeatCapacity, TABLE_TEMPERATURE_C, typicalSolutionHeatCapacity } from './solutionHeatCapacity.js';
 import { solutionVerdict, type Verdict } from './verdict.js';
 
@@ -70,6 +70,17 @@ function waterFormation(dataset: Dataset): number | undefined {
   return dataset.memo('solution.waterFormation', () => saltRecords('compound-formation.json', { formula: WATER }, dataset).find((r) => r.phase === 'l')?.value);
 }
 
+/** Parsed salts of the table formulas, built once per dataset. */
+function tableSalt(formula: string, dataset: Dataset): Salt {
+  const cache = dataset.memo('solution.tableSalts', () => new Map<string, Salt>());
+  let salt = cache.get(formula);
+  if (!salt) {
+    salt = parseSalt(formula, dataset);
+    cache.set(formula, salt);
+  }
+  return salt;
+}
+
 /**
  * The nearest other form (anhydrous or another hydrate) of the salt with a
  * measured or cycle value, for the difference rule; undefined if none.
@@ -82,14 +93,55 @@ function ruleEstimate(salt: Salt, hide: boolean, dataset: Dataset): Estimate | u
   for (const form of forms) {
     if (form.formula === salt.formula) continue;
     if (chosen && Math.abs(form.water - salt.water) >= Math.abs(chosen.water - salt.water)) continue;
-    const parent = parseSalt(form.formula, dataset);
-    const estimate = measuredSolutionEnthalpy(parent, dataset) ?? solutionEnthalpyFromCycle(parent, dataset);
+    const parent = profileOf(tableSalt(form.formula, dataset), dataset);
+    const estimate = parent.measured ?? parent.cycle;
     if (estimate) chosen = { formula: form.formula, water: form.water, estimate };
   }
   if (!chosen) return undefined;
   const scatter = hydrateRuleScatter(hide ? { excludeFormula: salt.formula } : {}, dataset);
-  return hydrateFromParent(chosen.estimate, { parentFormula: chosen.formula, parentWater: chosen.water, water: salt.water, waterFormation: hw, scatter: scatter.perWater });
+  return hydrateFromParent(chosen.estimate, { parentFormula: chosen.formula, parentWater: chosen.water, water: salt.water, waterFormation: hw, scatter: scatter.perSqrtWater });
 }
+
+/**
+ * What dissolve needs of a salt that does not depend on the options, kept
+ * per dataset and salt (the tables never change within a dataset). Results
+ * get copies, so a caller cannot change what the next caller sees.
+ */
+interface SaltProfile {
+  measured: Estimate | undefined;
+  cycle: Estimate | undefined;
+  /** The difference rule from the nearest other form, with all pairs / without the salt's own pairs. */
+  rule: { open?: Estimate | undefined; hidden?: Estimate | undefined };
+  hydration: { absolute?: Estimate; conventional?: Estimate } | undefined;
+  heatCapacity: Estimate | undefined;
+  fill: SaturatedFill | undefined;
+}
+
+function profileOf(salt: Salt, dataset: Dataset): SaltProfile {
+  const cache = dataset.memo('solution.profiles', () => new Map<string, SaltProfile>());
+  let profile = cache.get(salt.formula);
+  if (!profile) {
+    const ionic = salt.kind === 'ionic';
+    profile = {
+      measured: measuredSolutionEnthalpy(salt, dataset),
+      cycle: solutionEnthalpyFromCycle(salt, dataset),
+      rule: {},
+      hydration: ionic ? { absolute: saltHydrationEnthalpy(salt, { scale: 'absolute' }, dataset), conventional: saltHydrationEnthalpy(salt, { scale: 'conventional' }, dataset) } : undefined,
+      heatCapacity: solutionHeatCapacity(salt, dataset),
+      fill: saturatedFill(salt, dataset),
+    };
+    cache.set(salt.formula, profile);
+  }
+  return profile;
+}
+
+function ruleOf(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Dataset): Estimate | undefined {
+  const key = hide ? 'hidden' : 'open';
+  if (!(key in profile.rule)) profile.rule[key] = salt.kind === 'ionic' ? ruleEstimate(salt, hide, dataset) : undefined;
+  return profile.rule[key];
+}
+
+const copy = (e: Estimate): Estimate => ({ ...e, sources: [...e.sources], notes: [...e.notes] });
 
 /**
  * The enthalpy of solution at infinite dilution of a salt, on every basis
@@ -128,19 +180,15 @@ export function dissolve(formula: string | Salt, options: DissolveOptions = {}, 
   const notes: string[] = [];
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
 
+  const profile = profileOf(salt, dataset);
   let estimates: Estimate[] = [];
-  const measured = hide ? undefined : measuredSolutionEnthalpy(salt, dataset);
-  if (measured) estimates.push(measured);
-  const cycle = solutionEnthalpyFromCycle(salt, dataset, { hideCrystal: hide });
-  if (cycle) estimates.push(cycle);
-  if (salt.kind === 'ionic') {
-    const rule = ruleEstimate(salt, hide, dataset);
-    if (rule) estimates.push(rule);
-  } else {
-    notes.push('a molecular solute: no lattice model applies, so only measured values (or formation enthalpies) are used');
-  }
+  if (profile.measured && !hide) estimates.push(copy(profile.measured));
+  if (profile.cycle && !hide) estimates.push(copy(profile.cycle));
+  const rule = ruleOf(salt, profile, hide, dataset);
+  if (rule) estimates.push(copy(rule));
+  if (salt.kind !== 'ionic') notes.push('a molecular solute: no lattice model applies, so only measured values (or formation enthalpies) are used');
 
-  const heatCapacity = solutionHeatCapacity(salt, dataset);
+  const heatCapacity = profile.heatCapacity;
   if (celsius !== TABLE_TEMPERATURE_C) {
     const typical = typicalSolutionHeatCapacity(dataset).rms;
     estimates = estimates.map((e) => kirchhoffCorrection(e, celsius, heatCapacity, typical));
@@ -155,20 +203,19 @@ export function dissolve(formula: string | Salt, options: DissolveOptions = {}, 
   }
   if (celsius !== TABLE_TEMPERATURE_C && !heatCapacity) notes.push(`no heat capacity of solution for ${salt.formula}: values are those at 25 °C with a widened interval`);
 
-  const fill = saturatedFill(best, salt, dataset);
-  const hydration =
-    salt.kind === 'ionic'
-      ? { absolute: saltHydrationEnthalpy(salt, { scale: 'absolute' }, dataset), conventional: saltHydrationEnthalpy(salt, { scale: 'conventional' }, dataset) }
-      : undefined;
+  const fill = profile.fill ? heatPerGramOfFill(best, profile.fill) : undefined;
+  const hydration = profile.hydration
+    ? { ...(profile.hydration.absolute ? { absolute: copy(profile.hydration.absolute) } : {}), ...(profile.hydration.conventional ? { conventional: copy(profile.hydration.conventional) } : {}) }
+    : undefined;
   return {
     formula: salt.formula,
     salt,
     best,
     estimates,
     ...solutionVerdict(best),
-    perGram: { salt: heatPerGramOfSalt(best, salt), ...(fill ? { saturatedFill: fill.heat } : {}) },
+    perGram: { salt: heatPerGramOfSalt(best, salt), ...(fill ? { saturatedFill: fill } : {}) },
     ...(hydration ? { hydration } : {}),
-    temperature: { celsius, ...(heatCapacity ? { heatCapacityOfSolution: heatCapacity } : {}) },
+    temperature: { celsius, ...(heatCapacity ? { heatCapacityOfSolution: copy(heatCapacity) } : {}) },
     notes,
   };
 }

@@ -69,40 +69,40 @@ export function solubilityAt25(salt: Salt, dataset: Dataset = builtinDataset()):
   return { value: below.value + f * (above.value - below.value), solidPhase: phaseOf(below), source: record.source, fromMemory: record.fromMemory, how: 'interpolated' };
 }
 
-/** A saturated fill: per mole of salt, how much water it takes and the heat per gram of the whole. */
+/** A saturated fill at 25 °C: per mole of salt, how much water it takes. */
 export interface SaturatedFill {
-  /** Heat absorbed per gram of fill (salt + added water), J/g. */
-  heat: Estimate;
+  /** Grams of fill (salt as dissolved + added water) per mole of salt. */
+  massPerMole: number;
   /** Grams of water to add per gram of salt as dissolved. */
   waterPerGramSalt: number;
   /** Mass fraction of the salt (as dissolved) in the fill. */
   saltMassFraction: number;
   /** The solubility used, g anhydrous per 100 g water at 25 °C. */
   solubility: number;
+  /** Source key of the solubility record. */
+  source: string;
+  /** What a reader should know about the fill. */
+  notes: string[];
 }
 
 /**
- * The heat of solution per gram of a saturated fill at 25 °C: the salt as
- * dissolved plus just enough water to dissolve it,
+ * The saturated fill of a salt at 25 °C: the salt as dissolved plus just
+ * enough water to dissolve it,
  *
- *   m_w = max(0, M_anh·100/S − n_w·M_H₂O) per mole,  q = ΔsolH°·1000/(M + m_w)
+ *   m_w = max(0, M_anh·100/S − n_w·M_H₂O) per mole of salt,
  *
  * with S the solubility (g anhydrous per 100 g water) and a hydrate's own
- * water counted as solvent. The enthalpy is the one at infinite dilution;
- * the integral heat of solution up to saturation differs from it by the heat
- * of dilution, which the result notes.
+ * water counted as solvent.
  *
- * @param e - the enthalpy of solution of the salt as dissolved, kJ/mol
  * @returns undefined where there are no solubility data
  * @see CRC Handbook of Chemistry and Physics, 'Aqueous solubility of inorganic compounds at various temperatures' (via solubility.json)
  * @example
  * ```ts
- * const e = makeEstimate({ quantity: 'enthalpy of solution', value: 25.69, u: 0.2, unit: 'kJ/mol', basis: 'measured', method: 'table' });
- * // NH4NO3, 212.5 g per 100 g water: 80.04 g salt + 37.67 g water per mole
- * saturatedFill(e, parseSalt('NH4NO3'))?.heat.value; // ≈ 218.3 J/g
+ * // NH4NO3, 212.5 g per 100 g water at 25 °C: 80.04 g salt + 37.67 g water per mole
+ * saturatedFill(parseSalt('NH4NO3'))?.massPerMole; // ≈ 117.71
  * ```
  */
-export function saturatedFill(e: Estimate, salt: Salt, dataset: Dataset = builtinDataset()): SaturatedFill | undefined {
+export function saturatedFill(salt: Salt, dataset: Dataset = builtinDataset()): SaturatedFill | undefined {
   const s = solubilityAt25(salt, dataset);
   if (!s || !(s.value > 0)) return undefined;
   const mWater = molarMass({ H: 2, O: 1 }, dataset);
@@ -110,9 +110,32 @@ export function saturatedFill(e: Estimate, salt: Salt, dataset: Dataset = builti
   const anhydrousMass = salt.molarMass - ownWater;
   const added = Math.max(0, (anhydrousMass * 100) / s.value - ownWater);
   const fill = salt.molarMass + added;
-  const heat = scaled(e, 1000 / fill, 'heat of solution per gram of saturated fill', [
-    `fill = salt + ${(added / salt.molarMass).toFixed(3)} g water per g salt, saturated at 25 °C (solubility ${s.value.toFixed(2)} g ${salt.anhydrous} per 100 g water, ${s.how}${s.fromMemory ? ', from memory' : ''})`,
-    'uses the enthalpy of solution at infinite dilution; the heat of dissolving to saturation differs by the heat of dilution',
-  ]);
-  return { heat: makeEstimate({ ...heat, sources: [...heat.sources, s.source] }), waterPerGramSalt: added / salt.molarMass, saltMassFraction: salt.molarMass / fill, solubility: s.value };
+  return {
+    massPerMole: fill,
+    waterPerGramSalt: added / salt.molarMass,
+    saltMassFraction: salt.molarMass / fill,
+    solubility: s.value,
+    source: s.source,
+    notes: [
+      `fill = salt + ${(added / salt.molarMass).toFixed(3)} g water per g salt, saturated at 25 °C (solubility ${s.value.toFixed(2)} g ${salt.anhydrous} per 100 g water, ${s.how}${s.fromMemory ? ', from memory' : ''})`,
+      'uses the enthalpy of solution at infinite dilution; the heat of dissolving to saturation differs by the heat of dilution',
+    ],
+  };
+}
+
+/**
+ * The heat of solution per gram of a saturated fill, J/g:
+ * q = ΔsolH°·1000/(M + m_w). Positive = the fill cools.
+ *
+ * @param e - the enthalpy of solution of the salt as dissolved, kJ/mol
+ * @param fill - the fill, from {@link saturatedFill}
+ * @example
+ * ```ts
+ * const e = makeEstimate({ quantity: 'enthalpy of solution', value: 25.69, u: 0.2, unit: 'kJ/mol', basis: 'measured', method: 'table' });
+ * heatPerGramOfFill(e, saturatedFill(parseSalt('NH4NO3'))).value; // ≈ 218.3 J/g
+ * ```
+ */
+export function heatPerGramOfFill(e: Estimate, fill: SaturatedFill): Estimate {
+  const heat = scaled(e, 1000 / fill.massPerMole, 'heat of solution per gram of saturated fill', fill.notes);
+  return { ...heat, sources: [...new Set([...heat.sources, fill.source])].sort() };
 }

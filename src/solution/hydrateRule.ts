@@ -9,7 +9,7 @@
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
-import { saltRecordIndex, WATER } from '../chem/saltRecords.js';
+import { saltRecordIndex, saltRecords, WATER } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
 import { isIonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
@@ -30,13 +30,17 @@ interface RulePair {
   parent: string;
   /** Waters the hydrate has beyond its parent. */
   waters: number;
-  /** (ΔfH°(hydrate) − ΔfH°(parent))/waters − θ, kJ/mol per water. */
-  missPerWater: number;
+  /** ΔfH°(hydrate) − ΔfH°(parent) − waters·θ, kJ/mol: how far the rule misses for this pair. */
+  miss: number;
 }
 
 export interface HydrateRuleScatter {
-  /** Standard uncertainty of the rule per water of crystallization, kJ/mol: the RMS miss of the tabulated pairs. */
-  perWater: number;
+  /**
+   * Standard uncertainty of the rule, kJ/mol, for one water of
+   * crystallization; for Δn waters it is this times √Δn. The RMS over the
+   * tabulated pairs of miss/√Δn.
+   */
+  perSqrtWater: number;
   /** Pairs the scatter was measured on. */
   pairs: number;
 }
@@ -51,7 +55,7 @@ export interface HydrateRuleInput {
   water: number;
   /** ΔfH°(H₂O, l), kJ/mol. */
   waterFormation: number;
-  /** The rule's standard uncertainty per water, kJ/mol. */
+  /** The rule's standard uncertainty for one water, kJ/mol ({@link HydrateRuleScatter.perSqrtWater}). */
   scatter: number;
 }
 
@@ -88,15 +92,28 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
       const cr = records.find((r) => r.phase === 'cr');
       if (cr) crystal.set(formula, cr.value);
     }
+    const solution = new Map<string, number>();
+    for (const [formula, records] of saltRecordIndex('solution-enthalpies.json', dataset)) if (records[0]) solution.set(formula, records[0].value);
+    const waterFormation = saltRecords('compound-formation.json', { formula: WATER }, dataset).find((r) => r.phase === 'l')?.value;
     const pairs: RulePair[] = [];
     for (const forms of saltFormIndex(dataset).values()) {
-      const withCrystal = forms.filter((f) => crystal.has(f.formula));
-      // Each hydrate against the form with the fewest waters below it (the anhydrous salt where tabulated).
-      for (const h of withCrystal) {
-        const parent = withCrystal.find((p) => p.water < h.water);
-        if (!parent) continue;
-        const waters = h.water - parent.water;
-        pairs.push({ hydrate: h.formula, parent: parent.formula, waters, missPerWater: (crystal.get(h.formula)! - crystal.get(parent.formula)!) / waters - WATER_OF_CRYSTALLIZATION_ENTHALPY });
+      // Each hydrate against the form with the fewest waters below it (the anhydrous salt where tabulated):
+      // from crystal formation enthalpies where both are tabulated, else from measured enthalpies of solution.
+      for (const h of forms) {
+        if (h.water === 0) continue;
+        const byCrystal = crystal.has(h.formula) ? forms.find((p) => p.water < h.water && crystal.has(p.formula)) : undefined;
+        if (byCrystal) {
+          const waters = h.water - byCrystal.water;
+          pairs.push({ hydrate: h.formula, parent: byCrystal.formula, waters, miss: crystal.get(h.formula)! - crystal.get(byCrystal.formula)! - waters * WATER_OF_CRYSTALLIZATION_ENTHALPY });
+          continue;
+        }
+        const bySolution = solution.has(h.formula) && waterFormation !== undefined ? forms.find((p) => p.water < h.water && solution.has(p.formula)) : undefined;
+        if (bySolution) {
+          const waters = h.water - bySolution.water;
+          // ΔsolH(n) = ΔsolH(n′) + Δn·(ΔfH°(H2O, l) − θ) − miss
+          const miss = solution.get(bySolution.formula)! + waters * (waterFormation! - WATER_OF_CRYSTALLIZATION_ENTHALPY) - solution.get(h.formula)!;
+          pairs.push({ hydrate: h.formula, parent: bySolution.formula, waters, miss });
+        }
       }
     }
     return pairs.sort((a, b) => (a.hydrate < b.hydrate ? -1 : a.hydrate > b.hydrate ? 1 : 0));
@@ -104,21 +121,26 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
 }
 
 /**
- * The scatter of the difference rule in this dataset: the RMS, over every
- * hydrate whose crystal formation enthalpy is tabulated together with that
- * of a lower hydrate or the anhydrous salt, of
- * (ΔfH°(hydrate) − ΔfH°(parent))/n − θ. `excludeFormula` leaves out the
- * pairs involving one salt (its own values are hidden in leave-one-out).
+ * The scatter of the difference rule in this dataset. For every hydrate
+ * whose crystal formation enthalpy is tabulated together with that of a
+ * lower hydrate or the anhydrous salt, the miss ΔfH°(hydrate) −
+ * ΔfH°(parent) − Δn·θ; for hydrates without one, the same miss read from
+ * the measured enthalpies of solution of hydrate and parent. The misses grow
+ * more slowly than Δn (the first water of a strongly hydrated salt such as
+ * KOH or LiI misses by 20–30 kJ/mol on its own), so the scatter is the RMS of
+ * miss/√Δn and the rule's uncertainty for Δn waters is that times √Δn.
+ * `excludeFormula` leaves out the pairs involving one salt (its own values
+ * are hidden in leave-one-out).
  *
  * @example
  * ```ts
- * hydrateRuleScatter().perWater; // ≈ 7.5 kJ/mol per water (27 NBS pairs)
+ * hydrateRuleScatter().perSqrtWater; // ≈ 16.6 kJ/mol (41 pairs of the NBS and CRC tables)
  * ```
  */
 export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, dataset: Dataset = builtinDataset()): HydrateRuleScatter {
   const pairs = rulePairs(dataset).filter((p) => p.hydrate !== options.excludeFormula && p.parent !== options.excludeFormula);
-  const rms = Math.sqrt(pairs.reduce((s, p) => s + p.missPerWater ** 2, 0) / Math.max(1, pairs.length));
-  return { perWater: rms, pairs: pairs.length };
+  const rms = Math.sqrt(pairs.reduce((s, p) => s + p.miss ** 2 / p.waters, 0) / Math.max(1, pairs.length));
+  return { perSqrtWater: rms, pairs: pairs.length };
 }
 
 /**
@@ -129,8 +151,8 @@ export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, da
  *   ⇒ ΔsolH°(n) = ΔsolH°(n′) + (n − n′)·(ΔfH°(H₂O, l) − θ)
  *
  * with θ = {@link WATER_OF_CRYSTALLIZATION_ENTHALPY}. The standard
- * uncertainty adds |n − n′| times the rule's scatter per water (from the
- * tabulated pairs) to the parent's. The basis is the parent's, except that
+ * uncertainty adds √|n − n′| times the rule's scatter (see
+ * {@link hydrateRuleScatter}) to the parent's in quadrature. The basis is the parent's, except that
  * a measured parent gives `cycle` (the hydrate's value is not measured).
  *
  * @param parent - the parent's enthalpy of solution, kJ/mol
@@ -140,14 +162,14 @@ export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, da
  * ```ts
  * const parent = makeEstimate({ quantity: 'enthalpy of solution', value: -82.8, u: 1, unit: 'kJ/mol', basis: 'cycle', method: 'formation-enthalpies' });
  * // CaCl2 → CaCl2·6H2O: −82.8 + 6·(−285.83 + 298) = −9.8 kJ/mol
- * hydrateFromParent(parent, { parentFormula: 'CaCl2', parentWater: 0, water: 6, waterFormation: -285.83, scatter: 7.6 }).value; // ≈ -9.78
+ * hydrateFromParent(parent, { parentFormula: 'CaCl2', parentWater: 0, water: 6, waterFormation: -285.83, scatter: 16.6 }).value; // ≈ -9.78
  * ```
  */
 export function hydrateFromParent(parent: Estimate, rule: HydrateRuleInput): Estimate {
   const { parentFormula, parentWater, water, waterFormation, scatter } = rule;
   const dn = water - parentWater;
   const shift = dn * (waterFormation - WATER_OF_CRYSTALLIZATION_ENTHALPY);
-  const uRule = Math.abs(dn) * scatter;
+  const uRule = Math.sqrt(Math.abs(dn)) * scatter;
   const shifted = widenEstimate(parent, uRule, shift);
   return makeEstimate({
     ...shifted,
@@ -155,7 +177,7 @@ export function hydrateFromParent(parent: Estimate, rule: HydrateRuleInput): Est
     method: parent.basis === 'measured' || parent.basis === 'cycle' ? 'difference-rule' : `${parent.method}+difference-rule`,
     sources: [...parent.sources, 'jenkinsGlasser2004'],
     notes: [
-      `hydrate's crystal enthalpy from ${parentFormula} (${parent.basis}) by the difference rule: ${dn > 0 ? '+' : ''}${dn} × θ = ${WATER_OF_CRYSTALLIZATION_ENTHALPY} kJ/mol per water of crystallization (Jenkins & Glasser 2004, from memory), scatter ${scatter.toFixed(1)} kJ/mol per water from the tabulated hydrate pairs`,
+      `hydrate's crystal enthalpy from ${parentFormula} (${parent.basis}) by the difference rule: ${dn > 0 ? '+' : ''}${dn} × θ = ${WATER_OF_CRYSTALLIZATION_ENTHALPY} kJ/mol per water of crystallization (Jenkins & Glasser 2004, from memory), scatter ${scatter.toFixed(1)} kJ/mol × √${Math.abs(dn)} from the tabulated hydrate pairs`,
       ...parent.notes,
     ],
   });
