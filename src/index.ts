@@ -81,7 +81,7 @@ export { enumerate, type EnumerateFilters } from './screen/enumerate.js';
 export { compileSpec, type CompiledSpec, type CompileSpecOptions } from './screen/compileSpec.js';
 export { parseSpec, type SpecNode } from './screen/specParse.js';
 export { rankRows, compareRanked } from './screen/rankRows.js';
-export { saltHazards, type SaltHazards } from './screen/saltHazards.js';
+export { saltHazardSummary, type SaltHazards } from './screen/saltHazardSummary.js';
 export { costPerKJ } from './screen/costPerKJ.js';
 export { screenObjective, higherIsBetter, suitabilityOf } from './screen/screenObjective.js';
 export { parseFillSpec } from './screen/parseFillSpec.js';

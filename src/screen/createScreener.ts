@@ -19,7 +19,7 @@ import { dissolve, type DissolveResult } from '../solution/dissolve.js';
 import { readCandidate, type CandidateInput, type CandidateLike } from './candidate.js';
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
 import { costPerKJ } from './costPerKJ.js';
-import { saltHazards, type SaltHazards } from './saltHazards.js';
+import { saltHazardSummary, type SaltHazards } from './saltHazardSummary.js';
 import { screenObjective, suitabilityOf } from './screenObjective.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
 import { screenSources } from './screenSources.js';
@@ -199,7 +199,7 @@ export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}
       salt ??= parseSalt(input.formula, dataset);
       const data = own ? rowDataset(input, salt) : dataset;
       const result = dissolve(salt, { excludeMeasured }, data);
-      computed = deepFreeze({ ok: true, salt, result, hazards: saltHazards(salt, dataset), ownValues: own });
+      computed = deepFreeze({ ok: true, salt, result, hazards: saltHazardSummary(salt, dataset), ownValues: own });
     } catch (e) {
       if (!isIonheatError(e)) throw e;
       computed = { ok: false, ...(salt ? { salt } : {}), error: e };
