@@ -38,7 +38,7 @@ export { hydrateFromParent, hydrateRuleScatter, WATER_OF_CRYSTALLIZATION_ENTHALP
 export { solutionHeatCapacity, kirchhoffCorrection, typicalSolutionHeatCapacity, KIRCHHOFF_RANGE_C } from './solution/solutionHeatCapacity.js';
 export { heatPerGramOfSalt, heatPerGramOfFill, saturatedFill, solubilityAt25, type SaturatedFill, type Solubility25 } from './solution/heatPerGram.js';
 export { widenEstimate } from './solution/widenEstimate.js';
-export { latticeEstimate, latticeEstimates, latticeMethods, type LatticeMethod, type LatticeEstimateOptions } from './lattice/latticeEstimate.js';
+export { latticeEstimate, tryLatticeEstimate, latticeEstimates, latticeMethods, type LatticeMethod, type LatticeEstimateOptions } from './lattice/latticeEstimate.js';
 export { latticeModels, latticeModelPoint, GLASSER_THRESHOLD, type LatticeModel, type LatticeModelOptions, type ModelPoint } from './lattice/latticeModel.js';
 export { latticeCalibration, calibrationStats, calibrationGroups, saltCationCore, saltIonKind, calibrationChargeType, MIN_GROUP, type CationCore, type ModelCalibration, type Sums, type LatticeCalibration, type CalibrationResidual, type CalibrationStats, type SaltIonKind } from './lattice/latticeCalibration.js';
 export { kapustinskii, KAPUSTINSKII_CONSTANT, KAPUSTINSKII_RHO } from './lattice/kapustinskii.js';
