@@ -12,10 +12,11 @@ import type { Command } from './command.js';
 import { demoCommand } from './demoCommand.js';
 import { processIO, type CliIO } from './io.js';
 import { saltCommand } from './saltCommand.js';
+import { packCommand } from './packCommand.js';
 import { version as PACKAGE_VERSION } from '../../../package.json';
 
 /** Every command, in the order `ionheat help` lists them. */
-export const commands: readonly Command[] = [demoCommand, saltCommand];
+export const commands: readonly Command[] = [demoCommand, saltCommand, packCommand];
 
 function overview(): string {
   const width = Math.max(...commands.map((c) => c.name.length));
