@@ -311,7 +311,7 @@ export const packCommand: Command = {
     const withCurve = values.curve === true || values['curve-svg'] !== undefined;
     try {
       result = packFinalTemperature(fill, packOptions, dataset);
-      curve = packRatioCurve(fill, { ...(target !== undefined ? { targetC: target } : {}), ...(points !== undefined ? { points } : {}), band: withCurve }, packOptions, dataset);
+      curve = packRatioCurve(fill, { ...(target !== undefined ? { targetC: target } : {}), points: points ?? (withCurve ? 200 : 40), band: withCurve }, packOptions, dataset);
       course = wantsCourse ? packTimeCourse(fill, courseOptions, packOptions, dataset) : undefined;
     } catch (e) {
       const mapped = asOptionError(e);
