@@ -175,6 +175,8 @@ export const solubilityPointSchema = z.strictObject({
   t: finite,
   /** Grams of anhydrous salt per 100 g of water at saturation. */
   value: nonNegative,
+  /** The equilibrium solid at this point where it is not the record's `solidPhase` (past a transition temperature); the anhydrous salt is written as the record's `formula`. */
+  solidPhase: formulaTextSchema.optional(),
 });
 export const solubilityRecordSchema = z.strictObject({
   /** The salt, anhydrous, whose mass the values count. */
@@ -183,9 +185,15 @@ export const solubilityRecordSchema = z.strictObject({
   solidPhase: formulaTextSchema.optional(),
   unit: z.literal('g/100 g H2O'),
   points: z.array(solubilityPointSchema).min(2),
-  /** Salt–water eutectic, where the source gives one. */
+  /** Salt–water eutectic, where the source gives one. Its own `source`, `fromMemory` and `note`, where given, replace the record's for the eutectic alone. */
   eutectic: z
-    .strictObject({ temperature: finite, massFraction: finite.refine((v) => v > 0 && v < 1, 'a mass fraction lies between 0 and 1') })
+    .strictObject({
+      temperature: finite,
+      massFraction: finite.refine((v) => v > 0 && v < 1, 'a mass fraction lies between 0 and 1'),
+      source: provenance.source.optional(),
+      fromMemory: z.boolean().optional(),
+      note: provenance.note,
+    })
     .optional(),
   ...provenance,
 });

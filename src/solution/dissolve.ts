@@ -8,10 +8,15 @@ import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import type { Salt } from '../chem/salt.js';
+import { saltRecords, WATER } from '../chem/saltRecords.js';
 import { IonheatError } from '../error.js';
-import { basisOrder, makeEstimate, type Estimate } from '../quantity/estimate.js';
+import { basisOrder, type Estimate } from '../quantity/estimate.js';
+import { saltHydrationEnthalpy } from '../hydration/saltHydration.js';
 import { measuredSolutionEnthalpy } from './measuredSolution.js';
 import { solutionEnthalpyFromCycle } from './cycleSolution.js';
+import { hydrateFromParent, hydrateRuleScatter, saltFormIndex } from './hydrateRule.js';
+import { heatPerGramOfFill, heatPerGramOfSalt, saturatedFill, type SaturatedFill } from './heatPerGram.js';
+import { checkKirchhoffTemperature, kirchhoffCorrection, solutionHeatCapacity, TABLE_TEMPERATURE_C, typicalSolutionHeatCapacity } from './solutionHeatCapacity.js';
 import { solutionVerdict, type Verdict } from './verdict.js';
 
 export interface DissolveOptions {
@@ -21,6 +26,8 @@ export interface DissolveOptions {
    * do on salts the tables cover.
    */
   excludeMeasured?: boolean;
+  /** Temperature of the result, °C, 0–40 (default 25, the tables' temperature); other values get a Kirchhoff correction. */
+  temperatureC?: number;
 }
 
 export interface DissolveResult {
@@ -38,51 +45,177 @@ export interface DissolveResult {
   perGram: {
     /** Heat absorbed per gram of salt as dissolved, J/g (positive = cools). */
     salt: Estimate;
+    /** Heat absorbed per gram of a saturated fill at 25 °C (salt + the water that just dissolves it), J/g; where solubility data exist. */
+    saturatedFill?: Estimate;
+  };
+  /** Hydration enthalpy of the salt's ions, Σν·ΔhydH°, on both scales (ionic salts only). */
+  hydration?: { absolute?: Estimate; conventional?: Estimate };
+  temperature: {
+    /** The temperature the values refer to, °C. */
+    celsius: number;
+    /** ΔsolCp°, J/(mol·K), where the heat capacities are tabulated. */
+    heatCapacityOfSolution?: Estimate;
   };
   notes: string[];
 }
 
-/** J/g from kJ/mol: ×1000 / M. */
-function perGramOf(e: Estimate, salt: Salt): Estimate {
-  const f = 1000 / salt.molarMass;
-  return makeEstimate({ ...e, quantity: 'heat of solution per gram of salt', value: e.value * f, u: e.u * f, low: e.low * f, high: e.high * f, unit: 'J/g' });
+/** Within one basis, methods in order of preference (lower first); others after. */
+const METHOD_RANK: Readonly<Record<string, number>> = { table: 0, 'formation-enthalpies': 1, 'difference-rule': 2 };
+
+function rank(a: Estimate, b: Estimate): number {
+  return basisOrder.indexOf(a.basis) - basisOrder.indexOf(b.basis) || (METHOD_RANK[a.method] ?? 9) - (METHOD_RANK[b.method] ?? 9) || a.u - b.u || (a.method < b.method ? -1 : a.method > b.method ? 1 : 0);
+}
+
+function waterFormation(dataset: Dataset): number | undefined {
+  return dataset.memo('solution.waterFormation', () => saltRecords('compound-formation.json', { formula: WATER }, dataset).find((r) => r.phase === 'l')?.value);
+}
+
+/** Parsed salts of the table formulas, built once per dataset. */
+function tableSalt(formula: string, dataset: Dataset): Salt {
+  const cache = dataset.memo('solution.tableSalts', () => new Map<string, Salt>());
+  let salt = cache.get(formula);
+  if (!salt) {
+    salt = parseSalt(formula, dataset);
+    cache.set(formula, salt);
+  }
+  return salt;
 }
 
 /**
- * The enthalpy of solution at infinite dilution, 25 °C, of a salt, on every
- * basis the data allow, in order of trust: `measured` (the tabulated value),
- * `cycle` (Σν·ΔfH°(ions, aq) − ΔfH°(crystal)).
+ * The nearest other form (anhydrous or another hydrate) of the salt with a
+ * measured or cycle value, for the difference rule; undefined if none.
+ */
+function ruleEstimate(salt: Salt, hide: boolean, dataset: Dataset): Estimate | undefined {
+  const forms = saltFormIndex(dataset).get(salt.anhydrous);
+  const hw = waterFormation(dataset);
+  if (!forms || hw === undefined) return undefined;
+  let chosen: { formula: string; water: number; estimate: Estimate } | undefined;
+  for (const form of forms) {
+    if (form.formula === salt.formula) continue;
+    if (chosen && Math.abs(form.water - salt.water) >= Math.abs(chosen.water - salt.water)) continue;
+    const parent = profileOf(tableSalt(form.formula, dataset), dataset);
+    const estimate = parent.measured ?? parent.cycle;
+    if (estimate) chosen = { formula: form.formula, water: form.water, estimate };
+  }
+  if (!chosen) return undefined;
+  const scatter = hydrateRuleScatter(hide ? { excludeFormula: salt.formula } : {}, dataset);
+  return hydrateFromParent(chosen.estimate, { parentFormula: chosen.formula, parentWater: chosen.water, water: salt.water, waterFormation: hw, scatter: scatter.perSqrtWater });
+}
+
+/**
+ * What dissolve needs of a salt that does not depend on the options, kept
+ * per dataset and salt (the tables never change within a dataset). Results
+ * get copies, so a caller cannot change what the next caller sees.
+ */
+interface SaltProfile {
+  measured: Estimate | undefined;
+  cycle: Estimate | undefined;
+  /** The difference rule from the nearest other form, with all pairs / without the salt's own pairs. */
+  rule: { open?: Estimate | undefined; hidden?: Estimate | undefined };
+  hydration: { absolute?: Estimate; conventional?: Estimate } | undefined;
+  heatCapacity: Estimate | undefined;
+  fill: SaturatedFill | undefined;
+}
+
+function profileOf(salt: Salt, dataset: Dataset): SaltProfile {
+  const cache = dataset.memo('solution.profiles', () => new Map<string, SaltProfile>());
+  let profile = cache.get(salt.formula);
+  if (!profile) {
+    const ionic = salt.kind === 'ionic';
+    profile = {
+      measured: measuredSolutionEnthalpy(salt, dataset),
+      cycle: solutionEnthalpyFromCycle(salt, dataset),
+      rule: {},
+      hydration: ionic ? { absolute: saltHydrationEnthalpy(salt, { scale: 'absolute' }, dataset), conventional: saltHydrationEnthalpy(salt, { scale: 'conventional' }, dataset) } : undefined,
+      heatCapacity: solutionHeatCapacity(salt, dataset),
+      fill: saturatedFill(salt, dataset),
+    };
+    cache.set(salt.formula, profile);
+  }
+  return profile;
+}
+
+function ruleOf(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Dataset): Estimate | undefined {
+  const key = hide ? 'hidden' : 'open';
+  if (!(key in profile.rule)) profile.rule[key] = salt.kind === 'ionic' ? ruleEstimate(salt, hide, dataset) : undefined;
+  return profile.rule[key];
+}
+
+const copy = (e: Estimate): Estimate => ({ ...e, sources: [...e.sources], notes: [...e.notes] });
+
+/**
+ * The enthalpy of solution at infinite dilution of a salt, on every basis
+ * the data allow, in order of trust:
+ *
+ * - `measured`: the tabulated value;
+ * - `cycle`: Σν·ΔfH°(ions, aq) + n_w·ΔfH°(H₂O, l) − ΔfH°(crystal) from
+ *   tabulated formation enthalpies; for a hydrate (or anhydrous salt)
+ *   without its own crystal value, the difference rule from the nearest
+ *   other form of the salt (method `difference-rule`, flagged).
+ *
+ * `best` is the most trusted estimate; the verdict, the probability of an
+ * endothermic dissolution and the heats per gram are read from it. Values
+ * are at 25 °C unless `temperatureC` asks for another temperature in 0–40 °C
+ * (Kirchhoff correction, or a widened interval with a caveat where the heat
+ * capacities are missing). Non-electrolytes get measured values only: no
+ * lattice model applies to a molecular solute.
  *
  * @param formula - a formula (`NH4NO3`) or an already parsed {@link Salt}
+ * @param options - `excludeMeasured`, `temperatureC`
  * @returns kJ/mol, positive = endothermic (the pack cools)
- * @throws IonheatError `MISSING_DATA` when no basis applies
+ * @throws IonheatError `MISSING_DATA` when no basis applies; `NOT_APPLICABLE` for a non-electrolyte without a measured value
  * @example
  * ```ts
  * const r = dissolve('NH4NO3');
  * r.best.value; // 25.69 kJ/mol (CRC, measured)
  * r.verdict; // 'endothermic'
+ * dissolve('CaCl2').verdict; // 'exothermic'
  * ```
  */
 export function dissolve(formula: string | Salt, options: DissolveOptions = {}, dataset: Dataset = builtinDataset()): DissolveResult {
   const salt = typeof formula === 'string' ? parseSalt(formula, dataset) : formula;
   const hide = options.excludeMeasured === true;
-  const estimates: Estimate[] = [];
-  const measured = hide ? undefined : measuredSolutionEnthalpy(salt, dataset);
-  if (measured) estimates.push(measured);
-  const cycle = solutionEnthalpyFromCycle(salt, dataset, { hideCrystal: hide });
-  if (cycle) estimates.push(cycle);
-  estimates.sort((a, b) => basisOrder.indexOf(a.basis) - basisOrder.indexOf(b.basis));
+  const celsius = options.temperatureC ?? TABLE_TEMPERATURE_C;
+  checkKirchhoffTemperature(celsius);
+  const notes: string[] = [];
+  if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
+
+  const profile = profileOf(salt, dataset);
+  let estimates: Estimate[] = [];
+  if (profile.measured && !hide) estimates.push(copy(profile.measured));
+  if (profile.cycle && !hide) estimates.push(copy(profile.cycle));
+  const rule = ruleOf(salt, profile, hide, dataset);
+  if (rule) estimates.push(copy(rule));
+  if (salt.kind !== 'ionic') notes.push('a molecular solute: no lattice model applies, so only measured values (or formation enthalpies) are used');
+
+  const heatCapacity = profile.heatCapacity;
+  if (celsius !== TABLE_TEMPERATURE_C) {
+    const typical = typicalSolutionHeatCapacity(dataset).rms;
+    estimates = estimates.map((e) => kirchhoffCorrection(e, celsius, heatCapacity, typical));
+  }
+  estimates.sort(rank);
   const best = estimates[0];
   if (!best) {
+    if (salt.kind === 'non-electrolyte') {
+      throw new IonheatError('NOT_APPLICABLE', `no enthalpy of solution can be given for ${salt.formula}: it is a molecular solute, to which no lattice model applies, and the ${dataset.label} tables hold no measured value for it${hide ? ' that is not hidden (excludeMeasured)' : ''}`, { text: salt.formula });
+    }
     throw new IonheatError('MISSING_DATA', `no enthalpy of solution can be given for ${salt.formula}: no measured value and no formation enthalpies in the ${dataset.label} tables`, { text: salt.formula });
   }
+  if (celsius !== TABLE_TEMPERATURE_C && !heatCapacity) notes.push(`no heat capacity of solution for ${salt.formula}: values are those at 25 °C with a widened interval`);
+
+  const fill = profile.fill ? heatPerGramOfFill(best, profile.fill) : undefined;
+  const hydration = profile.hydration
+    ? { ...(profile.hydration.absolute ? { absolute: copy(profile.hydration.absolute) } : {}), ...(profile.hydration.conventional ? { conventional: copy(profile.hydration.conventional) } : {}) }
+    : undefined;
   return {
     formula: salt.formula,
     salt,
     best,
     estimates,
     ...solutionVerdict(best),
-    perGram: { salt: perGramOf(best, salt) },
-    notes: hide ? ['the salt\'s own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)'] : [],
+    perGram: { salt: heatPerGramOfSalt(best, salt), ...(fill ? { saturatedFill: fill } : {}) },
+    ...(hydration ? { hydration } : {}),
+    temperature: { celsius, ...(heatCapacity ? { heatCapacityOfSolution: copy(heatCapacity) } : {}) },
+    notes,
   };
 }

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { formatSalt } from '../../src/chem/formatSalt.js';
 import { IonheatError } from '../../src/error.js';
+import { builtinDataset } from '../../src/data/builtin.js';
 
 const ions = (formula: string) => parseSalt(formula).ions.map((i) => `${i.count} ${i.ion}`);
 
@@ -143,6 +144,30 @@ describe('parseSalt: properties', () => {
         }
       }),
       { numRuns: 1000 },
+    );
+  });
+
+  it('formatting any charge-balanced salt of the ion table and parsing it again gives the same salt', () => {
+    const table = builtinDataset().records('ions.json').filter((i) => i.id !== 'H[+]');
+    const cations = table.filter((i) => i.charge > 0);
+    const anions = table.filter((i) => i.charge < 0);
+    const gcd = (a: number, b: number): number => (b === 0 ? a : gcd(b, a % b));
+    fc.assert(
+      fc.property(fc.constantFrom(...cations), fc.constantFrom(...anions), fc.constantFrom(0, 0.5, 1, 6, 12), (c, a, w) => {
+        const g = gcd(c.charge, -a.charge);
+        const salt = { ions: [{ ion: c.id, formula: c.formula, charge: c.charge, count: -a.charge / g }, { ion: a.id, formula: a.formula, charge: a.charge, count: c.charge / g }], water: w };
+        let parsed;
+        try {
+          parsed = parseSalt(formatSalt(salt));
+        } catch (e) {
+          // Two ion formulas that run together into another reading would be a real defect of the format.
+          throw new Error(`${formatSalt(salt)}: ${(e as Error).message}`);
+        }
+        expect(parsed.ions).toEqual(salt.ions);
+        expect(parsed.water).toBe(w);
+        expect(parseSalt(formatSalt(parsed))).toEqual(parsed);
+      }),
+      { numRuns: 3000 },
     );
   });
 

@@ -1,0 +1,26 @@
+/**
+ * The volume of one formula unit of a crystal.
+ *
+ * @module
+ */
+import { AVOGADRO } from '../quantity/constants.js';
+
+/** nm³ per cm³. */
+const NM3_PER_CM3 = 1e21;
+
+/**
+ * The formula-unit volume of a crystal from its molar mass and density:
+ *
+ *   V_m = M / (ρ · N_A)
+ *
+ * @param molarMass - M, g/mol
+ * @param density - ρ, g/cm³
+ * @returns V_m in nm³
+ * @example
+ * ```ts
+ * formulaUnitVolume(58.44, 2.17); // 0.04472 nm³ (NaCl)
+ * ```
+ */
+export function formulaUnitVolume(molarMass: number, density: number): number {
+  return (molarMass / (density * AVOGADRO)) * NM3_PER_CM3;
+}

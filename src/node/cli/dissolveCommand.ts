@@ -1,0 +1,101 @@
+import type { Dataset } from '../../data/dataset.js';
+import { formatSalt } from '../../chem/formatSalt.js';
+import type { Salt } from '../../chem/salt.js';
+import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
+import { dissolve, type DissolveResult } from '../../solution/dissolve.js';
+import { numberOption, readArgs } from './args.js';
+import type { Command } from './command.js';
+import { textTable } from './textTable.js';
+
+/** The caution every dissolve result carries (common practice). */
+const GENERAL_CAUTION =
+  'Screening estimate. A dissolving salt can scald or freeze skin, and some salts are oxidisers, toxic or restricted: follow the safety data sheet, local codes, product-safety regulation and licensed practice.';
+
+/** Hazard statements of the salt, its anhydrous form, or any of its ions, from hazards.json. */
+function cautionsFor(salt: Salt, dataset: Dataset): string[] {
+  const subjects = new Set([salt.formula, salt.anhydrous, ...salt.ions.map((i) => i.ion)]);
+  return dataset
+    .records('hazards.json')
+    .filter((h) => subjects.has(h.subject))
+    .map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
+}
+
+const rounded = (e: Estimate | undefined): Estimate | undefined => (e ? roundEstimate(e) : undefined);
+
+/** The JSON contract of `ionheat dissolve --json`. */
+function toJson(r: DissolveResult, cautions: string[]) {
+  return {
+    formula: r.formula,
+    best: rounded(r.best),
+    estimates: r.estimates.map((e) => roundEstimate(e)),
+    verdict: r.verdict,
+    probabilityEndothermic: Math.round(r.probabilityEndothermic * 1e4) / 1e4,
+    perGram: { salt: rounded(r.perGram.salt), ...(r.perGram.saturatedFill ? { saturatedFill: rounded(r.perGram.saturatedFill) } : {}) },
+    ...(r.hydration ? { hydration: { absolute: rounded(r.hydration.absolute) ?? null, conventional: rounded(r.hydration.conventional) ?? null } } : {}),
+    temperature: { celsius: r.temperature.celsius, heatCapacityOfSolution: rounded(r.temperature.heatCapacityOfSolution) ?? null },
+    molarMass: r.salt.molarMass,
+    notes: r.notes,
+    cautions,
+  };
+}
+
+const signed = (x: number): string => (x > 0 ? `+${x}` : String(x));
+
+function line(e: Estimate): string[] {
+  const r = roundEstimate(e);
+  return [r.basis, r.method, `${signed(r.value)} ± ${r.u}`, `${signed(r.low)} … ${signed(r.high)}`];
+}
+
+const VERDICT_WORDS = { endothermic: 'endothermic — dissolving absorbs heat (cools)', exothermic: 'exothermic — dissolving releases heat (heats)', undetermined: 'undetermined — the 95 % interval spans zero' } as const;
+
+/** `ionheat dissolve <formula>`: the enthalpy of solution with its basis and verdict. */
+export const dissolveCommand: Command = {
+  name: 'dissolve',
+  summary: 'enthalpy of solution of a salt: best estimate, every basis, verdict, heat per gram',
+  usage: [
+    'ionheat dissolve <formula> [--exclude-measured] [--temperature <°C>] [--json]',
+    '',
+    '  <formula>            e.g. "NH4NO3", "CaCl2·6H2O", "urea"',
+    "  --exclude-measured   hide the salt's own measured enthalpy of solution and crystal formation enthalpy",
+    '  --temperature <°C>   give values at this temperature, 0–40 °C (default 25), by a Kirchhoff correction',
+    '  --json               print one JSON object: formula, best, estimates, verdict, probabilityEndothermic, perGram, …',
+  ].join('\n'),
+  async run(argv, { io, dataset }) {
+    const { values, positionals } = readArgs(
+      argv,
+      { json: { type: 'boolean' }, 'exclude-measured': { type: 'boolean' }, temperature: { type: 'string' } },
+      { min: 1, max: 1, names: 'the formula' },
+    );
+    const temperatureC = numberOption(values.temperature, 'temperature');
+    const r = dissolve(positionals[0]!, { excludeMeasured: values['exclude-measured'] === true, ...(temperatureC !== undefined ? { temperatureC } : {}) }, dataset);
+    const cautions = [...cautionsFor(r.salt, dataset), GENERAL_CAUTION];
+    if (values.json) {
+      io.stdout(JSON.stringify(toJson(r, cautions), null, 2) + '\n');
+      return 0;
+    }
+    const best = roundEstimate(r.best);
+    const out: string[] = [];
+    out.push(`${formatSalt(r.salt, { style: 'unicode' })}  (${r.salt.molarMass.toFixed(2)} g/mol)`);
+    out.push(`Enthalpy of solution at infinite dilution, ${r.temperature.celsius} °C: ${signed(best.value)} ± ${best.u} kJ/mol (${best.basis}, ${best.method}); 95 % interval ${signed(best.low)} … ${signed(best.high)}`);
+    out.push(`Verdict: ${VERDICT_WORDS[r.verdict]}; P(endothermic) = ${r.probabilityEndothermic.toFixed(3)}`);
+    const pg = roundEstimate(r.perGram.salt);
+    out.push(`Heat absorbed per gram of salt: ${signed(pg.value)} ± ${pg.u} J/g`);
+    if (r.perGram.saturatedFill) {
+      const f = roundEstimate(r.perGram.saturatedFill);
+      out.push(`Heat absorbed per gram of a saturated fill (salt + water at 25 °C): ${signed(f.value)} ± ${f.u} J/g`);
+    }
+    out.push('', 'Every estimate (kJ/mol, + = endothermic; ± is one standard uncertainty):', '');
+    io.stdout(out.join('\n') + '\n');
+    io.stdout(textTable(['basis', 'method', 'value', '95 % interval'], r.estimates.map(line), new Set([2, 3])));
+    const tail: string[] = [];
+    if (r.hydration?.absolute) {
+      const h = roundEstimate(r.hydration.absolute);
+      tail.push(`Hydration enthalpy of the ions, Σν·ΔhydH°: ${h.value} ± ${h.u} kJ/mol (${h.method})`);
+    }
+    const notes = [...new Set([...r.notes, ...r.best.notes])];
+    if (notes.length > 0) tail.push('', 'Notes:', ...notes.map((n) => `  - ${n}`));
+    tail.push('', 'Cautions:', ...cautions.map((c) => `  - ${c}`));
+    io.stdout('\n' + tail.join('\n') + '\n');
+    return 0;
+  },
+};

@@ -1,0 +1,11 @@
+/**
+ * `npm run bench`: speed targets, measured in one run on one core and
+ * printed as ratios to their targets. Each section lives in its own file.
+ */
+import { benchDissolve } from './benchDissolve.js';
+
+const sections: { name: string; run: () => string[] }[] = [{ name: 'dissolve', run: benchDissolve }];
+
+for (const section of sections) {
+  process.stdout.write(`== ${section.name}\n${section.run().join('\n')}\n\n`);
+}
