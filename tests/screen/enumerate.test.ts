@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { builtinDataset, enumerate, isIonheatError, parseSalt, saltHazards } from '../../src/index.js';
+import { builtinDataset, enumerate, hazardSummary, isIonheatError, parseSalt } from '../../src/index.js';
 
 describe('enumerate', () => {
   const ions = builtinDataset().records('ions.json');
@@ -61,7 +61,7 @@ describe('enumerate', () => {
     // Chromates carry the carcinogen class through the CrO4[2-] ion record.
     expect(names).not.toContain('K2CrO4');
     expect(names).toContain('KCl');
-    for (const s of safe) expect(saltHazards(s).classes.some((c) => c === 'explosive-precursor' || c === 'carcinogen'), s.formula).toBe(false);
+    for (const s of safe) expect(hazardSummary(s).classes.some((c) => c === 'explosive-precursor' || c === 'carcinogen'), s.formula).toBe(false);
   });
 
   it('refuses bad filters with a typed error naming the filter', () => {
@@ -87,12 +87,12 @@ describe('enumerate', () => {
   });
 });
 
-describe('saltHazards', () => {
+describe('hazardSummary', () => {
   it('joins the salt record (hydrates share it) and the ion records', () => {
     // Hazards table: CaCl2 irritant (CLP, from the table); the hexahydrate shares the entry.
-    expect(saltHazards(parseSalt('CaCl2·6H2O')).classes).toEqual(saltHazards(parseSalt('CaCl2')).classes);
+    expect(hazardSummary(parseSalt('CaCl2·6H2O')).classes).toEqual(hazardSummary(parseSalt('CaCl2')).classes);
     // BaCO3 is not listed as a salt, but Ba[2+] is toxic in the table.
-    expect(saltHazards(parseSalt('BaCO3')).classes).toContain('toxic');
-    expect(saltHazards(parseSalt('NaCl')).statements).toEqual([]);
+    expect(hazardSummary(parseSalt('BaCO3')).classes).toContain('toxic');
+    expect(hazardSummary(parseSalt('NaCl')).statements).toEqual([]);
   });
 });
