@@ -87,8 +87,8 @@ export function latticeEstimate(salt: Salt | string, method: LatticeMethod, opti
 
 /**
  * {@link latticeEstimate} without the exception: undefined where the method
- * does not apply or lacks data (the fast path for callers that try many
- * salts). Bad arguments still throw.
+ * does not apply or lacks data (`NOT_APPLICABLE`, `MISSING_DATA`; the fast
+ * path for callers that try many salts). Bad arguments still throw.
  *
  * @example
  * ```ts
@@ -99,8 +99,8 @@ export function latticeEstimate(salt: Salt | string, method: LatticeMethod, opti
 export function tryLatticeEstimate(salt: Salt | string, method: LatticeMethod, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
   const hit = lookup(typeof salt === 'string' ? parseSalt(salt, dataset) : salt, method, options, dataset);
   if (hit instanceof Error) {
-    if (hit.code === 'INVALID_ARGUMENT') throw hit;
-    return undefined;
+    if (hit.code === 'MISSING_DATA' || hit.code === 'NOT_APPLICABLE') return undefined;
+    throw hit;
   }
   return copy(hit);
 }
@@ -235,7 +235,7 @@ export function latticeEstimates(
       continue;
     }
     if (hit.code === 'NOT_APPLICABLE' && (s.kind !== 'ionic' || s.water > 0)) throw hit;
-    if (hit.code === 'INVALID_ARGUMENT') throw hit;
+    if (hit.code !== 'NOT_APPLICABLE' && hit.code !== 'MISSING_DATA') throw hit;
     skipped.push({ method, reason: hit.message });
   }
   return { estimates, skipped };
