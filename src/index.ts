@@ -94,3 +94,4 @@ export { bornHaberCycle, cycleUnknowns, type BornHaberCycle, type BornHaberOptio
 export { elementSteps, type ElementSteps } from './cycle/gaseousIon.js';
 export { bestLatticeEstimate } from './lattice/bestLatticeEstimate.js';
 export { cycleDiagram, type CycleDiagramOptions } from './render/cycleDiagram.js';
+export { formatEstimate, type FormattedEstimate } from './quantity/formatEstimate.js';
