@@ -19,7 +19,7 @@ import { dissolve, type DissolveResult } from '../solution/dissolve.js';
 import { readCandidate, type CandidateInput, type CandidateLike } from './candidate.js';
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
 import { costPerKJ } from './costPerKJ.js';
-import { saltHazardSummary, type SaltHazards } from './saltHazardSummary.js';
+import { hazardSummary, type HazardSummary } from './hazardSummary.js';
 import { screenObjective, suitabilityOf } from './screenObjective.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
 import { screenSources } from './screenSources.js';
@@ -85,7 +85,7 @@ const DATASET_CACHE_LIMIT = 32;
 const DUPLICATE_LIMIT = 1_000_000;
 
 type Computed =
-  | { ok: true; salt: Salt; result: DissolveResult; hazards: SaltHazards; ownValues: boolean }
+  | { ok: true; salt: Salt; result: DissolveResult; hazards: HazardSummary; ownValues: boolean }
   | { ok: false; salt?: Salt; error: IonheatError };
 
 /** The candidate's fields as one text, in a fixed order. */
@@ -199,7 +199,7 @@ export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}
       salt ??= parseSalt(input.formula, dataset);
       const data = own ? rowDataset(input, salt) : dataset;
       const result = dissolve(salt, { excludeMeasured }, data);
-      computed = deepFreeze({ ok: true, salt, result, hazards: saltHazardSummary(salt, dataset), ownValues: own });
+      computed = deepFreeze({ ok: true, salt, result, hazards: hazardSummary(salt, dataset), ownValues: own });
     } catch (e) {
       if (!isIonheatError(e)) throw e;
       computed = { ok: false, ...(salt ? { salt } : {}), error: e };
@@ -208,7 +208,7 @@ export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}
     return computed;
   };
 
-  const exclusion = (salt: Salt, hazards: () => SaltHazards): string | undefined => {
+  const exclusion = (salt: Salt, hazards: () => HazardSummary): string | undefined => {
     if (filters.salts.has(salt.anhydrous)) return `${salt.anhydrous} is on the list of salts to leave out`;
     const ion = salt.ions.find((i) => filters.ions.has(i.ion));
     if (ion) return `contains ${ion.ion}, an ion to leave out`;
