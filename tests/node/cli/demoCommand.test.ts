@@ -41,7 +41,7 @@ describe('ionheat demo', () => {
 
   it('finds cold packs without ammonium nitrate that meet the target, and hand warmers under the burn threshold', () => {
     const [cold, warm] = demoParts.map((p) => runDemoPart(p).result);
-    const passing = (rows: typeof cold.rows) => rows.filter((r) => r.spec?.holds).map((r) => r.formula);
+    const passing = (rows: NonNullable<typeof cold>['rows']) => rows.filter((r) => r.spec?.holds).map((r) => r.formula);
     expect(passing(cold!.rows).length).toBeGreaterThan(0);
     expect(passing(cold!.rows)).not.toContain('NH4NO3');
     expect(cold!.rows.find((r) => r.input.formula === 'NH4NO3')!.status).toBe('excluded');
