@@ -90,3 +90,8 @@ export { screenOutputJsonSchema } from './screen/screenOutputJsonSchema.js';
 export { screenSources } from './screen/screenSources.js';
 export { screenRowSchema, screenSummarySchema, screenDocumentSchema, screenSettingsSchema, specOutcomeSchema, rowErrorSchema, fillResultSchema, directionSchema, objectiveNameSchema, suitabilitySchema, fillSpecSchema, type ScreenRow, type ScreenSummary, type ScreenDocument, type ScreenSettings, type Direction, type ObjectiveName, type Suitability, type FillSpec, type SpecOutcome } from './screen/screenRow.js';
 export { intervalChart, type IntervalChartOptions, type ChartMark, type ChartableScreen } from './render/intervalChart.js';
+export { bornHaberCycle, cycleUnknowns, type BornHaberCycle, type BornHaberOptions, type CycleUnknown, type KnownValue } from './cycle/bornHaberCycle.js';
+export { elementSteps, type ElementSteps } from './cycle/gaseousIon.js';
+export { bestLatticeEstimate } from './lattice/bestLatticeEstimate.js';
+export { cycleDiagram, type CycleDiagramOptions } from './render/cycleDiagram.js';
+export { formatEstimate, type FormattedEstimate } from './quantity/formatEstimate.js';

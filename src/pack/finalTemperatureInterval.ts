@@ -162,18 +162,27 @@ export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolut
   let up = 0;
   let down = 0;
   let central = 0;
+  // The combined shift may not carry the interval past a floor or ceiling that a re-solve ran into.
+  let floor = solution.clamp && solution.clamp.kind !== 'boiling' ? solution.clamp.temperature : -Infinity;
+  let ceiling = solution.clamp?.kind === 'boiling' ? solution.clamp.temperature : Infinity;
   for (const input of inputs) {
-    const plus = solveFillTemperature(fill, input.perturb(COVERAGE_95 * input.u)).temperature;
-    const minus = solveFillTemperature(fill, input.perturb(-COVERAGE_95 * input.u)).temperature;
+    const plusSolution = solveFillTemperature(fill, input.perturb(COVERAGE_95 * input.u));
+    const minusSolution = solveFillTemperature(fill, input.perturb(-COVERAGE_95 * input.u));
+    for (const s of [plusSolution, minusSolution]) {
+      if (s.clamp?.kind === 'boiling') ceiling = Math.min(ceiling, s.clamp.temperature);
+      else if (s.clamp) floor = floor === -Infinity ? s.clamp.temperature : Math.min(floor, s.clamp.temperature);
+    }
+    const plus = plusSolution.temperature;
+    const minus = minusSolution.temperature;
     up += Math.max(0, plus - t, minus - t) ** 2;
     down += Math.max(0, t - plus, t - minus) ** 2;
     central += ((plus - minus) / (2 * COVERAGE_95)) ** 2;
   }
   return {
-    low: t - Math.sqrt(down),
-    high: t + Math.sqrt(up),
+    low: Math.min(t, Math.max(floor, t - Math.sqrt(down))),
+    high: Math.max(t, Math.min(ceiling, t + Math.sqrt(up))),
     u: Math.sqrt(central),
     method: 'bounds',
-    description: `95 % interval by bounds: each of ${listed || 'no uncertain input'} moved in turn to the ends of its own 95 % interval and the fill re-solved; upward and downward shifts combined in quadrature`,
+    description: `95 % interval by bounds: each of ${listed || 'no uncertain input'} moved in turn to the ends of its own 95 % interval and the fill re-solved; upward and downward shifts combined in quadrature, and kept within any freezing, eutectic or boiling limit a re-solve reached`,
   };
 }

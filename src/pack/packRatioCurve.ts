@@ -82,9 +82,10 @@ export interface PackCurveOptions {
 
 /** Tolerance on a designed ratio, g/g. */
 const RATIO_TOLERANCE = 1e-7;
-/** Ratio up to which the coarse scan looks for the largest change. */
-const COARSE_MAX_RATIO = 5;
-const COARSE_POINTS = 64;
+/** The scan for the largest change doubles the ratio from this… */
+const SCAN_FIRST_RATIO = 0.005;
+/** …up to this (11 doublings). */
+const SCAN_LAST_RATIO = 5.12;
 
 interface Sweeper {
   base: PreparedFill;
@@ -150,9 +151,15 @@ export function packRatioCurve(fill: PackFill, options: PackCurveOptions = {}, p
   const magnitude = (r: number) => Math.abs(s.change(r));
   const notes: string[] = [];
 
-  // Where is the largest change? A coarse scan, then golden section around the best grid point.
-  const coarse = Array.from({ length: COARSE_POINTS + 1 }, (_, i) => (COARSE_MAX_RATIO * i) / COARSE_POINTS);
-  const coarseValues = coarse.map(magnitude);
+  // Where is the largest change? Double the ratio until the change stops growing, then golden
+  // section over the last two doublings.
+  const coarse = [0];
+  const coarseValues = [0];
+  for (let r = SCAN_FIRST_RATIO; r <= SCAN_LAST_RATIO * (1 + 1e-12); r *= 2) {
+    coarse.push(r);
+    coarseValues.push(magnitude(r));
+    if (coarseValues[coarseValues.length - 1]! < coarseValues[coarseValues.length - 2]! - 1e-12) break;
+  }
   const kBest = coarseValues.reduce((best, v, i) => (v > coarseValues[best]! + 1e-12 ? i : best), 0);
   let extremeRatio = kBest === 0 ? 0 : refineMaximum(magnitude, coarse, kBest);
   // On a plateau (the freezing or eutectic clamp) take the smallest ratio that reaches it.

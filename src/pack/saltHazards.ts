@@ -9,6 +9,7 @@ import { builtinDataset } from '../data/builtin.js';
 import type { HazardRecord } from '../data/schemas.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import type { Salt } from '../chem/salt.js';
+import { IonheatError, isIonheatError } from '../error.js';
 
 /** An ion id such as `Ba[2+]`, as opposed to a salt formula. */
 function isIonId(subject: string): boolean {
@@ -30,8 +31,9 @@ function buildIndex(dataset: Dataset): HazardIndex {
     }
     try {
       bySalt.set(parseSalt(record.subject, dataset).anhydrous, record);
-    } catch {
-      // A subject the parser cannot read is the table checks' business; it cannot match a salt here.
+    } catch (e) {
+      const why = isIonheatError(e) ? e.message : String(e);
+      throw new IonheatError('INVALID_DATA', `${dataset.label} table hazards.json ("${record.subject}"): ${why}`, { field: 'hazards.json.subject' });
     }
   }
   return { bySalt, byIon };

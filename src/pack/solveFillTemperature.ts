@@ -87,7 +87,9 @@ export function solveFillTemperature(fill: PreparedFill, perturbation: Perturbat
       const gap = t - w.floorC;
       if (f <= 0 || gap <= 0) {
         const tBalance = f <= 0 ? bracketedRoot(balance, t, prev, TEMPERATURE_TOLERANCE_K).x : -Infinity;
-        const tFloor = gap <= 0 ? bracketedRoot(floorGap, t, prev, TEMPERATURE_TOLERANCE_K).x : -Infinity;
+        // The floor's crossing, taken on its liquid side so that the result never lies below the floor.
+        const crossing = gap <= 0 ? bracketedRoot(floorGap, t, prev, TEMPERATURE_TOLERANCE_K).x : -Infinity;
+        const tFloor = gap <= 0 ? crossing + Math.max(0, -floorGap(crossing)) : -Infinity;
         if (tBalance >= tFloor) return finish(tBalance);
         const state = stateAt(tFloor);
         return { temperature: tFloor, state, clamp: { kind: floorKind(state.floorKind), temperature: tFloor }, jump: false };
