@@ -181,6 +181,43 @@ describe('screen', () => {
   });
 });
 
+describe('screen with a standard fill', () => {
+  it('puts each candidate through the pack model and ranks by the temperature reached', () => {
+    const { rows, settings } = screen(['KNO3', 'NaCl', 'CaCl2'], { fill: { saltMassG: 10, waterMassG: 100, startC: 20 } });
+    expect(settings.objective).toBe('fill-temperature');
+    // Hand check (as in the pack model's own example): 10 g KNO3 = 0.0989 mol × 34.89 kJ/mol (CRC) = 3.45 kJ,
+    // over about 427.5 J/K of water and salt: a drop of 8.07 K, from 20 °C to 11.93 °C.
+    expect(rows[0]!.fill!.finalTemperature.value).toBeCloseTo(11.93, 1);
+    expect(rows[0]!.objective!.value).toBeCloseTo(rows[0]!.fill!.finalTemperature.value, 12);
+    expect(rows[0]!.objective!.unit).toBe('°C');
+    expect(rows.map((r) => r.rank)).toEqual([1, 2, 3]);
+    expect(rows[2]!.fill!.finalTemperature.value).toBeGreaterThan(20);
+  });
+
+  it('reads a fill written as text, and checks it', () => {
+    expect(screen(['KNO3'], { fill: '10:100@20' }).rows[0]!.fill!.finalTemperature.value).toBeCloseTo(11.93, 1);
+    expect(() => screen(['KNO3'], { fill: '10:0@20' })).toThrow(/water mass/);
+    expect(() => screen(['KNO3'], { fill: { saltMassG: 10, waterMassG: 100, startC: 120 } })).toThrow(/fill.startC/);
+  });
+
+  it('uses a solubility given with a candidate for that row only', () => {
+    const before = JSON.stringify(builtinDataset().records('solubility.json'));
+    const rows = screen([{ formula: 'KNO3', solubility: 10 }, 'KNO3'], { fill: '40:80@22' }).rows;
+    // 10 g per 100 g of water, taken as the same at every temperature: 80 g of water hold 8 g.
+    expect(rows[0]!.fill!.dissolved[0]!.dissolvedMass).toBeCloseTo(8, 6);
+    expect(rows[0]!.fill!.dissolved[0]!.undissolvedMass).toBeCloseTo(32, 6);
+    expect(rows[1]!.fill!.dissolved[0]!.dissolvedMass).toBeGreaterThan(8);
+    expect(JSON.stringify(builtinDataset().records('solubility.json'))).toBe(before);
+  });
+
+  it('lets a spec read the fill, and refuses fill fields without one', () => {
+    const { rows } = screen(['NH4NO3', 'NaCl'], { fill: '40:80@22', spec: 'fill.finalTemperature.high <= 5' });
+    expect(rows.map((r) => r.spec?.holds)).toEqual([true, false]);
+    expect(rows[1]!.spec!.reason).toMatch(/^fill.finalTemperature.high is 1\d(\.\d+)?, not <= 5$/);
+    expect(() => screen(['NaCl'], { spec: 'fill.finalTemperature.high <= 5' })).toThrow(/no standard fill was given/);
+  });
+});
+
 describe('screenStream', () => {
   it('yields the same rows as screen, in order, and returns the summary', async () => {
     const input = ['KNO3', 'NaCl2', 'NH4Cl', 'KNO3'];
