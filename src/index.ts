@@ -56,3 +56,6 @@ export { thermalElectronEnthalpy } from './cycle/thermalElectronEnthalpy.js';
 export { ionText } from './cycle/ionText.js';
 export type { CycleStep, CycleStepKind } from './cycle/cycleStep.js';
 export type { IonShape } from './lattice/latticeIons.js';
+export { anchoredSolutionEnthalpies, anchoredFloor, anchorSets, ANCHOR_NEIGHBOURS, type AnchorSet, type AnchorCombination } from './solution/anchoredSolution.js';
+export { anchorIndex, ionDistance, ION_DISTANCE, type AnchorIndex, type AnchorSalt, type Neighbour } from './solution/anchorIndex.js';
+export { solutionEnthalpyFromModel } from './solution/modelSolution.js';
