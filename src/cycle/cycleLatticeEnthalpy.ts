@@ -41,6 +41,20 @@ export interface CycleLatticeOptions {
 export function cycleLatticeEnthalpy(salt: Salt | string, dataset: Dataset = builtinDataset(), options: CycleLatticeOptions = {}): Estimate | undefined {
   const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
   if (s.kind !== 'ionic' || s.water > 0 || options.hideCrystal) return undefined;
+  const cache = dataset.memo('cycle.latticeCache', () => new Map<string, Estimate | null>());
+  let hit = cache.get(s.formula);
+  if (hit === undefined) {
+    hit = compute(s, dataset) ?? null;
+    if (cache.size >= CACHE_LIMIT) cache.clear();
+    cache.set(s.formula, hit);
+  }
+  return hit === null ? undefined : { ...hit, sources: hit.sources.slice(), notes: hit.notes.slice() };
+}
+
+/** Most results kept per dataset; the cache starts afresh when full. */
+const CACHE_LIMIT = 20_000;
+
+function compute(s: Salt, dataset: Dataset): Estimate | undefined {
   const crystal = saltRecords('compound-formation.json', s, dataset).find((r) => r.phase === 'cr');
   if (!crystal) return undefined;
   const terms = [{ coefficient: -1, value: crystal.value, u: dataset.uncertaintyOf('compound-formation.json', crystal) ?? 0 }];

@@ -48,13 +48,15 @@ function charged(symbol: string, z: number): string {
   return ionText(`${symbol}[${z === 0 ? '0' : `${Math.abs(z) === 1 ? '' : Math.abs(z)}${z > 0 ? '+' : '-'}`}]`);
 }
 
-interface Indexes {
-  atomization: Map<string, CycleStep>;
-  ionization: Map<string, CycleStep>;
-  affinity: Map<string, CycleStep>;
+/** The element steps of the dataset: atomization by element, ionization by `element|stage`, first electron attachment by element. */
+export interface ElementSteps {
+  atomization: ReadonlyMap<string, CycleStep>;
+  ionization: ReadonlyMap<string, CycleStep>;
+  affinity: ReadonlyMap<string, CycleStep>;
 }
 
-function indexes(dataset: Dataset): Indexes {
+/** The element steps of a dataset (see {@link ElementSteps}), built once per dataset. */
+export function elementSteps(dataset: Dataset = builtinDataset()): ElementSteps {
   return dataset.memo('cycle.elementSteps', () => {
     const bonds = new Map(dataset.records('bond-dissociation.json').map((r) => [r.molecule, r]));
     const atomization = new Map<string, CycleStep>();
@@ -116,7 +118,7 @@ function sumOf(steps: readonly CycleStep[], electron: number): { value: number; 
 }
 
 function build(dataset: Dataset): ReadonlyMap<string, GaseousIon> {
-  const { atomization, ionization, affinity } = indexes(dataset);
+  const { atomization, ionization, affinity } = elementSteps(dataset);
   const tabulated = new Map(dataset.records('ion-formation-gas.json').map((r) => [r.ion, r]));
   const out = new Map<string, GaseousIon>();
   for (const ion of dataset.records('ions.json')) {

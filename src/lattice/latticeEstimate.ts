@@ -81,6 +81,32 @@ function readMethod(method: string): { model: LatticeModel; corrected: boolean }
  */
 export function latticeEstimate(salt: Salt | string, method: LatticeMethod, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate {
   const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
+  const key = cacheKey(method, s.formula, options);
+  const cache = dataset.memo('lattice.estimateCache', () => new Map<string, Estimate | IonheatError>());
+  let hit = cache.get(key);
+  if (hit === undefined) {
+    try {
+      hit = computeEstimate(s, method, options, dataset);
+    } catch (e) {
+      if (!isIonheatError(e)) throw e;
+      hit = e;
+    }
+    if (cache.size >= CACHE_LIMIT) cache.clear();
+    cache.set(key, hit);
+  }
+  if (hit instanceof Error) throw hit;
+  return { ...hit, sources: hit.sources.slice(), notes: hit.notes.slice() };
+}
+
+/** Most estimates kept per dataset; the cache starts afresh when full. */
+const CACHE_LIMIT = 20_000;
+
+function cacheKey(method: string, formula: string, o: LatticeEstimateOptions): string {
+  if (o.structure === undefined && o.latticeParameter === undefined && o.coordination === undefined && o.excludeSalt === undefined) return `${method}|${formula}`;
+  return `${method}|${formula}|${o.structure ?? ''}|${o.latticeParameter ?? ''}|${o.coordination ?? ''}|${o.excludeSalt ?? ''}`;
+}
+
+function computeEstimate(s: Salt, method: LatticeMethod, options: LatticeEstimateOptions, dataset: Dataset): Estimate {
   const { model, corrected } = readMethod(method);
   const point = latticeModelPoint(s, model, options, dataset);
   const exclude = options.excludeSalt !== undefined ? [s.formula, parseSalt(options.excludeSalt, dataset).formula] : [s.formula];

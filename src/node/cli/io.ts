@@ -8,6 +8,8 @@ export interface CliIO {
   readStdin(): Promise<string>;
   /** Working directory for relative paths. */
   cwd: string;
+  /** Standard input as a stream, for inputs read record by record (optional: commands fall back to readStdin). */
+  stdinStream?(): NodeJS.ReadableStream;
 }
 
 /** The process's own streams. */
@@ -17,6 +19,7 @@ export function processIO(): CliIO {
     stderr: (t) => void process.stderr.write(t),
     stderrIsTTY: Boolean(process.stderr.isTTY),
     cwd: process.cwd(),
+    stdinStream: () => process.stdin,
     readStdin: async () => {
       const chunks: Buffer[] = [];
       for await (const chunk of process.stdin) chunks.push(chunk as Buffer);

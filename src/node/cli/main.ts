@@ -12,11 +12,15 @@ import type { Command } from './command.js';
 import { demoCommand } from './demoCommand.js';
 import { processIO, type CliIO } from './io.js';
 import { saltCommand } from './saltCommand.js';
+import { latticeCommand } from './latticeCommand.js';
+import { cycleCommand } from './cycleCommand.js';
 import { dissolveCommand } from './dissolveCommand.js';
+import { screenCommand } from './screenCommand.js';
+import { packCommand } from './packCommand.js';
 import { version as PACKAGE_VERSION } from '../../../package.json';
 
 /** Every command, in the order `ionheat help` lists them. */
-export const commands: readonly Command[] = [demoCommand, saltCommand, dissolveCommand];
+export const commands: readonly Command[] = [demoCommand, saltCommand, latticeCommand, cycleCommand, dissolveCommand, packCommand, screenCommand];
 
 function overview(): string {
   const width = Math.max(...commands.map((c) => c.name.length));

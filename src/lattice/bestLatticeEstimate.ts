@@ -1,0 +1,43 @@
+/**
+ * The most precise model estimate of a lattice enthalpy.
+ *
+ * @module
+ */
+import type { Dataset } from '../data/dataset.js';
+import { builtinDataset } from '../data/builtin.js';
+import { parseSalt } from '../chem/parseSalt.js';
+import type { Salt } from '../chem/salt.js';
+import { IonheatError } from '../error.js';
+import type { Estimate } from '../quantity/estimate.js';
+import { latticeEstimates, type LatticeEstimateOptions } from './latticeEstimate.js';
+
+/**
+ * Of the bias-corrected lattice estimates that apply to a salt, the one
+ * with the narrowest calibrated 95 % interval relative to its value (the
+ * salt itself always left out of the calibration). For a cycle solved for a
+ * formation enthalpy or an electron affinity, or a caller who needs a
+ * lattice enthalpy where the tables close no cycle.
+ *
+ * @param salt - an anhydrous ionic salt (formula or parsed)
+ * @returns kJ/mol, basis `model`
+ * @throws IonheatError `MISSING_DATA` when no estimator applies; `NOT_APPLICABLE` for a non-electrolyte or a hydrate
+ * @example
+ * ```ts
+ * const e = bestLatticeEstimate('KCl');
+ * e.method.endsWith('-corrected'); // true
+ * e.low < 717.3 && 717.3 < e.high; // true (cycle value 717.3 kJ/mol)
+ * ```
+ */
+export function bestLatticeEstimate(salt: Salt | string, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate {
+  const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
+  const { estimates, skipped } = latticeEstimates(s, options, dataset);
+  let best: Estimate | undefined;
+  for (const e of estimates) {
+    if (!e.method.endsWith('-corrected')) continue;
+    if (!best || (e.high - e.low) / e.value < (best.high - best.low) / best.value) best = e;
+  }
+  if (!best) {
+    throw new IonheatError('MISSING_DATA', `no lattice estimator applies to ${s.formula}: ${skipped.filter((k) => k.method.endsWith('-corrected')).map((k) => `${k.method}: ${k.reason}`).join('; ')}`, { text: s.formula });
+  }
+  return best;
+}

@@ -1,0 +1,339 @@
+import { writeFileSync } from 'node:fs';
+import { isAbsolute, join } from 'node:path';
+import type { Dataset } from '../../data/dataset.js';
+import { parseSalt } from '../../chem/parseSalt.js';
+import { formatSalt } from '../../chem/formatSalt.js';
+import { IonheatError, isIonheatError } from '../../error.js';
+import { roundToExponent, roundToUncertainty } from '../../quantity/rounding.js';
+import type { Estimate } from '../../quantity/estimate.js';
+import { packFinalTemperature, type PackResult } from '../../pack/packFinalTemperature.js';
+import type { PackFill, PackOptions } from '../../pack/packFill.js';
+import { packRatioCurve, type PackDesignPoint, type PackRatioCurve } from '../../pack/packRatioCurve.js';
+import { packTimeCourse, type PackTimeCourse, type TimeCourseOptions } from '../../pack/packTimeCourse.js';
+import { packCurveSvg } from '../../render/packCurve.js';
+import { timeCourseSvg } from '../../render/timeCourse.js';
+import { numberOption, readArgs } from './args.js';
+import type { Command } from './command.js';
+import { textTable } from './textTable.js';
+
+const options = {
+  salt: { type: 'string', multiple: true },
+  'salt-mass': { type: 'string', multiple: true },
+  water: { type: 'string' },
+  start: { type: 'string' },
+  container: { type: 'string' },
+  target: { type: 'string' },
+  json: { type: 'boolean' },
+  'heat-capacity': { type: 'string' },
+  'heat-capacity-u': { type: 'string' },
+  kirchhoff: { type: 'boolean' },
+  'monte-carlo': { type: 'string' },
+  seed: { type: 'string' },
+  curve: { type: 'boolean' },
+  points: { type: 'string' },
+  'curve-svg': { type: 'string' },
+  band: { type: 'string' },
+  duration: { type: 'string' },
+  tau: { type: 'string' },
+  ambient: { type: 'string' },
+  'g-ambient': { type: 'string' },
+  skin: { type: 'string' },
+  'g-skin': { type: 'string' },
+  'time-svg': { type: 'string' },
+} as const;
+
+/** Options whose value is a number that may be negative (`--start -5` means `--start=-5`). */
+const NUMERIC = new Set(['salt-mass', 'water', 'start', 'container', 'target', 'heat-capacity', 'heat-capacity-u', 'monte-carlo', 'seed', 'points', 'duration', 'tau', 'ambient', 'g-ambient', 'skin', 'g-skin', 'band']);
+
+/** Joins `--name -5` into `--name=-5` for numeric options, so negative values reach the range checks. */
+function joinNegativeValues(argv: readonly string[]): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i]!;
+    const next = argv[i + 1];
+    if (a.startsWith('--') && !a.includes('=') && NUMERIC.has(a.slice(2)) && next !== undefined && /^-[\d.]/.test(next)) {
+      out.push(`${a}=${next}`);
+      i++;
+    } else out.push(a);
+  }
+  return out;
+}
+
+function bad(field: string, message: string): IonheatError {
+  return new IonheatError('INVALID_ARGUMENT', message, { field });
+}
+
+function positive(value: string | undefined, name: string, unit: string, required: boolean): number | undefined {
+  const n = numberOption(value, name);
+  if (n === undefined) {
+    if (required) throw bad(name, `--${name} is required (${unit})`);
+    return undefined;
+  }
+  if (!(n > 0)) throw bad(name, `--${name} must be greater than zero, got ${n} ${unit}`);
+  return n;
+}
+
+const r = (x: number, digits: number): number => {
+  const v = Number(x.toFixed(digits));
+  return v === 0 ? 0 : v;
+};
+
+/** An estimate rounded for reporting: u to two significant digits, value and interval to the same place (at most 4 decimals). */
+function rounded(e: Estimate): { value: number; low: number; high: number; u: number } {
+  if (!(e.u > 0)) return { value: r(e.value, 4), low: r(e.low, 4), high: r(e.high, 4), u: 0 };
+  const { value, u, exponent } = roundToUncertainty(e.value, e.u);
+  const ex = Math.max(exponent, -4);
+  return { value: r(ex === exponent ? value : roundToExponent(e.value, ex), 6), low: r(roundToExponent(e.low, ex), 6), high: r(roundToExponent(e.high, ex), 6), u: r(u, 6) };
+}
+
+function design(d: PackDesignPoint) {
+  return { ratio: r(d.ratio, 5), saltMass: r(d.saltMass, 3), temperature: r(d.temperature, 3), changePerGram: r(d.changePerGram, 6) };
+}
+
+function jsonReport(result: PackResult, curve: PackRatioCurve, course: PackTimeCourse | undefined, withCurve: boolean, dataset: Dataset) {
+  const t = rounded(result.finalTemperature);
+  return {
+    fill: result.fill,
+    finalTemperature: {
+      value: t.value,
+      low: t.low,
+      high: t.high,
+      unit: '°C',
+      u: t.u,
+      basis: result.finalTemperature.basis,
+      interval: result.interval.method,
+      ...(result.interval.seed !== undefined ? { seed: result.interval.seed, samples: result.interval.samples } : {}),
+      description: result.interval.description,
+    },
+    temperatureChange: { value: r(result.temperatureChange, 4), unit: 'K' },
+    dissolved: result.dissolved.map((d) => ({
+      formula: d.formula,
+      loadedMass: r(d.loadedMass, 4),
+      dissolvedMass: r(d.dissolvedMass, 4),
+      undissolvedMass: r(d.undissolvedMass, 4),
+      undissolvedSolid: d.undissolvedSolid ? { formula: d.undissolvedSolid.formula, mass: r(d.undissolvedSolid.mass, 4) } : null,
+      saturated: d.saturated,
+      solubility: d.solubility ? { ...d.solubility, value: r(d.solubility.value, 3) } : null,
+      enthalpyOfSolution: { value: d.enthalpyOfSolution.value, u: d.enthalpyOfSolution.u, unit: 'kJ/mol', basis: d.enthalpyOfSolution.basis, sources: d.enthalpyOfSolution.sources },
+      heat: r(d.heat, 4),
+    })),
+    liquidWater: r(result.liquidWater, 4),
+    heat: { ...result.heat, absorbed: r(result.heat.absorbed, 4), dissolution: r(result.heat.dissolution, 4), solidConversion: r(result.heat.solidConversion, 4), sensible: r(result.heat.sensible, 4), imbalance: Number(result.heat.imbalance.toPrecision(3)) },
+    heatCapacity: {
+      value: r(result.heatCapacity.value, 2),
+      u: r(result.heatCapacity.u, 2),
+      unit: 'J/K',
+      basis: result.heatCapacity.basis,
+      parts: Object.fromEntries(Object.entries(result.heatCapacity.parts).map(([k, v]) => [k, r(v, 2)])),
+    },
+    clamp: result.clamp ? { ...result.clamp, temperature: r(result.clamp.temperature, 4) } : null,
+    design: {
+      largestChange: design(curve.largestChange),
+      bestPerGram: design(curve.bestPerGram),
+      saturationRatio: curve.saturationRatio === null ? null : r(curve.saturationRatio, 5),
+    },
+    ...(curve.target
+      ? { target: { temperature: curve.target.target, reachable: curve.target.reachable, design: curve.target.design ? design(curve.target.design) : null, message: curve.target.message } }
+      : {}),
+    ...(withCurve
+      ? { curve: curve.points.map((p) => ({ ratio: r(p.ratio, 6), saltMass: r(p.saltMass, 4), temperature: r(p.temperature, 4), ...(p.low !== undefined ? { low: r(p.low, 4), high: r(p.high!, 4) } : {}), undissolvedMass: r(p.undissolvedMass, 4), clamp: p.clamp })) }
+      : {}),
+    ...(course
+      ? {
+          timeCourse: {
+            parameters: course.parameters,
+            extreme: { temperature: r(course.extreme.temperature, 3), timeS: r(course.extreme.timeS, 1) },
+            band: course.band ? { ...course.band, secondsInside: r(course.band.secondsInside, 1) } : null,
+            secondsAboveBurnThreshold: r(course.secondsAboveBurnThreshold, 1),
+            points: course.points.map((p) => ({ t: r(p.t, 2), temperature: r(p.temperature, 4), heatAbsorbed: r(p.heatAbsorbed, 4) })),
+            notes: course.notes,
+          },
+        }
+      : {}),
+    cautions: course ? course.cautions : result.cautions,
+    notes: result.notes,
+    sources: Object.fromEntries(result.sources.map((k) => [k, dataset.source(k)?.citation ?? k])),
+  };
+}
+
+function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeCourse | undefined, dataset: Dataset): string {
+  const out: string[] = [];
+  const f = result.fill;
+  const solids = f.solids.map((s) => `${r(s.massG, 3)} g ${formatSalt(parseSalt(s.formula, dataset), { style: 'unicode' })}`).join(' + ');
+  out.push(`Pack: ${solids} in ${f.waterG} g water, start ${f.startC} °C${f.containerJPerK > 0 ? `, container ${f.containerJPerK} J/K` : ''}\n`);
+  const t = rounded(result.finalTemperature);
+  out.push(`final temperature   ${t.value} °C   (95 % interval ${t.low} to ${t.high} °C, ${result.interval.method === 'bounds' ? 'bounds' : `Monte Carlo, ${result.interval.samples} draws, seed ${result.interval.seed}`})`);
+  out.push(`change              ${result.temperatureChange >= 0 ? '+' : '−'}${Math.abs(r(result.temperatureChange, 2))} K${result.clamp ? `   (${result.clamp.kind} clamp)` : ''}\n`);
+  out.push(
+    textTable(
+      ['solid', 'loaded g', 'dissolved g', 'undissolved g', 'ΔsolH kJ/mol', 'heat kJ'],
+      result.dissolved.map((d) => [
+        d.formula,
+        d.loadedMass.toFixed(2),
+        d.dissolvedMass.toFixed(2),
+        d.undissolvedMass.toFixed(2) + (d.undissolvedSolid && d.undissolvedSolid.formula !== d.formula ? ` (as ${d.undissolvedSolid.formula})` : ''),
+        `${d.enthalpyOfSolution.value.toFixed(2)} ± ${d.enthalpyOfSolution.u.toPrecision(2)} (${d.enthalpyOfSolution.basis})`,
+        d.heat.toFixed(3),
+      ]),
+      new Set([1, 2, 3, 5]),
+    ),
+  );
+  const h = result.heat;
+  out.push(`heat ${h.direction === 'released' ? 'released' : 'absorbed'} by dissolution ${Math.abs(h.absorbed).toFixed(3)} kJ; heat capacity ${result.heatCapacity.value.toFixed(1)} ± ${result.heatCapacity.u.toPrecision(2)} J/K (${result.heatCapacity.basis === 'parts' ? 'from the parts' : 'your value'}); ${result.liquidWater.toFixed(2)} g of liquid water at the end`);
+  const lc = curve.largestChange;
+  const bp = curve.bestPerGram;
+  out.push(`\ndesign (this water and start): ${lc.temperature < f.startC ? 'coldest' : 'hottest'} ${lc.temperature.toFixed(2)} °C at ${lc.ratio.toFixed(4)} g solid per g water (${lc.saltMass.toFixed(2)} g); most change per gram of fill at ${bp.ratio.toFixed(4)} g/g (${bp.temperature.toFixed(2)} °C)`);
+  if (curve.target) out.push(`target ${curve.target.target} °C: ${curve.target.message}`);
+  if (course) {
+    const b = course.band;
+    out.push(
+      `\ntime course over ${Math.round(course.parameters.durationS.value / 60)} min: ${course.extreme.temperature < course.startC ? 'coldest' : 'hottest'} ${course.extreme.temperature.toFixed(1)} °C after ${(course.extreme.timeS / 60).toFixed(1)} min` +
+        (b ? `; ${(b.secondsInside / 60).toFixed(1)} min inside ${b.lowC}–${b.highC} °C` : '') +
+        (course.secondsAboveBurnThreshold > 0 ? `; ${(course.secondsAboveBurnThreshold / 60).toFixed(1)} min above 44 °C` : ''),
+    );
+    for (const n of course.notes.slice(0, 2)) out.push(`  ${n}`);
+  }
+  out.push('\nCautions:');
+  for (const c of course ? course.cautions : result.cautions) out.push(`  • ${c}`);
+  out.push('\nNotes:');
+  for (const n of result.notes) out.push(`  - ${n}`);
+  return out.join('\n') + '\n';
+}
+
+/** Rewrites the library's `solids[i].formula "X": …` into the option the user typed. */
+function asOptionError(e: unknown): unknown {
+  if (!isIonheatError(e) || !e.field) return e;
+  const m = /^solids\[(\d+)\]\.(formula|massG)$/.exec(e.field);
+  if (!m) return e;
+  const option = m[2] === 'formula' ? 'salt' : 'salt-mass';
+  const message = e.message.replace(/^solids\[\d+\]\.(formula|massG) /, `--${option} `).replace(/ \(solids\[\d+\]\.massG\)/, '').replace(/ \(solids\[\d+\]\)/g, '');
+  return new IonheatError(e.code, message, { field: option, ...(e.text !== undefined ? { text: e.text } : {}) });
+}
+
+function writeChart(cwd: string, file: string, svg: string, option: string): string {
+  const path = isAbsolute(file) ? file : join(cwd, file);
+  try {
+    writeFileSync(path, svg);
+  } catch (e) {
+    throw bad(option, `--${option}: cannot write "${file}": ${e instanceof Error ? e.message.split('\n')[0] : String(e)}`);
+  }
+  return path;
+}
+
+/** `ionheat pack`: the temperature a hot- or cold-pack fill reaches. */
+export const packCommand: Command = {
+  name: 'pack',
+  summary: 'design a hot or cold pack: final temperature (solubility-limited), 95 % interval, inverse design, time course, cautions',
+  usage: [
+    'ionheat pack --salt <formula> --salt-mass <g> --water <g> [--start <°C>] [--container <J/K>] [--target <°C>] [--json]',
+    '',
+    '  --salt, --salt-mass   a solid and its mass in grams; repeat both for several solids',
+    '  --water               grams of liquid water',
+    '  --start               start temperature, °C (default 20; 0 to below 100)',
+    '  --container           heat capacity of container or gel, J/K (default 0)',
+    '  --target              a final temperature to design for: the salt-to-water ratio that reaches it',
+    '  --json                print one JSON object',
+    '',
+    'model options:',
+    '  --heat-capacity <J/K> [--heat-capacity-u <J/K>]   your own heat capacity of the whole fill',
+    '  --kirchhoff           correct ΔsolH from 25 °C to the start temperature (infinite-dilution ΔCp)',
+    '  --monte-carlo <n> [--seed <s>]   95 % interval by n seeded Monte Carlo draws (default: bounds)',
+    '  --curve [--points <n>] [--curve-svg <file>]   the temperature–ratio curve as data and as a chart',
+    '',
+    'time course (defaults are assumed values for illustration):',
+    '  --band <low>:<high>   target band, °C      --duration <s>   (3600)   --tau <s> dissolution time constant (60)',
+    '  --ambient <°C> (22)   --g-ambient <W/K> (0.15)   --skin <°C> (33)   --g-skin <W/K> (0.25)   --time-svg <file>',
+  ].join('\n'),
+  async run(argv, { io, dataset }) {
+    const { values } = readArgs(joinNegativeValues(argv), options, { min: 0, max: 0, names: '' });
+    const saltsGiven = values.salt ?? [];
+    const massesGiven = values['salt-mass'] ?? [];
+    if (saltsGiven.length === 0) throw bad('salt', '--salt is required, with its --salt-mass (e.g. --salt KNO3 --salt-mass 10 --water 100)');
+    if (saltsGiven.length !== massesGiven.length) {
+      throw bad('salt-mass', `--salt is given ${saltsGiven.length} time(s) but --salt-mass ${massesGiven.length} time(s); give one --salt-mass per --salt, in the same order`);
+    }
+    const solids = saltsGiven.map((formula, i) => {
+      try {
+        parseSalt(formula, dataset);
+      } catch (e) {
+        if (isIonheatError(e)) throw new IonheatError(e.code, `--salt "${formula}": ${e.message}`, { field: 'salt', text: formula });
+        throw e;
+      }
+      const mass = numberOption(massesGiven[i], 'salt-mass')!;
+      if (!(mass > 0)) throw bad('salt-mass', `--salt-mass must be greater than zero, got ${mass} g (for ${formula})`);
+      return { formula, massG: mass };
+    });
+    const water = positive(values.water, 'water', 'g', true)!;
+    const start = numberOption(values.start, 'start');
+    if (start !== undefined && !(start >= 0 && start < 100)) throw bad('start', `--start must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${start} °C`);
+    const container = numberOption(values.container, 'container');
+    if (container !== undefined && !(container >= 0)) throw bad('container', `--container must be zero or more J/K, got ${container}`);
+    const target = numberOption(values.target, 'target');
+    const heatCapacity = positive(values['heat-capacity'], 'heat-capacity', 'J/K', false);
+    const heatCapacityU = numberOption(values['heat-capacity-u'], 'heat-capacity-u');
+    if (heatCapacityU !== undefined && !(heatCapacityU >= 0)) throw bad('heat-capacity-u', `--heat-capacity-u must be zero or more J/K, got ${heatCapacityU}`);
+    const draws = numberOption(values['monte-carlo'], 'monte-carlo');
+    if (draws !== undefined && !(Number.isInteger(draws) && draws >= 20 && draws <= 1_000_000)) throw bad('monte-carlo', `--monte-carlo needs a whole number of draws from 20 to 1000000, got ${draws}`);
+    const seed = numberOption(values.seed, 'seed');
+    if (seed !== undefined && !Number.isInteger(seed)) throw bad('seed', `--seed must be a whole number, got ${seed}`);
+    const points = numberOption(values.points, 'points');
+
+    const fill: PackFill = { solids, waterG: water, ...(start !== undefined ? { startC: start } : {}), ...(container !== undefined ? { containerJPerK: container } : {}) };
+    const packOptions: PackOptions = {
+      ...(heatCapacity !== undefined ? { heatCapacityJPerK: heatCapacity, heatCapacityUJPerK: heatCapacityU ?? 0 } : {}),
+      ...(values.kirchhoff ? { kirchhoff: true } : {}),
+      ...(draws !== undefined ? { interval: { method: 'monte-carlo' as const, samples: draws, ...(seed !== undefined ? { seed } : {}) } } : {}),
+    };
+
+    let band: TimeCourseOptions['band'];
+    if (values.band !== undefined) {
+      const parts = values.band.split(/[:,]/);
+      const lo = parts.length === 2 ? numberOption(parts[0], 'band') : undefined;
+      const hi = parts.length === 2 ? numberOption(parts[1], 'band') : undefined;
+      if (lo === undefined || hi === undefined || !(lo < hi)) throw bad('band', `--band needs <low>:<high> in °C with low below high, e.g. --band 40:50; got "${values.band}"`);
+      band = { lowC: lo, highC: hi };
+    }
+    const timeKeys = ['duration', 'tau', 'ambient', 'g-ambient', 'skin', 'g-skin'] as const;
+    const wantsCourse = band !== undefined || values['time-svg'] !== undefined || timeKeys.some((k) => values[k] !== undefined);
+    const courseOptions: TimeCourseOptions = {
+      ...(band ? { band } : {}),
+      ...(values.duration !== undefined ? { durationS: numberOption(values.duration, 'duration')! } : {}),
+      ...(values.tau !== undefined ? { dissolutionTimeConstantS: numberOption(values.tau, 'tau')! } : {}),
+      ...(values.ambient !== undefined ? { ambientC: numberOption(values.ambient, 'ambient')! } : {}),
+      ...(values['g-ambient'] !== undefined ? { ambientConductanceWPerK: numberOption(values['g-ambient'], 'g-ambient')! } : {}),
+      ...(values.skin !== undefined ? { skinC: numberOption(values.skin, 'skin')! } : {}),
+      ...(values['g-skin'] !== undefined ? { skinConductanceWPerK: numberOption(values['g-skin'], 'g-skin')! } : {}),
+    };
+
+    let result: PackResult;
+    let curve: PackRatioCurve;
+    let course: PackTimeCourse | undefined;
+    const withCurve = values.curve === true || values['curve-svg'] !== undefined;
+    try {
+      result = packFinalTemperature(fill, packOptions, dataset);
+      curve = packRatioCurve(fill, { ...(target !== undefined ? { targetC: target } : {}), points: points ?? (withCurve ? 200 : 40), band: withCurve }, packOptions, dataset);
+      course = wantsCourse ? packTimeCourse(fill, courseOptions, packOptions, dataset) : undefined;
+    } catch (e) {
+      const mapped = asOptionError(e);
+      if (isIonheatError(mapped) && mapped.field && !mapped.message.startsWith('--')) {
+        const cli = mapped.field.replace(/^(durationS|dissolutionTimeConstantS|ambientC|ambientConductanceWPerK|skinC|skinConductanceWPerK)$/, (k) => ({ durationS: 'duration', dissolutionTimeConstantS: 'tau', ambientC: 'ambient', ambientConductanceWPerK: 'g-ambient', skinC: 'skin', skinConductanceWPerK: 'g-skin' })[k] ?? k).replace(/^targetC$/, 'target');
+        throw new IonheatError(mapped.code, `--${cli}: ${mapped.message}`, { field: cli });
+      }
+      throw mapped;
+    }
+
+    const written: string[] = [];
+    if (values['curve-svg'] !== undefined) written.push(writeChart(io.cwd, values['curve-svg'], packCurveSvg(curve), 'curve-svg'));
+    if (values['time-svg'] !== undefined && course) {
+      const label = `${fill.solids.map((s) => `${s.massG} g ${s.formula}`).join(' + ')} in ${fill.waterG} g water`;
+      written.push(writeChart(io.cwd, values['time-svg'], timeCourseSvg(course, { fillLabel: label }), 'time-svg'));
+    }
+    if (values.json) {
+      io.stdout(JSON.stringify(jsonReport(result, curve, course, withCurve, dataset), null, 2) + '\n');
+      return 0;
+    }
+    io.stdout(textReport(result, curve, course, dataset));
+    for (const w of written) io.stdout(`chart written to ${w}\n`);
+    return 0;
+  },
+};

@@ -1,0 +1,72 @@
+/**
+ * The columns of the CSV output of a screen. Each header is the path of the
+ * field in the JSON output, so that the same names work in a `--spec`, in
+ * the JSON and in a spreadsheet. Columns that could only ever be empty in a
+ * run are left out: the fill columns without a fill, the spec columns
+ * without a spec, and override columns the input does not have.
+ *
+ * @module
+ */
+import type { ScreenRow, ScreenSettings } from '../../screen/screenRow.js';
+
+type Cell = string | number | boolean | undefined;
+export interface Column {
+  header: string;
+  get(row: ScreenRow): Cell;
+}
+
+const OVERRIDES = ['measuredEnthalpy', 'measuredUncertainty', 'solubility', 'source'] as const;
+
+/**
+ * The columns for a run with these settings.
+ *
+ * @param inputColumns - the candidate fields the input can have (a CSV file's header); default all
+ */
+export function screenColumns(settings: ScreenSettings, inputColumns?: readonly string[]): Column[] {
+  const has = (field: string) => inputColumns === undefined || inputColumns.includes(field);
+  const columns: Column[] = [
+    { header: 'line', get: (r) => r.line },
+    { header: 'status', get: (r) => r.status },
+    { header: 'input.formula', get: (r) => r.input.formula },
+    { header: 'formula', get: (r) => r.formula },
+    { header: 'best.value', get: (r) => r.best?.value },
+    { header: 'best.u', get: (r) => r.best?.u },
+    { header: 'best.low', get: (r) => r.best?.low },
+    { header: 'best.high', get: (r) => r.best?.high },
+    { header: 'best.basis', get: (r) => r.best?.basis },
+    { header: 'verdict', get: (r) => r.verdict },
+    { header: 'probabilityEndothermic', get: (r) => r.probabilityEndothermic },
+    { header: 'perGram.salt.value', get: (r) => r.perGram?.salt.value },
+    { header: 'suitability', get: (r) => r.suitability },
+    { header: 'objective.value', get: (r) => r.objective?.value },
+    { header: 'objective.low', get: (r) => r.objective?.low },
+    { header: 'objective.high', get: (r) => r.objective?.high },
+    { header: 'objective.unit', get: (r) => r.objective?.unit },
+  ];
+  if (settings.fill) {
+    columns.push(
+      { header: 'fill.finalTemperature.value', get: (r) => r.fill?.finalTemperature.value },
+      { header: 'fill.finalTemperature.low', get: (r) => r.fill?.finalTemperature.low },
+      { header: 'fill.finalTemperature.high', get: (r) => r.fill?.finalTemperature.high },
+    );
+  }
+  if (has('pricePerKg')) {
+    columns.push(
+      { header: 'input.pricePerKg', get: (r) => r.input.pricePerKg },
+      { header: 'costPerKJ.value', get: (r) => r.costPerKJ?.value },
+      { header: 'costPerKJ.low', get: (r) => r.costPerKJ?.low },
+      { header: 'costPerKJ.high', get: (r) => r.costPerKJ?.high },
+    );
+  }
+  for (const field of OVERRIDES) if (has(field)) columns.push({ header: `input.${field}`, get: (r) => r.input[field] });
+  columns.push({ header: 'hazards', get: (r) => r.hazards?.join(' ') });
+  if (settings.spec !== null) columns.push({ header: 'spec.holds', get: (r) => r.spec?.holds }, { header: 'spec.reason', get: (r) => r.spec?.reason });
+  columns.push(
+    { header: 'duplicateOf', get: (r) => r.duplicateOf },
+    { header: 'error.code', get: (r) => r.error?.code },
+    { header: 'error.message', get: (r) => r.error?.message ?? r.excludedBy },
+  );
+  if (has('note')) columns.push({ header: 'input.note', get: (r) => r.input.note });
+  columns.push({ header: 'notes', get: (r) => (r.notes && r.notes.length > 0 ? r.notes.join('; ') : undefined) });
+  return columns;
+}

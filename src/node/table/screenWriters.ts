@@ -1,0 +1,127 @@
+/**
+ * Writing the rows of a screen as CSV, JSON, a text table or Markdown.
+ * CSV and JSON are written row by row as the screen runs; the table formats
+ * collect the rows first, to show their rank.
+ *
+ * @module
+ */
+import { stringify } from 'csv-stringify/sync';
+import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
+import { roundToUncertainty } from '../../quantity/rounding.js';
+import type { ScreenRow, ScreenSettings, ScreenSummary } from '../../screen/screenRow.js';
+import { textTable } from '../cli/textTable.js';
+import { csvCell } from './csvCell.js';
+import { screenColumns } from './screenColumns.js';
+
+/** A writer that turns rows into text as they come. */
+export interface StreamWriter {
+  start(): string;
+  row(row: ScreenRow): string;
+  end(summary: ScreenSummary): string;
+}
+
+/** Records handed to csv-stringify at a time (one call per batch, not per row). */
+const CSV_BATCH = 256;
+
+/** CSV: a header of JSON field paths, one record per row; text cells neutralised against formula injection. */
+export function csvWriter(settings: ScreenSettings, inputColumns?: readonly string[]): StreamWriter {
+  const columns = screenColumns(settings, inputColumns);
+  let batch: (string | number)[][] = [];
+  const flush = (): string => {
+    if (batch.length === 0) return '';
+    const text = stringify(batch, { escape_formulas: true });
+    batch = [];
+    return text;
+  };
+  return {
+    start: () => stringify([columns.map((c) => c.header)], { escape_formulas: true }),
+    row: (row) => {
+      batch.push(columns.map((c) => csvCell(c.get(row))));
+      return batch.length >= CSV_BATCH ? flush() : '';
+    },
+    end: () => flush(),
+  };
+}
+
+/** JSON: one document `{ version, settings, rows: [...], summary }`, the rows written as they come. */
+export function jsonWriter(settings: ScreenSettings): StreamWriter {
+  let first = true;
+  return {
+    start: () => `{\n"version": 1,\n"settings": ${JSON.stringify(settings)},\n"rows": [\n`,
+    row: (row) => {
+      const text = (first ? '' : ',\n') + JSON.stringify(row);
+      first = false;
+      return text;
+    },
+    end: (summary) => `${first ? '' : '\n'}],\n"summary": ${JSON.stringify(summary)}\n}\n`,
+  };
+}
+
+const minus = (s: string): string => (s.startsWith('-') ? `−${s.slice(1)}` : s);
+
+/** `34.89 [34.50, 35.28]` with the decimals the uncertainty allows. */
+export function estimateText(e: Estimate | undefined, withUnit = false): string {
+  if (!e) return '—';
+  const r = roundEstimate(e);
+  const decimals = e.u > 0 ? Math.min(6, Math.max(0, -roundToUncertainty(e.value, e.u).exponent)) : 2;
+  const f = (x: number) => minus(x.toFixed(decimals));
+  return `${f(r.value)} [${f(r.low)}, ${f(r.high)}]${withUnit ? ` ${e.unit}` : ''}`;
+}
+
+function cellsOf(row: ScreenRow, settings: ScreenSettings, withCost: boolean): string[] {
+  const status = row.status === 'failed' ? `failed: ${row.error?.message ?? ''}` : row.status === 'excluded' ? `left out: ${row.excludedBy ?? ''}` : '';
+  const cells = [
+    row.rank !== undefined ? String(row.rank) : '',
+    String(row.line),
+    row.formula ?? row.input.formula,
+    row.status === 'computed' ? estimateText(row.objective) : '',
+    row.objective?.basis ?? '',
+    row.status === 'computed' ? (row.verdict ?? '') : '',
+  ];
+  if (withCost) cells.push(estimateText(row.costPerKJ));
+  cells.push(row.hazards && row.hazards.length > 0 ? row.hazards.join(', ') : '');
+  if (settings.spec !== null) cells.push(row.spec ? (row.spec.holds ? 'holds' : `fails: ${row.spec.reason ?? ''}`) : '');
+  const notes = [status, row.duplicateOf !== undefined ? `same as line ${row.duplicateOf}` : '', row.input.note ?? ''].filter((s) => s !== '');
+  cells.push(notes.join('; '));
+  return cells;
+}
+
+function headerOf(settings: ScreenSettings, rows: readonly ScreenRow[], withCost: boolean): string[] {
+  const unit = rows.find((r) => r.objective)?.objective?.unit;
+  const header = ['rank', 'line', 'salt', `${settings.objective}${unit ? ` (${unit})` : ''} [95 %]`, 'basis', 'verdict'];
+  if (withCost) header.push('cost per kJ [95 %]');
+  header.push('hazards');
+  if (settings.spec !== null) header.push('spec');
+  header.push('notes');
+  return header;
+}
+
+const CAUTION = 'Screening estimates: confirm by measurement; they defer to local codes, product-safety regulation and licensed practice. Hazard classes are from the hazards table; the safety data sheet of the material used takes precedence.';
+
+/** A plain-text table of collected rows (in the order given), with a heading and the caution. */
+export function textTableOf(rows: readonly ScreenRow[], settings: ScreenSettings): string {
+  const withCost = rows.some((r) => r.input.pricePerKg !== undefined);
+  const header = headerOf(settings, rows, withCost);
+  const right = new Set([0, 1]);
+  const body = rows.map((r) => cellsOf(r, settings, withCost));
+  return `${textTable(header, body, right)}\n${CAUTION}\n`;
+}
+
+/** A Markdown table of collected rows, with the caution below it. */
+export function markdownTableOf(rows: readonly ScreenRow[], settings: ScreenSettings): string {
+  const withCost = rows.some((r) => r.input.pricePerKg !== undefined);
+  const cell = (s: string) => s.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/[\r\n]+/g, ' ');
+  const header = headerOf(settings, rows, withCost);
+  const lines = [`| ${header.map(cell).join(' | ')} |`, `| ${header.map((_, i) => (i <= 1 ? '---:' : '---')).join(' | ')} |`];
+  for (const r of rows) lines.push(`| ${cellsOf(r, settings, withCost).map(cell).join(' | ')} |`);
+  return `${lines.join('\n')}\n\n${CAUTION}\n`;
+}
+
+/** The one-line summary of a run. */
+export function summaryLine(summary: ScreenSummary, hasSpec: boolean): string {
+  const parts = [`${summary.read} row${summary.read === 1 ? '' : 's'} read`, `${summary.computed} computed`, `${summary.failed} failed`];
+  if (summary.excluded > 0) parts.push(`${summary.excluded} left out`);
+  if (hasSpec) parts.push(`spec held for ${summary.specHeld}, failed for ${summary.specFailed}`);
+  const blank = summary.blankLines > 0 ? ` (${summary.blankLines} blank line${summary.blankLines === 1 ? '' : 's'} skipped)` : '';
+  return `screen: ${parts.join(', ')}${blank}`;
+}

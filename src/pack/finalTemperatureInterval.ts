@@ -1,0 +1,188 @@
+/**
+ * The 95 % interval of a fill's final temperature, propagated from the
+ * intervals of the enthalpies of solution and the uncertainty of the heat
+ * capacity.
+ *
+ * @module
+ */
+import { COVERAGE_95 } from '../quantity/constants.js';
+import { quadrature } from '../quantity/propagate.js';
+import type { Perturbation } from './fillEquilibrium.js';
+import type { PackIntervalOptions, PreparedFill } from './packFill.js';
+import { seededNormal } from './seededNormal.js';
+import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
+
+/** One uncertain input of the balance. @internal */
+export interface UncertainInput {
+  /** What it is, in words. */
+  label: string;
+  /** Standard uncertainty, in the unit of the shift. */
+  u: number;
+  /** The perturbation that moves this input by `shift`. */
+  perturb(shift: number): Perturbation;
+}
+
+/** The interval and how it was found. */
+export interface TemperatureInterval {
+  /** °C. */
+  low: number;
+  /** °C. */
+  high: number;
+  /** Standard uncertainty, K. */
+  u: number;
+  method: 'bounds' | 'monte-carlo';
+  /** Monte Carlo only. */
+  samples?: number;
+  seed?: number;
+  /** How the interval was found, in words. */
+  description: string;
+}
+
+/** Default Monte Carlo draws. */
+export const DEFAULT_SAMPLES = 2000;
+/** Default Monte Carlo seed: fixed, so that a result is reproducible. */
+export const DEFAULT_SEED = 1;
+
+/**
+ * The uncertain inputs of a fill at its solved state: each solid's enthalpy of
+ * solution (kJ/mol), that of each equilibrium solid an undissolved salt
+ * turns into, and the heat capacity (relative).
+ *
+ * Heat capacity from the parts: u² = (W·u(c_w))² + Σ(nᵢ,dissolved)²·(u(Cp°ᵢ)² + aᵢ²)
+ * + Σ(nᵢ,undissolved·u(Cp°solid))², where aᵢ = |Cp°(crystal) − Σν·Cp°(aq)|/√3
+ * allows for the dissolved salt's true heat capacity lying anywhere between
+ * the concentrated (crystal, additive) and the infinitely dilute limit.
+ * @internal
+ */
+export function uncertainInputs(fill: PreparedFill, solution: FillSolution): UncertainInput[] {
+  const inputs: UncertainInput[] = [];
+  const n = fill.solids.length;
+  const shiftAt = (i: number, shift: number): number[] => Array.from({ length: n }, (_, k) => (k === i ? shift : 0));
+  fill.solids.forEach((s, i) => {
+    inputs.push({ label: `enthalpy of solution of ${s.salt.formula}`, u: s.enthalpy.u, perturb: (shift) => ({ enthalpyShift: shiftAt(i, shift) }) });
+    const state = solution.state.solids[i]!;
+    if (state.converts && state.fraction < 1) {
+      const phase = s.phases.get(state.undissolvedPhase);
+      const u = phase?.enthalpy?.u ?? 0;
+      inputs.push({ label: `enthalpy of solution of ${state.undissolvedPhase}`, u, perturb: (shift) => ({ phaseShift: shiftAt(i, shift) }) });
+    }
+  });
+  if (fill.heatCapacityOverride) {
+    const { value, u } = fill.heatCapacityOverride;
+    inputs.push({ label: 'your heat capacity', u: u / value, perturb: (shift) => ({ heatCapacityRelative: shift }) });
+  } else {
+    inputs.push({ label: 'heat capacity from the parts', u: heatCapacityRelativeU(fill, solution), perturb: (shift) => ({ heatCapacityRelative: shift }) });
+  }
+  return inputs.filter((input) => input.u > 0);
+}
+
+/**
+ * Relative standard uncertainty of the heat capacity from the parts at the
+ * solved state (see {@link uncertainInputs}); 0 with an override.
+ * @internal
+ */
+export function heatCapacityRelativeU(fill: PreparedFill, solution: FillSolution): number {
+  if (fill.heatCapacityOverride) return 0;
+  const state = solution.state;
+  const terms = [state.liquidWaterG * fill.waterSpecificHeat.u];
+  fill.solids.forEach((s, i) => {
+    const e = state.solids[i]!;
+    terms.push(s.moles * e.fraction * quadrature(s.heatCapacityAnhydrous.u, s.additivityU));
+    const solidCp = e.converts ? (s.phases.get(e.undissolvedPhase)?.heatCapacity.u ?? 0) : s.heatCapacityLoaded.u;
+    terms.push(s.moles * (1 - e.fraction) * solidCp);
+  });
+  const parts = state.heatCapacity - state.heatCapacityParts.container;
+  return parts > 0 ? quadrature(...terms) / parts : 0;
+}
+
+/**
+ * The 95 % interval of the final temperature.
+ *
+ * `bounds` (the default): each uncertain input in turn is moved to the ends
+ * of its own 95 % interval (±1.96·u) and the fill re-solved; the upward and
+ * the downward shifts of the final temperature are each combined in
+ * quadrature (first-order propagation, GUM, with separate sensitivities on
+ * each side, so a solubility limit or the freezing clamp shows as a lopsided
+ * interval). u is the root sum of squares of the central differences.
+ *
+ * `monte-carlo`: every input drawn together from its normal distribution
+ * (seeded, default seed 1, 2000 draws), the fill solved for each draw, and
+ * the 2.5th and 97.5th percentiles taken; u is the spread of the draws.
+ *
+ * Inputs are treated as independent, which overstates the spread where two
+ * enthalpies share a formation enthalpy.
+ *
+ * @see JCGM 100:2008 (GUM) §5.1; JCGM 101:2008 (propagation of distributions by Monte Carlo).
+ * @internal
+ */
+export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolution, options: PackIntervalOptions = { method: 'bounds' }): TemperatureInterval {
+  const t = solution.temperature;
+  const inputs = uncertainInputs(fill, solution);
+  const listed = inputs.map((i) => i.label).join(', ');
+  if (options.method === 'monte-carlo') {
+    const samples = Math.max(20, Math.floor(options.samples ?? DEFAULT_SAMPLES));
+    const seed = options.seed ?? DEFAULT_SEED;
+    const draw = seededNormal(seed);
+    const n = fill.solids.length;
+    const results = new Float64Array(samples);
+    for (let k = 0; k < samples; k++) {
+      const enthalpyShift = new Array<number>(n).fill(0);
+      const phaseShift = new Array<number>(n).fill(0);
+      let heatCapacityRelative = 0;
+      for (const input of inputs) {
+        const p = input.perturb(1);
+        const z = draw() * input.u;
+        if (p.enthalpyShift) p.enthalpyShift.forEach((v, i) => (enthalpyShift[i]! += v * z));
+        if (p.phaseShift) p.phaseShift.forEach((v, i) => (phaseShift[i]! += v * z));
+        if (p.heatCapacityRelative) heatCapacityRelative += p.heatCapacityRelative * z;
+      }
+      results[k] = solveFillTemperature(fill, { enthalpyShift, phaseShift, heatCapacityRelative: Math.max(-0.9, heatCapacityRelative) }).temperature;
+    }
+    results.sort();
+    const quantile = (q: number): number => {
+      const pos = q * (samples - 1);
+      const lo = Math.floor(pos);
+      const hi = Math.min(samples - 1, lo + 1);
+      return results[lo]! + (results[hi]! - results[lo]!) * (pos - lo);
+    };
+    let mean = 0;
+    for (const r of results) mean += r / samples;
+    let variance = 0;
+    for (const r of results) variance += (r - mean) ** 2 / (samples - 1);
+    return {
+      low: Math.min(t, quantile(0.025)),
+      high: Math.max(t, quantile(0.975)),
+      u: Math.sqrt(variance),
+      method: 'monte-carlo',
+      samples,
+      seed,
+      description: `95 % interval from ${samples} seeded Monte Carlo draws (seed ${seed}) of ${listed || 'no uncertain input'}, each normal and independent; 2.5th to 97.5th percentile`,
+    };
+  }
+  let up = 0;
+  let down = 0;
+  let central = 0;
+  // The combined shift may not carry the interval past a floor or ceiling that a re-solve ran into.
+  let floor = solution.clamp && solution.clamp.kind !== 'boiling' ? solution.clamp.temperature : -Infinity;
+  let ceiling = solution.clamp?.kind === 'boiling' ? solution.clamp.temperature : Infinity;
+  for (const input of inputs) {
+    const plusSolution = solveFillTemperature(fill, input.perturb(COVERAGE_95 * input.u));
+    const minusSolution = solveFillTemperature(fill, input.perturb(-COVERAGE_95 * input.u));
+    for (const s of [plusSolution, minusSolution]) {
+      if (s.clamp?.kind === 'boiling') ceiling = Math.min(ceiling, s.clamp.temperature);
+      else if (s.clamp) floor = floor === -Infinity ? s.clamp.temperature : Math.min(floor, s.clamp.temperature);
+    }
+    const plus = plusSolution.temperature;
+    const minus = minusSolution.temperature;
+    up += Math.max(0, plus - t, minus - t) ** 2;
+    down += Math.max(0, t - plus, t - minus) ** 2;
+    central += ((plus - minus) / (2 * COVERAGE_95)) ** 2;
+  }
+  return {
+    low: Math.min(t, Math.max(floor, t - Math.sqrt(down))),
+    high: Math.max(t, Math.min(ceiling, t + Math.sqrt(up))),
+    u: Math.sqrt(central),
+    method: 'bounds',
+    description: `95 % interval by bounds: each of ${listed || 'no uncertain input'} moved in turn to the ends of its own 95 % interval and the fill re-solved; upward and downward shifts combined in quadrature, and kept within any freezing, eutectic or boiling limit a re-solve reached`,
+  };
+}

@@ -1,0 +1,114 @@
+/**
+ * The cautions every pack result carries: contact burns from hot fills, cold
+ * injury from cold ones, boiling, the chemical hazards of the salts, and the
+ * closing reminder that these are screening estimates.
+ *
+ * @module
+ */
+import type { Dataset } from '../data/dataset.js';
+import { builtinDataset } from '../data/builtin.js';
+import type { Salt } from '../chem/salt.js';
+import { saltHazards } from './saltHazards.js';
+
+/**
+ * Skin-contact temperature above which a burn becomes possible when contact
+ * lasts a long time (tens of minutes to hours), °C: about 44 °C after
+ * ISO 13732-1:2006, whose burn thresholds fall as the contact time grows
+ * (from memory; not checked against a copy of the standard).
+ */
+export const CONTACT_BURN_THRESHOLD_C = 44;
+
+/** Change of temperature below which a fill counts as neither hot nor cold, K. */
+const NEUTRAL_BAND_K = 0.5;
+
+/** The closing line of every caution list. */
+export const SCREENING_LINE =
+  'These are screening estimates from tabulated data; they do not replace testing of the real product and defer to local codes, product-safety regulation and licensed practice.';
+
+/** What the cautions are about. */
+export interface CautionInput {
+  /** Start temperature, °C. */
+  startC: number;
+  /** Final temperature and its 95 % interval, °C. */
+  final: { value: number; low: number; high: number };
+  /** Set when the balance was cut short by freezing, a eutectic or boiling. */
+  clamp?: 'freezing' | 'eutectic' | 'boiling' | undefined;
+  /** The solids of the fill. */
+  salts: readonly Salt[];
+  /** From a time course, when one was run: seconds the pack spends above the burn threshold. */
+  secondsAboveBurnThreshold?: number;
+}
+
+const c = (x: number): string => `${x.toFixed(1)} °C`;
+
+/** The head of a citation, for a bracket after a caution. */
+function shortCitation(citation: string | undefined): string | undefined {
+  if (!citation) return undefined;
+  const cut = citation.search(/[.:;]\s/);
+  const head = cut > 0 ? citation.slice(0, cut) : citation;
+  return head.length > 100 ? `${head.slice(0, 99)}…` : head;
+}
+
+/**
+ * The cautions for a fill, in plain words, each naming its basis:
+ *
+ * - hot fill whose 95 % interval reaches above about 44 °C: contact-burn risk,
+ *   growing with contact time (ISO 13732-1, threshold from memory);
+ * - warm fill below that: long contact can still harm people who cannot feel
+ *   or move away from heat (common practice);
+ * - boiling: scalding liquid or steam, a pack that may burst;
+ * - cold fill: cold injury from prolonged direct contact, frostbite risk at or
+ *   below 0 °C (common practice: a cloth between pack and skin, about 20
+ *   minutes at a time);
+ * - every hazard the hazards table gives for each salt, with its source;
+ * - last, the screening line.
+ *
+ * @example
+ * ```ts
+ * const salts = [parseSalt('CaCl2')];
+ * const list = packCautions({ startC: 20, final: { value: 62, low: 60, high: 64 }, salts });
+ * list[0].startsWith('Contact-burn risk'); // true
+ * list[list.length - 1] === SCREENING_LINE; // true
+ * ```
+ */
+export function packCautions(input: CautionInput, dataset: Dataset = builtinDataset()): string[] {
+  const out: string[] = [];
+  const { startC, final } = input;
+  const hot = final.value > startC + NEUTRAL_BAND_K;
+  const cold = final.value < startC - NEUTRAL_BAND_K;
+  if (input.clamp === 'boiling') {
+    out.push(
+      'Boiling: the heat released would bring the fill to the boiling point of the solution. Boiling brine scalds, steam can burst the pack, and the real temperature may exceed 100 °C because dissolved salt raises the boiling point. Use less salt or more water.',
+    );
+  }
+  if (final.high > CONTACT_BURN_THRESHOLD_C) {
+    const held = input.secondsAboveBurnThreshold !== undefined && input.secondsAboveBurnThreshold > 0 ? ` In the time course it stays above ${CONTACT_BURN_THRESHOLD_C} °C for about ${Math.round(input.secondsAboveBurnThreshold / 60)} min.` : '';
+    out.push(
+      `Contact-burn risk: the fill may reach ${c(final.value)} (95 % interval up to ${c(final.high)}), above the roughly ${CONTACT_BURN_THRESHOLD_C} °C at which ISO 13732-1 puts the burn threshold for skin contact lasting many minutes to hours (threshold from memory, not checked against the standard). The hotter the pack and the longer it is held against skin, the greater the risk, and the threshold drops as contact lengthens. Keep an insulating sleeve between pack and skin and limit contact time; take special care with children, older people and anyone with poor sensation or circulation.${held}`,
+    );
+  } else if (hot) {
+    out.push(
+      `Warm fill: it stays below the roughly ${CONTACT_BURN_THRESHOLD_C} °C long-contact burn threshold of ISO 13732-1 (from memory), but prolonged contact with warm packs can still injure people who cannot feel heat or move away from it (common practice: a cover and limited contact time).`,
+    );
+  }
+  if (cold) {
+    const frost = final.low <= 0 || input.clamp === 'freezing' || input.clamp === 'eutectic';
+    out.push(
+      `Cold injury: prolonged direct contact of a cold pack with skin can injure it${frost ? '; this fill can reach 0 °C or below, where frostbite is possible within minutes' : ''}. Common practice: a cloth between pack and skin, about 20 minutes at a time with breaks, never on skin that cannot feel cold.`,
+    );
+  }
+  for (const salt of input.salts) {
+    const hazards = saltHazards(salt, dataset);
+    if (hazards.length === 0) {
+      out.push(`${salt.formula}: no hazard entry in the ionheat hazards table; read the safety data sheet of the material actually used.`);
+      continue;
+    }
+    for (const h of hazards) {
+      const cited = shortCitation(dataset.source(h.source)?.citation) ?? h.source;
+      const restricted = h.classes.includes('restricted') || h.classes.includes('explosive-precursor') ? ' Sale, storage or use is restricted in some jurisdictions; check the local rules before choosing it.' : '';
+      out.push(`${salt.formula} (${h.classes.join(', ')}): ${h.statement}${restricted} [${h.source}: ${cited}${h.fromMemory ? '; classification from memory' : ''}]`);
+    }
+  }
+  out.push(SCREENING_LINE);
+  return out;
+}

@@ -1,0 +1,304 @@
+/**
+ * A pack fill — solids, water, start temperature, container — checked and
+ * joined to the data it needs: enthalpies of solution, heat capacities,
+ * solubility curves and the equilibrium solids those curves name.
+ *
+ * @module
+ */
+import type { Dataset } from '../data/dataset.js';
+import { builtinDataset } from '../data/builtin.js';
+import { parseSalt } from '../chem/parseSalt.js';
+import { ionsPerFormulaUnit, type Salt } from '../chem/salt.js';
+import { saltRecords, WATER } from '../chem/saltRecords.js';
+import { molarMass } from '../chem/molarMass.js';
+import { dissolve } from '../solution/dissolve.js';
+import { IonheatError, isIonheatError } from '../error.js';
+import { makeEstimate, type Estimate } from '../quantity/estimate.js';
+import { quadrature } from '../quantity/propagate.js';
+import { aqueousHeatCapacity, solidHeatCapacity, waterSpecificHeat } from './solidHeatCapacity.js';
+import { solubilityCurve, type SolubilityCurve } from './solubilityCurve.js';
+
+/** One solid of a fill. */
+export interface PackSolid {
+  /** Formula as loaded, hydrate water included (`CaCl2`, `NaCH3COO·3H2O`). */
+  formula: string;
+  /** Grams loaded. */
+  massG: number;
+}
+
+/** What goes into the pack. */
+export interface PackFill {
+  solids: readonly PackSolid[];
+  /** Grams of liquid water (not counting any water of crystallization of the solids). */
+  waterG: number;
+  /** Start temperature of water, solids and container, °C (default 20 °C). */
+  startC?: number;
+  /** Heat capacity of the container, gel or wrapping that follows the fill's temperature, J/K (default 0). */
+  containerJPerK?: number;
+}
+
+/** How the 95 % interval of the final temperature is found. */
+export type PackIntervalOptions =
+  | { method: 'bounds' }
+  | {
+      method: 'monte-carlo';
+      /** Number of draws (default 2000). */
+      samples?: number;
+      /** Seed of the pseudo-random draws (default 1): the same seed gives the same interval. */
+      seed?: number;
+    };
+
+/** Options of the pack model. */
+export interface PackOptions {
+  /**
+   * Your own heat capacity of the whole fill (solution, undissolved solid and
+   * container), J/K, replacing the sum of parts.
+   */
+  heatCapacityJPerK?: number;
+  /** Standard uncertainty of your heat capacity, J/K (default 0). */
+  heatCapacityUJPerK?: number;
+  /**
+   * Correct each enthalpy of solution from 25 °C to the start temperature with
+   * ΔsolCp° at infinite dilution (Kirchhoff), where the tables give it.
+   * Default false: the 25 °C values are used as they are.
+   */
+  kirchhoff?: boolean;
+  /** Default `{ method: 'bounds' }`. */
+  interval?: PackIntervalOptions;
+}
+
+/** An equilibrium solid a salt may leave undissolved. @internal */
+export interface PreparedPhase {
+  formula: string;
+  /** Water of crystallization per formula unit. */
+  water: number;
+  /** Enthalpy of solution of this solid at the start temperature, kJ/mol, when known. */
+  enthalpy: Estimate | undefined;
+  /** Cp° of this solid, J/(mol·K). */
+  heatCapacity: Estimate;
+}
+
+/** One solid joined to its data. @internal */
+export interface PreparedSolid {
+  input: PackSolid;
+  salt: Salt;
+  massG: number;
+  /** Moles of formula units loaded. */
+  moles: number;
+  /** Molar mass of the anhydrous salt, g/mol. */
+  anhydrousMolarMass: number;
+  /** Particles per formula unit in solution (ions, or 1 for a non-electrolyte). */
+  particles: number;
+  /** Enthalpy of solution as used (25 °C, or Kirchhoff-corrected to the start), kJ/mol of the loaded formula. */
+  enthalpy: Estimate;
+  /** Cp° of the solid as loaded, J/(mol·K). */
+  heatCapacityLoaded: Estimate;
+  /** Cp° of the anhydrous crystal, J/(mol·K): its contribution to the solution's heat capacity. */
+  heatCapacityAnhydrous: Estimate;
+  /** Standard uncertainty allowed for using the crystal's Cp° for the dissolved salt, J/(mol·K). */
+  additivityU: number;
+  curve: SolubilityCurve | undefined;
+  /** Every equilibrium solid the curve names, by canonical formula. */
+  phases: ReadonlyMap<string, PreparedPhase>;
+}
+
+/** A checked fill with its data. @internal */
+export interface PreparedFill {
+  solids: PreparedSolid[];
+  waterG: number;
+  startC: number;
+  containerJPerK: number;
+  /** J/(g·K). */
+  waterSpecificHeat: Estimate;
+  /** g/mol. */
+  waterMolarMass: number;
+  /** The user's heat capacity, J/K, when given. */
+  heatCapacityOverride: { value: number; u: number } | undefined;
+  /** Notes that hold whatever the final state. */
+  notes: string[];
+  sources: string[];
+  dataset: Dataset;
+}
+
+/** Default start temperature: a room, °C (common practice). */
+export const DEFAULT_START_C = 20;
+
+/**
+ * Relative allowance for the heat capacity a dissolved salt adds when the
+ * infinite-dilution value is not tabulated: an assumed 50 % of the crystal's
+ * Cp°, not a published figure.
+ */
+const ADDITIVITY_FALLBACK_RELATIVE = 0.5;
+
+function invalid(field: string, message: string): IonheatError {
+  return new IonheatError('INVALID_ARGUMENT', message, { field });
+}
+
+function checkPositive(value: unknown, field: string, what: string, unit: string): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) throw invalid(field, `${what} (${field}) must be a number of ${unit}, got ${String(value)}`);
+  if (value <= 0) throw invalid(field, `${what} (${field}) must be greater than zero, got ${value} ${unit}`);
+  return value;
+}
+
+/** Kirchhoff: ΔH(T) = ΔH(25 °C) + ΔCp·(T − 25 °C), with ΔCp = Σν·Cp°(aq) + n·Cp°(H2O, l) − Cp°(solid). */
+function kirchhoff(h25: Estimate, solid: Salt, solidCp: Estimate, startC: number, dataset: Dataset): Estimate | undefined {
+  const aq = aqueousHeatCapacity(solid, dataset);
+  if (!aq) return undefined;
+  const water = saltRecords('heat-capacities.json', { formula: WATER }, dataset).find((r) => r.phase === 'l');
+  if (!water) return undefined;
+  const dCp = aq.value + solid.water * water.value - solidCp.value; // J/(mol·K)
+  const uCp = quadrature(aq.u, solidCp.u, solid.water * (dataset.uncertaintyOf('heat-capacities.json', water) ?? 0));
+  const dT = startC - 25;
+  return makeEstimate({
+    ...h25,
+    value: h25.value + (dCp * dT) / 1000,
+    u: quadrature(h25.u, (uCp * Math.abs(dT)) / 1000),
+    low: undefined,
+    high: undefined,
+    sources: [...h25.sources, ...aq.sources, water.source],
+    notes: [...h25.notes, `corrected from 25 °C to ${startC} °C with ΔsolCp° = ${dCp.toFixed(1)} J/(mol·K) at infinite dilution (Kirchhoff)`],
+  });
+}
+
+function enthalpyOf(salt: Salt, field: string, dataset: Dataset): Estimate {
+  try {
+    return dissolve(salt, {}, dataset).best;
+  } catch (e) {
+    if (isIonheatError(e)) throw new IonheatError(e.code, `${field} "${salt.formula}": ${e.message}`, { text: salt.formula, field });
+    throw e;
+  }
+}
+
+/**
+ * Checks a fill and joins it to its data.
+ *
+ * @throws IonheatError `INVALID_ARGUMENT` naming the field (`solids[0].massG`,
+ * `waterG`, `startC`…) for a non-positive mass, no water, a start temperature
+ * outside liquid water (0–100 °C), or the same salt listed twice; the
+ * formula parser's errors, and `MISSING_DATA`, for an unknown salt or one
+ * without an enthalpy of solution.
+ * @internal
+ */
+export function preparePackFill(fill: PackFill, options: PackOptions = {}, dataset: Dataset = builtinDataset()): PreparedFill {
+  if (fill === null || typeof fill !== 'object') throw invalid('fill', 'a pack fill is an object with solids, waterG and optionally startC and containerJPerK');
+  if (!Array.isArray(fill.solids) || fill.solids.length === 0) throw invalid('solids', 'a pack fill needs at least one solid (solids: [{ formula, massG }])');
+  const waterG = checkPositive(fill.waterG, 'waterG', 'the water', 'g');
+  const startC = fill.startC ?? DEFAULT_START_C;
+  if (typeof startC !== 'number' || !Number.isFinite(startC) || startC < 0 || startC >= 100) {
+    throw invalid('startC', `the start temperature (startC) must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${String(startC)} °C`);
+  }
+  const containerJPerK = fill.containerJPerK ?? 0;
+  if (typeof containerJPerK !== 'number' || !Number.isFinite(containerJPerK) || containerJPerK < 0) {
+    throw invalid('containerJPerK', `the container heat capacity (containerJPerK) must be zero or more J/K, got ${String(containerJPerK)}`);
+  }
+  let heatCapacityOverride: PreparedFill['heatCapacityOverride'];
+  if (options.heatCapacityJPerK !== undefined) {
+    const value = checkPositive(options.heatCapacityJPerK, 'heatCapacityJPerK', 'your heat capacity', 'J/K');
+    const u = options.heatCapacityUJPerK ?? 0;
+    if (typeof u !== 'number' || !Number.isFinite(u) || u < 0) throw invalid('heatCapacityUJPerK', `the uncertainty of your heat capacity (heatCapacityUJPerK) must be zero or more J/K, got ${String(u)}`);
+    heatCapacityOverride = { value, u };
+  }
+
+  const water = waterSpecificHeat(dataset);
+  const waterMolarMass = molarMass({ H: 2, O: 1 }, dataset);
+  const notes: string[] = [];
+  const sources = new Set<string>(water.sources);
+  const seen = new Map<string, string>();
+
+  const solids = fill.solids.map((solid, i): PreparedSolid => {
+    const field = `solids[${i}]`;
+    if (solid === null || typeof solid !== 'object') throw invalid(field, `${field} must be an object { formula, massG }`);
+    if (typeof solid.formula !== 'string' || solid.formula.trim() === '') throw invalid(`${field}.formula`, `${field}.formula must be a salt formula`);
+    let salt: Salt;
+    try {
+      salt = parseSalt(solid.formula, dataset);
+    } catch (e) {
+      if (isIonheatError(e)) throw new IonheatError(e.code, `${field}.formula "${solid.formula}": ${e.message}`, { text: solid.formula, field: `${field}.formula` });
+      throw e;
+    }
+    const massG = checkPositive(solid.massG, `${field}.massG`, `the mass of ${salt.formula}`, 'g');
+    const earlier = seen.get(salt.anhydrous);
+    if (earlier !== undefined) {
+      throw invalid(`${field}.formula`, `${salt.formula} (${field}) and ${earlier} are the same salt; they share one solubility, so list the salt once`);
+    }
+    seen.set(salt.anhydrous, `${salt.formula} (${field})`);
+
+    const h25 = enthalpyOf(salt, `${field}.formula`, dataset);
+    const heatCapacityLoaded = solidHeatCapacity(salt, dataset);
+    const anhydrousSalt = salt.water > 0 ? parseSalt(salt.anhydrous, dataset) : salt;
+    const heatCapacityAnhydrous = salt.water > 0 ? solidHeatCapacity(anhydrousSalt, dataset) : heatCapacityLoaded;
+    const aq = aqueousHeatCapacity(anhydrousSalt, dataset);
+    const additivityU = aq
+      ? Math.hypot(Math.abs(heatCapacityAnhydrous.value - aq.value) / Math.sqrt(3), aq.u)
+      : ADDITIVITY_FALLBACK_RELATIVE * heatCapacityAnhydrous.value;
+
+    let enthalpy = h25;
+    if (options.kirchhoff) {
+      const corrected = kirchhoff(h25, salt, heatCapacityLoaded, startC, dataset);
+      if (corrected) enthalpy = corrected;
+      else notes.push(`no Kirchhoff correction for ${salt.formula}: the tables lack the heat capacity of one of its aqueous ions; its 25 °C enthalpy of solution is used`);
+    }
+
+    const curve = solubilityCurve(salt, dataset);
+    const phases = new Map<string, PreparedPhase>();
+    if (curve) {
+      for (const point of curve.points) {
+        if (phases.has(point.phase)) continue;
+        if (point.phase === salt.formula) {
+          phases.set(point.phase, { formula: point.phase, water: salt.water, enthalpy, heatCapacity: heatCapacityLoaded });
+          continue;
+        }
+        const phaseSalt = parseSalt(point.phase, dataset);
+        let phaseEnthalpy: Estimate | undefined;
+        try {
+          phaseEnthalpy = dissolve(phaseSalt, {}, dataset).best;
+        } catch (e) {
+          if (!isIonheatError(e)) throw e;
+          phaseEnthalpy = undefined;
+        }
+        const phaseCp = solidHeatCapacity(phaseSalt, dataset);
+        if (phaseEnthalpy && options.kirchhoff) phaseEnthalpy = kirchhoff(phaseEnthalpy, phaseSalt, phaseCp, startC, dataset) ?? phaseEnthalpy;
+        phases.set(point.phase, { formula: point.phase, water: phaseSalt.water, enthalpy: phaseEnthalpy, heatCapacity: phaseCp });
+      }
+      sources.add(curve.source);
+    } else {
+      notes.push(`no solubility data for ${salt.formula}: assumed to dissolve completely whatever the temperature`);
+    }
+    for (const s of [...enthalpy.sources, ...heatCapacityLoaded.sources, ...heatCapacityAnhydrous.sources, ...(aq?.sources ?? [])]) sources.add(s);
+
+    return {
+      input: { formula: solid.formula, massG },
+      salt,
+      massG,
+      moles: massG / salt.molarMass,
+      anhydrousMolarMass: anhydrousSalt.molarMass,
+      particles: ionsPerFormulaUnit(salt),
+      enthalpy,
+      heatCapacityLoaded,
+      heatCapacityAnhydrous,
+      additivityU,
+      curve,
+      phases,
+    };
+  });
+  if (solids.length > 1) notes.push('several solids: their heats of solution are added and each dissolves against the same water as if alone; mixing effects (common ions, salting out, heats of mixing) are ignored');
+
+  return { solids, waterG, startC, containerJPerK, waterSpecificHeat: water, waterMolarMass, heatCapacityOverride, notes, sources: [...sources], dataset };
+}
+
+/**
+ * The same prepared fill with every solid's mass multiplied by `factor`
+ * (water, start and container unchanged): for sweeps over the salt-to-water ratio.
+ * @internal
+ */
+export function scalePreparedFill(prepared: PreparedFill, factor: number): PreparedFill {
+  return {
+    ...prepared,
+    solids: prepared.solids.map((s) => ({ ...s, massG: s.massG * factor, moles: s.moles * factor, input: { ...s.input, massG: s.massG * factor } })),
+  };
+}
+
+/** The same prepared fill with another water mass. @internal */
+export function withWater(prepared: PreparedFill, waterG: number): PreparedFill {
+  return { ...prepared, waterG };
+}

@@ -1,0 +1,227 @@
+/**
+ * `packFinalTemperature`: the temperature a hot or cold pack fill reaches,
+ * limited by solubility and by freezing or boiling, with its 95 % interval,
+ * the dissolved and undissolved masses, the heat, and the cautions.
+ *
+ * @module
+ */
+import type { Dataset } from '../data/dataset.js';
+import { builtinDataset } from '../data/builtin.js';
+import { basisOrder, makeEstimate, type Basis, type Estimate } from '../quantity/estimate.js';
+import { finalTemperatureInterval, heatCapacityRelativeU, type TemperatureInterval } from './finalTemperatureInterval.js';
+import type { FillEquilibrium } from './fillEquilibrium.js';
+import { packCautions } from './packCautions.js';
+import { preparePackFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
+import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
+
+/** One solid at the end, grams of the solid as loaded unless said otherwise. */
+export interface PackDissolvedSolid {
+  /** Canonical formula as loaded. */
+  formula: string;
+  loadedMass: number;
+  dissolvedMass: number;
+  undissolvedMass: number;
+  /** What stays solid: the equilibrium solid (when the loaded solid turns into it) with its mass in grams; null when everything dissolved. */
+  undissolvedSolid: { formula: string; mass: number } | null;
+  /** True when the solution ends saturated in this salt. */
+  saturated: boolean;
+  /** Solubility at the final temperature, or null without solubility data (then the solid is taken to dissolve completely). */
+  solubility: { value: number; unit: 'g/100 g H2O'; solidPhase: string; extrapolated: boolean; source: string; fromMemory: boolean } | null;
+  /** The enthalpy of solution used, kJ/mol of the loaded formula, positive = endothermic. */
+  enthalpyOfSolution: Estimate;
+  /** kJ absorbed by this solid (dissolving, plus any conversion of what stays undissolved); negative = released. */
+  heat: number;
+}
+
+/** The heat of the fill, kJ. */
+export interface PackHeat {
+  unit: 'kJ';
+  /** Net heat absorbed by dissolution; positive = endothermic (the fill cools), negative = released (it warms). */
+  absorbed: number;
+  direction: 'absorbed' | 'released' | 'none';
+  /** Part taken up by the dissolving salt. */
+  dissolution: number;
+  /** Part taken up by undissolved solid turning into its equilibrium hydrate (negative when binding water releases heat). */
+  solidConversion: number;
+  /** Change of the fill's sensible heat, C·(T_final − T_start). */
+  sensible: number;
+  /** Relative imbalance |absorbed + sensible| / |absorbed| (0 when nothing is absorbed); large only when the fill was clamped. */
+  imbalance: number;
+}
+
+/** The heat capacity used, J/K. */
+export interface PackHeatCapacity {
+  value: number;
+  /** Standard uncertainty, J/K. */
+  u: number;
+  unit: 'J/K';
+  basis: 'parts' | 'override';
+  /** The parts at the final state, J/K (the override replaces their sum). */
+  parts: { water: number; dissolvedSalt: number; undissolvedSolid: number; container: number };
+}
+
+/** Where the heat balance was cut short. */
+export interface PackClamp {
+  kind: 'freezing' | 'eutectic' | 'boiling';
+  /** °C. */
+  temperature: number;
+  message: string;
+}
+
+/** What {@link packFinalTemperature} returns. */
+export interface PackResult {
+  fill: { solids: { formula: string; massG: number }[]; waterG: number; startC: number; containerJPerK: number };
+  /** Final temperature, °C, with its 95 % interval. */
+  finalTemperature: Estimate;
+  /** T_final − T_start, K. */
+  temperatureChange: number;
+  interval: TemperatureInterval;
+  dissolved: PackDissolvedSolid[];
+  /** Grams of liquid water in the final solution. */
+  liquidWater: number;
+  heat: PackHeat;
+  heatCapacity: PackHeatCapacity;
+  clamp: PackClamp | null;
+  cautions: string[];
+  notes: string[];
+  /** Source keys of data/sources.json behind the numbers. */
+  sources: string[];
+}
+
+function weakestBasis(estimates: readonly Estimate[]): Basis {
+  return estimates.reduce<Basis>((worst, e) => (basisOrder.indexOf(e.basis) > basisOrder.indexOf(worst) ? e.basis : worst), 'measured');
+}
+
+function clampMessage(kind: PackClamp['kind'], t: number): string {
+  if (kind === 'boiling') return `the heat balance would carry the fill past boiling; it is reported at ${t} °C, where the water would boil (the rise of the boiling point by dissolved salt is ignored)`;
+  if (kind === 'eutectic') return `the heat balance would go below the salt–ice eutectic (${t.toFixed(2)} °C): ice and salt crystals would form together and hold the fill there`;
+  return `the heat balance would go below the freezing point of the solution (${t.toFixed(2)} °C, ideal freezing-point depression): ice would form and hold the fill near that temperature`;
+}
+
+/**
+ * Assembles a result from a solved fill. Exposed for the inverse design and
+ * the time course, which re-solve prepared fills.
+ * @internal
+ */
+export function packResult(fill: PreparedFill, solution: FillSolution, interval: TemperatureInterval, dataset: Dataset): PackResult {
+  const state: FillEquilibrium = solution.state;
+  const t = solution.temperature;
+  const notes = [...fill.notes];
+  const sources = new Set(fill.sources);
+  const dissolved: PackDissolvedSolid[] = fill.solids.map((s, i) => {
+    const e = state.solids[i]!;
+    const loaded = s.massG;
+    const dissolvedMass = loaded * e.fraction;
+    const undissolvedMass = loaded - dissolvedMass;
+    const leftMoles = s.moles * (1 - e.fraction);
+    const solid = undissolvedMass > 0 ? { formula: e.undissolvedPhase, mass: leftMoles * (s.anhydrousMolarMass + e.undissolvedWater * fill.waterMolarMass) } : null;
+    if (e.solubility?.extrapolated) notes.push(`the solubility of ${s.salt.anhydrous} at ${t.toFixed(1)} °C lies outside its table (${s.curve!.tableRange[0]}–${s.curve!.tableRange[1]} °C) and was extended from the nearest segment`);
+    if (e.fraction < 1 && e.converts) {
+      notes.push(`undissolved ${s.salt.formula} is taken to turn into ${e.undissolvedPhase}, the solid in equilibrium with the saturated solution, taking ${e.undissolvedWater > s.salt.water ? 'up' : 'off'} its water of crystallization; the heat of that change, ΔsolH(${s.salt.formula}) − ΔsolH(${e.undissolvedPhase}), is counted`);
+      if (state.hydrationFraction < 1) notes.push(`there is too little water for all the undissolved solid to become ${e.undissolvedPhase}; only ${(100 * state.hydrationFraction).toFixed(0)} % of that change is counted and no liquid remains`);
+    } else if (e.fraction < 1 && e.solubility && e.solubility.phase !== s.salt.formula) {
+      notes.push(`undissolved ${s.salt.formula} is taken to stay as loaded: no enthalpy of solution is known for ${e.solubility.phase}, the solid in equilibrium with the saturated solution`);
+    }
+    return {
+      formula: s.salt.formula,
+      loadedMass: loaded,
+      dissolvedMass,
+      undissolvedMass,
+      undissolvedSolid: solid,
+      saturated: e.saturated,
+      solubility: e.solubility
+        ? { value: e.solubility.value, unit: 'g/100 g H2O', solidPhase: e.solubility.phase, extrapolated: e.solubility.extrapolated, source: s.curve!.source, fromMemory: s.curve!.fromMemory }
+        : null,
+      enthalpyOfSolution: s.enthalpy,
+      heat: (e.dissolutionJ + e.conversionJ) / 1000,
+    };
+  });
+
+  const absorbed = state.heatJ / 1000;
+  const sensible = (state.heatCapacity * (t - fill.startC)) / 1000;
+  const clamp: PackClamp | null = solution.clamp ? { ...solution.clamp, message: clampMessage(solution.clamp.kind, solution.clamp.temperature) } : null;
+  if (clamp) notes.push(clamp.message);
+  if (solution.jump) notes.push(`the balance is pinned at ${t.toFixed(2)} °C, where the equilibrium solid changes in the solubility table; the true temperature lies near it`);
+  if (fill.heatCapacityOverride) notes.push('heat capacity: your value replaces the sum of parts (solution, undissolved solid and container)');
+  else notes.push('heat capacity from the parts: liquid water, plus the crystal Cp° of the dissolved salt (additivity, closer for concentrated than for dilute solutions; allowed for in the uncertainty), plus the undissolved solid, plus the container');
+  const kirchhoff = fill.solids.some((s) => s.enthalpy.notes.some((n) => n.includes('Kirchhoff')));
+  if (!kirchhoff) notes.push('enthalpies of solution are the 25 °C values, used at every temperature (no Kirchhoff correction)');
+  notes.push('enthalpies of solution are infinite-dilution values; at pack concentrations the integral enthalpy of solution differs, often by several per cent, and the interval does not include that difference');
+  for (const s of fill.solids) for (const n of s.enthalpy.notes) notes.push(`${s.salt.formula}: ${n}`);
+  const enthalpies = fill.solids.map((s) => s.enthalpy);
+
+  const u = interval.u;
+  const finalTemperature = makeEstimate({
+    quantity: 'final temperature',
+    value: t,
+    u,
+    low: Math.min(interval.low, t),
+    high: Math.max(interval.high, t),
+    unit: '°C',
+    basis: weakestBasis(enthalpies),
+    method: 'adiabatic-balance',
+    sources: [...sources],
+    notes: [interval.description],
+  });
+
+  const heatCapacityU = fill.heatCapacityOverride ? fill.heatCapacityOverride.u : (state.heatCapacity - state.heatCapacityParts.container) * heatCapacityRelativeU(fill, solution);
+  return {
+    fill: { solids: fill.solids.map((s) => ({ formula: s.salt.formula, massG: s.massG })), waterG: fill.waterG, startC: fill.startC, containerJPerK: fill.containerJPerK },
+    finalTemperature,
+    temperatureChange: t - fill.startC,
+    interval,
+    dissolved,
+    liquidWater: state.liquidWaterG,
+    heat: {
+      unit: 'kJ',
+      absorbed,
+      direction: absorbed > 0 ? 'absorbed' : absorbed < 0 ? 'released' : 'none',
+      dissolution: state.solids.reduce((sum, e) => sum + e.dissolutionJ, 0) / 1000,
+      solidConversion: state.solids.reduce((sum, e) => sum + e.conversionJ, 0) / 1000,
+      sensible,
+      imbalance: absorbed === 0 ? 0 : Math.abs(absorbed + sensible) / Math.abs(absorbed),
+    },
+    heatCapacity: {
+      value: state.heatCapacity,
+      u: heatCapacityU,
+      unit: 'J/K',
+      basis: fill.heatCapacityOverride ? 'override' : 'parts',
+      parts: { water: state.heatCapacityParts.water, dissolvedSalt: state.heatCapacityParts.dissolved, undissolvedSolid: state.heatCapacityParts.undissolved, container: state.heatCapacityParts.container },
+    },
+    clamp,
+    cautions: packCautions({ startC: fill.startC, final: finalTemperature, clamp: clamp?.kind, salts: fill.solids.map((s) => s.salt) }, dataset),
+    notes: [...new Set(notes)],
+    sources: [...sources].sort(),
+  };
+}
+
+/**
+ * The adiabatic final temperature of a hot- or cold-pack fill.
+ *
+ * Each solid dissolves up to what its solubility allows at the final
+ * temperature (interpolated in the solubility table; a solid without data
+ * dissolves completely); the heat taken up, Σ nᵢ,dissolved·ΔsolHᵢ, equals
+ * the fill's loss of sensible heat, C·(T₀ − T). The balance is solved with a
+ * bracketed root finder (Brent) to 1e-9 K and never reported below the
+ * solution's freezing point or the salt–ice eutectic, nor above boiling. The
+ * 95 % interval comes from the enthalpy intervals and the heat-capacity
+ * uncertainty, by bounds (default) or seeded Monte Carlo.
+ *
+ * @param fill - solids (formula, grams), water (g), start (°C, default 20), container (J/K, default 0)
+ * @param options - heat-capacity override, Kirchhoff correction, interval method
+ * @returns temperatures in °C, masses in g, heats in kJ, heat capacity in J/K, with cautions and notes
+ * @throws IonheatError `INVALID_ARGUMENT` naming the field for bad input; parser errors or `MISSING_DATA` for an unknown salt
+ * @example
+ * ```ts
+ * // 10 g KNO3 in 100 g water at 20 °C: 0.0989 mol × 34.89 kJ/mol over 427.5 J/K
+ * const r = packFinalTemperature({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 });
+ * r.finalTemperature.value; // 11.93
+ * r.dissolved[0].undissolvedMass; // 0
+ * ```
+ */
+export function packFinalTemperature(fill: PackFill, options: PackOptions = {}, dataset: Dataset = builtinDataset()): PackResult {
+  const prepared = preparePackFill(fill, options, dataset);
+  const solution = solveFillTemperature(prepared);
+  const interval = finalTemperatureInterval(prepared, solution, options.interval);
+  return packResult(prepared, solution, interval, dataset);
+}

@@ -1,0 +1,249 @@
+/**
+ * The time course of a pack: a lumped model in which the salt dissolves with
+ * a first-order time constant while the pack exchanges heat with the air
+ * around it and with the skin it rests on.
+ *
+ * @module
+ */
+import type { Dataset } from '../data/dataset.js';
+import { builtinDataset } from '../data/builtin.js';
+import { IonheatError } from '../error.js';
+import type { Estimate } from '../quantity/estimate.js';
+import { evaluateFill, fillScratch } from './fillEquilibrium.js';
+import { finalTemperatureInterval } from './finalTemperatureInterval.js';
+import { CONTACT_BURN_THRESHOLD_C, packCautions } from './packCautions.js';
+import { packResult } from './packFinalTemperature.js';
+import { preparePackFill, type PackFill, type PackOptions } from './packFill.js';
+import { BOILING_C, solveFillTemperature } from './solveFillTemperature.js';
+
+/** Parameters of the time course; each one you leave out takes an assumed value for illustration. */
+export interface TimeCourseOptions {
+  /** How long to follow the pack, s (default 3600). */
+  durationS?: number;
+  /** Dissolution time constant τ, s: the dissolved amount approaches equilibrium as 1 − e^(−t/τ) (default 60, assumed). */
+  dissolutionTimeConstantS?: number;
+  /** Air temperature, °C (default 22, assumed). */
+  ambientC?: number;
+  /** Heat-transfer conductance from pack to air, W/K (default 0.15, assumed). */
+  ambientConductanceWPerK?: number;
+  /** Temperature of the skin (or whatever the pack rests on), °C (default 33, assumed). */
+  skinC?: number;
+  /** Conductance from pack to skin through its wrapping, W/K (default 0.25, assumed). */
+  skinConductanceWPerK?: number;
+  /** A temperature band to stay inside, °C. */
+  band?: { lowC: number; highC: number };
+  /** Points in the returned curve (default 361). */
+  samples?: number;
+}
+
+/** A parameter as used, and whether it was your value or the assumed default. */
+export interface TimeCourseParameter {
+  value: number;
+  unit: string;
+  /** True when it is the default, an assumed value for illustration. */
+  assumed: boolean;
+}
+
+/** One point of T(t). */
+export interface TimeCoursePoint {
+  /** s. */
+  t: number;
+  /** °C. */
+  temperature: number;
+  /** kJ absorbed by dissolution so far (negative = released). */
+  heatAbsorbed: number;
+}
+
+/** What {@link packTimeCourse} returns. */
+export interface PackTimeCourse {
+  parameters: {
+    durationS: TimeCourseParameter;
+    dissolutionTimeConstantS: TimeCourseParameter;
+    ambientC: TimeCourseParameter;
+    ambientConductanceWPerK: TimeCourseParameter;
+    skinC: TimeCourseParameter;
+    skinConductanceWPerK: TimeCourseParameter;
+  };
+  startC: number;
+  /** The adiabatic final temperature of the same fill, with its 95 % interval, °C. */
+  adiabaticFinal: Estimate;
+  /** The heat capacity used throughout, J/K (that of the adiabatic final state). */
+  heatCapacityJPerK: number;
+  points: TimeCoursePoint[];
+  /** The coldest point of a cold pack, the hottest of a hot one. */
+  extreme: { temperature: number; timeS: number };
+  /** Time inside your band, when you gave one. */
+  band: { lowC: number; highC: number; secondsInside: number; firstInsideS: number | null; lastInsideS: number | null } | null;
+  /** Seconds above the contact-burn threshold. */
+  secondsAboveBurnThreshold: number;
+  cautions: string[];
+  notes: string[];
+}
+
+const DEFAULTS = {
+  durationS: 3600,
+  dissolutionTimeConstantS: 60,
+  ambientC: 22,
+  ambientConductanceWPerK: 0.15,
+  skinC: 33,
+  skinConductanceWPerK: 0.25,
+} as const;
+
+const UNITS: Record<keyof typeof DEFAULTS, string> = {
+  durationS: 's',
+  dissolutionTimeConstantS: 's',
+  ambientC: '°C',
+  ambientConductanceWPerK: 'W/K',
+  skinC: '°C',
+  skinConductanceWPerK: 'W/K',
+};
+
+/** Integration steps: at least this many over the run… */
+const MIN_STEPS = 2000;
+/** …and at least four per dissolution time constant, up to this many. */
+const MAX_STEPS = 200_000;
+
+/** Share of a straight segment from a to b that lies inside [lo, hi]. */
+function shareInside(a: number, b: number, lo: number, hi: number): number {
+  if (a === b) return a >= lo && a <= hi ? 1 : 0;
+  const s0 = (lo - a) / (b - a);
+  const s1 = (hi - a) / (b - a);
+  const enter = Math.max(0, Math.min(s0, s1));
+  const leave = Math.min(1, Math.max(s0, s1));
+  return Math.max(0, leave - enter);
+}
+
+function parameter(options: TimeCourseOptions, key: keyof typeof DEFAULTS, check: (v: number) => boolean, rule: string): TimeCourseParameter {
+  const given = options[key];
+  if (given === undefined) return { value: DEFAULTS[key], unit: UNITS[key], assumed: true };
+  if (typeof given !== 'number' || !Number.isFinite(given) || !check(given)) {
+    throw new IonheatError('INVALID_ARGUMENT', `the time-course parameter ${key} ${rule}, got ${String(given)}`, { field: key });
+  }
+  return { value: given, unit: UNITS[key], assumed: false };
+}
+
+/**
+ * T(t) of a pack from the moment the salt meets the water.
+ *
+ * Two states: the heat q taken up by dissolution so far, and the pack
+ * temperature T. The salt relaxes towards the equilibrium of the current
+ * temperature, dq/dt = (Q_eq(T) − q)/τ, where Q_eq(T) is the heat the
+ * adiabatic model gives for the state the fill would reach at T (solubility
+ * limit included). The pack, of heat capacity C (that of its adiabatic final
+ * state), exchanges heat with the air and the skin:
+ * C·dT/dt = −dq/dt + G_air·(T_air − T) + G_skin·(T_skin − T).
+ * Each step integrates the dissolution and the exchange exactly for a frozen
+ * T (exponential steps, stable for any τ); T never goes below the floor of
+ * the adiabatic model (ice would form; its later melting is not followed)
+ * nor above boiling. With both conductances zero, T settles at the adiabatic
+ * final temperature.
+ *
+ * The defaults are assumed values for illustration, not measurements: give
+ * your own for a real pack.
+ *
+ * @example
+ * ```ts
+ * const course = packTimeCourse({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 }, { ambientConductanceWPerK: 0, skinConductanceWPerK: 0 });
+ * course.points[course.points.length - 1].temperature; // ≈ 11.93 (the adiabatic final temperature)
+ * ```
+ */
+export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackTimeCourse {
+  const parameters = {
+    durationS: parameter(options, 'durationS', (v) => v > 0 && v <= 7 * 86400, 'must be a time from above 0 s to 7 days'),
+    dissolutionTimeConstantS: parameter(options, 'dissolutionTimeConstantS', (v) => v > 0, 'must be greater than 0 s'),
+    ambientC: parameter(options, 'ambientC', (v) => v > -60 && v < 100, 'must lie between −60 and 100 °C'),
+    ambientConductanceWPerK: parameter(options, 'ambientConductanceWPerK', (v) => v >= 0, 'must be zero or more W/K'),
+    skinC: parameter(options, 'skinC', (v) => v > 0 && v < 60, 'must lie between 0 and 60 °C'),
+    skinConductanceWPerK: parameter(options, 'skinConductanceWPerK', (v) => v >= 0, 'must be zero or more W/K'),
+  };
+  const band = options.band;
+  if (band !== undefined && !(Number.isFinite(band.lowC) && Number.isFinite(band.highC) && band.lowC < band.highC)) {
+    throw new IonheatError('INVALID_ARGUMENT', `a target band needs a lower and a higher temperature (band.lowC < band.highC), got ${band.lowC} and ${band.highC}`, { field: 'band' });
+  }
+  const samples = options.samples ?? 361;
+  if (!Number.isInteger(samples) || samples < 2 || samples > 100_000) throw new IonheatError('INVALID_ARGUMENT', `samples must be a whole number from 2 to 100000, got ${samples}`, { field: 'samples' });
+
+  const prepared = preparePackFill(fill, packOptions, dataset);
+  const adiabatic = solveFillTemperature(prepared);
+  const interval = finalTemperatureInterval(prepared, adiabatic, packOptions.interval);
+  const adiabaticResult = packResult(prepared, adiabatic, interval, dataset);
+  const C = adiabatic.state.heatCapacity;
+
+  const duration = parameters.durationS.value;
+  const tau = parameters.dissolutionTimeConstantS.value;
+  const gAir = parameters.ambientConductanceWPerK.value;
+  const gSkin = parameters.skinConductanceWPerK.value;
+  const g = gAir + gSkin;
+  const tEnv = g > 0 ? (gAir * parameters.ambientC.value + gSkin * parameters.skinC.value) / g : 0;
+  const steps = Math.min(MAX_STEPS, Math.max(MIN_STEPS, Math.ceil((4 * duration) / tau)));
+  const h = duration / steps;
+  const relax = 1 - Math.exp(-h / tau);
+  const exchange = g > 0 ? Math.exp((-g * h) / C) : 1;
+  const every = (steps) / (samples - 1);
+
+  const w = fillScratch(prepared);
+  let T = prepared.startC;
+  let q = 0;
+  const points: TimeCoursePoint[] = [{ t: 0, temperature: T, heatAbsorbed: 0 }];
+  let nextSample = 1;
+  let extreme = { temperature: T, timeS: 0 };
+  const cools = adiabatic.temperature < prepared.startC;
+  let inside = 0;
+  let firstInside: number | null = band && T >= band.lowC && T <= band.highC ? 0 : null;
+  let lastInside: number | null = firstInside;
+  let above = 0;
+  let frozeAt: number | null = null;
+  evaluateFill(prepared, T, {}, w);
+  for (let k = 1; k <= steps; k++) {
+    const before = T;
+    const dq = (w.heatJ - q) * relax;
+    q += dq;
+    T -= dq / C;
+    if (g > 0) T = tEnv + (T - tEnv) * exchange;
+    if (T > BOILING_C) T = BOILING_C;
+    evaluateFill(prepared, T, {}, w);
+    if (T < w.floorC) {
+      T = w.floorC;
+      frozeAt ??= k * h;
+      evaluateFill(prepared, T, {}, w);
+    }
+    const t = k * h;
+    if (band) {
+      const share = shareInside(before, T, band.lowC, band.highC);
+      inside += share * h;
+      if (share > 0) {
+        firstInside ??= t - h;
+        lastInside = t;
+      }
+    }
+    above += shareInside(before, T, CONTACT_BURN_THRESHOLD_C, Infinity) * h;
+    if (cools ? T < extreme.temperature - 1e-6 : T > extreme.temperature + 1e-6) extreme = { temperature: T, timeS: t };
+    if (k >= nextSample * every - 1e-9 || k === steps) {
+      points.push({ t, temperature: T, heatAbsorbed: q / 1000 });
+      nextSample++;
+    }
+  }
+
+  const notes = [
+    'lumped model: one temperature for the whole pack, first-order dissolution towards the equilibrium of the current temperature, linear heat exchange with air and skin; the heat capacity is that of the adiabatic final state throughout',
+  ];
+  const assumed = Object.entries(parameters).filter(([, p]) => p.assumed).map(([k, p]) => `${k} = ${p.value} ${p.unit}`);
+  if (assumed.length > 0) notes.push(`assumed values for illustration, not measurements: ${assumed.join(', ')}; give your own for a real pack`);
+  if (frozeAt !== null) notes.push(`from about ${Math.round(frozeAt)} s the pack sits at the freezing floor of the solution; ice would form, and its later melting is not followed`);
+  const cautions = packCautions(
+    { startC: prepared.startC, final: adiabaticResult.finalTemperature, clamp: adiabaticResult.clamp?.kind, salts: prepared.solids.map((s) => s.salt), secondsAboveBurnThreshold: above },
+    dataset,
+  );
+  return {
+    parameters,
+    startC: prepared.startC,
+    adiabaticFinal: adiabaticResult.finalTemperature,
+    heatCapacityJPerK: C,
+    points,
+    extreme,
+    band: band ? { lowC: band.lowC, highC: band.highC, secondsInside: inside, firstInsideS: firstInside, lastInsideS: lastInside } : null,
+    secondsAboveBurnThreshold: above,
+    cautions,
+    notes: [...notes, ...prepared.notes],
+  };
+}

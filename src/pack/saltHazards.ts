@@ -1,0 +1,65 @@
+/**
+ * The chemical hazards the hazards table lists for a salt: its own entry
+ * (a hydrate shares the entry of its anhydrous salt) and those of its ions.
+ *
+ * @module
+ */
+import type { Dataset } from '../data/dataset.js';
+import { builtinDataset } from '../data/builtin.js';
+import type { HazardRecord } from '../data/schemas.js';
+import { parseSalt } from '../chem/parseSalt.js';
+import type { Salt } from '../chem/salt.js';
+import { IonheatError, isIonheatError } from '../error.js';
+
+/** An ion id such as `Ba[2+]`, as opposed to a salt formula. */
+function isIonId(subject: string): boolean {
+  return /\[(?:0|[1-9]?[+-])\]$/.test(subject);
+}
+
+interface HazardIndex {
+  bySalt: ReadonlyMap<string, HazardRecord>;
+  byIon: ReadonlyMap<string, HazardRecord>;
+}
+
+function buildIndex(dataset: Dataset): HazardIndex {
+  const bySalt = new Map<string, HazardRecord>();
+  const byIon = new Map<string, HazardRecord>();
+  for (const record of dataset.records('hazards.json')) {
+    if (isIonId(record.subject)) {
+      byIon.set(record.subject, record);
+      continue;
+    }
+    try {
+      bySalt.set(parseSalt(record.subject, dataset).anhydrous, record);
+    } catch (e) {
+      const why = isIonheatError(e) ? e.message : String(e);
+      throw new IonheatError('INVALID_DATA', `${dataset.label} table hazards.json ("${record.subject}"): ${why}`, { field: 'hazards.json.subject' });
+    }
+  }
+  return { bySalt, byIon };
+}
+
+/**
+ * The hazard records that apply to a salt: the record of the salt itself
+ * (anhydrous formula, so `CuSO4·5H2O` finds `CuSO4`), then any record of one
+ * of its ions not already covered. Empty when the table lists nothing.
+ *
+ * @param salt - formula or parsed salt
+ * @example
+ * ```ts
+ * saltHazards('NH4NO3')[0]?.classes.includes('explosive-precursor'); // true
+ * saltHazards('NaCl').length; // 0
+ * ```
+ */
+export function saltHazards(salt: string | Salt, dataset: Dataset = builtinDataset()): HazardRecord[] {
+  const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
+  const index = dataset.memo('pack.hazardIndex', () => buildIndex(dataset));
+  const found: HazardRecord[] = [];
+  const own = index.bySalt.get(s.anhydrous);
+  if (own) found.push(own);
+  for (const ion of s.ions) {
+    const record = index.byIon.get(ion.ion);
+    if (record && !found.includes(record)) found.push(record);
+  }
+  return found;
+}

@@ -1,0 +1,306 @@
+/**
+ * The engine behind {@link screen} and {@link screenStream}: screens one
+ * candidate at a time and keeps the counts of the run. Results for a formula
+ * that comes again are reused from a bounded cache, so the memory of a run
+ * does not grow with the number of rows.
+ *
+ * @module
+ */
+import type { Dataset } from '../data/dataset.js';
+import { builtinDataset } from '../data/builtin.js';
+import type { HazardClass, SourceEntry } from '../data/schemas.js';
+import { hazardClassSchema } from '../data/schemas.js';
+import { parseSalt } from '../chem/parseSalt.js';
+import { findIon } from '../chem/ionIndex.js';
+import { saltRecords } from '../chem/saltRecords.js';
+import type { Salt } from '../chem/salt.js';
+import { IonheatError, isIonheatError } from '../error.js';
+import { dissolve, type DissolveResult } from '../solution/dissolve.js';
+import { readCandidate, type CandidateInput, type CandidateLike } from './candidate.js';
+import { compileSpec, type CompiledSpec } from './compileSpec.js';
+import { costPerKJ } from './costPerKJ.js';
+import { saltHazardSummary, type SaltHazards } from './saltHazardSummary.js';
+import { screenObjective, suitabilityOf } from './screenObjective.js';
+import { screenSpecSchema } from './screenOutputJsonSchema.js';
+import { screenSources } from './screenSources.js';
+import { RepeatIndex } from './repeatIndex.js';
+import {
+  directionSchema,
+  objectiveNameSchema,
+  type Direction,
+  type FillSpec,
+  type ObjectiveName,
+  type ScreenRow,
+  type ScreenSettings,
+  type ScreenSummary,
+} from './screenRow.js';
+
+/** Candidates a screen leaves out without computing them (each one still gets its row, marked `excluded`). */
+export interface ScreenFilters {
+  /** Salts to leave out, as formulas; a hydrate goes with its anhydrous salt. */
+  excludeSalts?: readonly string[];
+  /** Leave out salts containing any of these ions (ion ids, `NH4[+]`). */
+  excludeIons?: readonly string[];
+  /** Leave out salts the hazards table puts in any of these classes. */
+  excludeHazards?: readonly HazardClass[];
+  /** Lightest formula unit allowed, g/mol. */
+  minMolarMass?: number;
+  /** Heaviest formula unit allowed, g/mol. */
+  maxMolarMass?: number;
+}
+
+/** How to screen. */
+export interface ScreenOptions {
+  /** What to rank by (default `enthalpy`, or `fill-temperature` when a fill is given). */
+  objective?: ObjectiveName;
+  /** `cool` (default) or `heat`. */
+  direction?: Direction;
+  /** A specification every computed row should meet, in the language of {@link compileSpec}. */
+  spec?: string;
+  /** Candidates to leave out. */
+  filters?: ScreenFilters;
+  /** Hide each salt's own measured enthalpy of solution and crystal formation enthalpy (see {@link dissolve}). */
+  excludeMeasured?: boolean;
+  /** Citations for source keys that candidates name in their `source` field. */
+  sources?: Readonly<Record<string, SourceEntry>>;
+}
+
+/** A screen in progress: one row per candidate, and the counts so far. */
+export interface Screener {
+  readonly settings: ScreenSettings;
+  /** Screens one candidate; `line` defaults to the next line number. */
+  row(candidate: CandidateLike, line?: number): ScreenRow;
+  /** The row of an input record that could not even be read as a candidate. */
+  unreadable(line: number, input: { formula?: string }, error: unknown): ScreenRow;
+  /** Counts one blank input line (not a row). */
+  blankLine(): void;
+  summary(): ScreenSummary;
+}
+
+/** Results kept per distinct candidate: at most this many. */
+const CACHE_LIMIT = 4096;
+/** Datasets with a row's own values merged in, kept per distinct set of values. */
+const DATASET_CACHE_LIMIT = 32;
+/** Distinct candidates remembered for spotting repeated rows. */
+const DUPLICATE_LIMIT = 1_000_000;
+
+type Computed =
+  | { ok: true; salt: Salt; result: DissolveResult; hazards: SaltHazards; ownValues: boolean }
+  | { ok: false; salt?: Salt; error: IonheatError };
+
+/** The candidate's fields as one text, in a fixed order. */
+function candidateKey(input: CandidateInput): string {
+  return `${input.formula}\u0000${input.measuredEnthalpy ?? ''}\u0000${input.measuredUncertainty ?? ''}\u0000${input.solubility ?? ''}\u0000${input.pricePerKg ?? ''}\u0000${input.source ?? ''}\u0000${input.note ?? ''}`;
+}
+
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const v of Object.values(value)) deepFreeze(v);
+  }
+  return value;
+}
+
+/** A map that forgets its oldest entry when full. */
+class BoundedMap<K, V> {
+  readonly #map = new Map<K, V>();
+  constructor(readonly limit: number) {}
+  get(key: K): V | undefined {
+    return this.#map.get(key);
+  }
+  set(key: K, value: V): void {
+    if (this.#map.size >= this.limit) this.#map.delete(this.#map.keys().next().value as K);
+    this.#map.set(key, value);
+  }
+}
+
+function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<string>; ions: Set<string>; hazards: Set<HazardClass> } {
+  const salts = new Set((filters.excludeSalts ?? []).map((f) => parseSalt(f, dataset).anhydrous));
+  for (const id of filters.excludeIons ?? []) {
+    if (!findIon(id, dataset)) throw new IonheatError('UNKNOWN_ION', `excludeIons: "${id}" is not an ion id of the ${dataset.label} ion table (ids look like NH4[+], NO3[-])`, { field: 'excludeIons', text: id });
+  }
+  for (const h of filters.excludeHazards ?? []) {
+    if (!hazardClassSchema.safeParse(h).success) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: "${String(h)}" is not a hazard class (known: ${hazardClassSchema.options.join(', ')})`, { field: 'excludeHazards' });
+  }
+  for (const [name, v] of [['minMolarMass', filters.minMolarMass], ['maxMolarMass', filters.maxMolarMass]] as const) {
+    if (v !== undefined && !(Number.isFinite(v) && v > 0)) throw new IonheatError('INVALID_ARGUMENT', `${name} is a molar mass in g/mol and must be a positive number, got ${String(v)}`, { field: name });
+  }
+  return { salts, ions: new Set(filters.excludeIons ?? []), hazards: new Set(filters.excludeHazards ?? []) };
+}
+
+/**
+ * Starts a screen: checks the options (objective, direction, filters, the
+ * specification against the fields of the output rows) and returns a
+ * {@link Screener} that turns candidates into rows one at a time.
+ *
+ * @throws IonheatError `INVALID_ARGUMENT` for a bad option, `INVALID_EXPRESSION` for a bad spec
+ * @example
+ * ```ts
+ * const s = createScreener({ spec: 'best.low > 0' });
+ * s.row('KNO3').spec?.holds; // true
+ * s.row('Xy2O').status; // 'failed'
+ * s.summary().failed; // 1
+ * ```
+ */
+export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}, dataset: Dataset = builtinDataset()): Screener {
+  if (options === null || typeof options !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
+  const fill = options.fill ?? null;
+  if (fill !== null) throw new IonheatError('NOT_APPLICABLE', 'a standard fill needs the pack model, which this build does not have yet', { field: 'fill' });
+  const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? 'enthalpy');
+  if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: "${String(options.objective)}" is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
+  const directionParsed = directionSchema.safeParse(options.direction ?? 'cool');
+  if (!directionParsed.success) throw new IonheatError('INVALID_ARGUMENT', `direction: "${String(options.direction)}" is not cool or heat`, { field: 'direction' });
+  const objective = objectiveParsed.data;
+  const direction = directionParsed.data;
+  if (objective === 'fill-temperature' && fill === null) throw new IonheatError('INVALID_ARGUMENT', 'the objective fill-temperature needs a standard fill (salt grams, water grams and start temperature)', { field: 'objective' });
+  const excludeMeasured = options.excludeMeasured === true;
+  const filters = checkFilters(options.filters ?? {}, dataset);
+  const minMass = options.filters?.minMolarMass;
+  const maxMass = options.filters?.maxMolarMass;
+  const sources: Record<string, SourceEntry> = { ...screenSources, ...(options.sources ?? {}) };
+  const spec: CompiledSpec | undefined =
+    options.spec === undefined ? undefined : compileSpec(options.spec, { schema: screenSpecSchema(), unavailable: fill === null ? { fill: 'no standard fill was given' } : {} });
+  const settings: ScreenSettings = { objective, direction, fill, spec: spec?.text ?? null, excludeMeasured };
+
+  const results = new BoundedMap<string, Computed>(CACHE_LIMIT);
+  const datasets = new BoundedMap<string, Dataset>(DATASET_CACHE_LIMIT);
+  const seen = new RepeatIndex(DUPLICATE_LIMIT);
+  const tally: ScreenSummary = { read: 0, computed: 0, failed: 0, excluded: 0, blankLines: 0, specHeld: 0, specFailed: 0 };
+  let nextLine = 1;
+
+  /** The dataset with the row's own measured enthalpy merged over the tables (the tables themselves never change). */
+  const rowDataset = (input: CandidateInput, salt: Salt): Dataset => {
+    const source = input.source ?? 'screenInput';
+    if (!dataset.source(source) && !Object.hasOwn(sources, source)) {
+      throw new IonheatError('INVALID_ARGUMENT', `source: "${source}" is neither a source of the ${dataset.label} tables nor one given with the screen (${Object.keys(sources).join(', ')})`, { field: 'source', text: source });
+    }
+    const key = JSON.stringify([salt.formula, input.measuredEnthalpy, input.measuredUncertainty, source]);
+    const cached = datasets.get(key);
+    if (cached) return cached;
+    // Replace the table's own record for this salt: use its key, as written in the table.
+    const existing = saltRecords('solution-enthalpies.json', salt, dataset)[0];
+    const record = { formula: existing?.formula ?? salt.formula, value: input.measuredEnthalpy, unit: 'kJ/mol', uncertainty: input.measuredUncertainty ?? null, source, fromMemory: false, note: 'given with the candidate in the screening input' };
+    const merged = dataset.withOverrides({ 'solution-enthalpies.json': [record] }, 'screening input', dataset.source(source) ? {} : { [source]: sources[source]! });
+    datasets.set(key, merged);
+    return merged;
+  };
+
+  const compute = (input: CandidateInput, given: Salt | undefined): Computed => {
+    const own = input.measuredEnthalpy !== undefined;
+    if (input.solubility !== undefined && fill === null) {
+      // Solubility matters only to a fill; it is carried through unused otherwise.
+    }
+    const key = given ? `salt\u0000${given.formula}` : own ? JSON.stringify([input.formula, input.measuredEnthalpy, input.measuredUncertainty, input.source]) : input.formula;
+    const cached = results.get(key);
+    if (cached) return cached;
+    let computed: Computed;
+    let salt: Salt | undefined = given;
+    try {
+      salt ??= parseSalt(input.formula, dataset);
+      const data = own ? rowDataset(input, salt) : dataset;
+      const result = dissolve(salt, { excludeMeasured }, data);
+      computed = deepFreeze({ ok: true, salt, result, hazards: saltHazardSummary(salt, dataset), ownValues: own });
+    } catch (e) {
+      if (!isIonheatError(e)) throw e;
+      computed = { ok: false, ...(salt ? { salt } : {}), error: e };
+    }
+    results.set(key, computed);
+    return computed;
+  };
+
+  const exclusion = (salt: Salt, hazards: () => SaltHazards): string | undefined => {
+    if (filters.salts.has(salt.anhydrous)) return `${salt.anhydrous} is on the list of salts to leave out`;
+    const ion = salt.ions.find((i) => filters.ions.has(i.ion));
+    if (ion) return `contains ${ion.ion}, an ion to leave out`;
+    if (minMass !== undefined && salt.molarMass < minMass) return `molar mass ${salt.molarMass.toFixed(2)} g/mol is below ${minMass} g/mol`;
+    if (maxMass !== undefined && salt.molarMass > maxMass) return `molar mass ${salt.molarMass.toFixed(2)} g/mol is above ${maxMass} g/mol`;
+    if (filters.hazards.size > 0) {
+      const hit = hazards().classes.filter((c) => filters.hazards.has(c));
+      if (hit.length > 0) return `hazard class ${hit.join(', ')} is to be left out`;
+    }
+    return undefined;
+  };
+
+  const finish = (row: ScreenRow): ScreenRow => {
+    tally.read++;
+    if (row.status === 'computed') {
+      tally.computed++;
+      if (spec) {
+        const outcome = spec.test(row);
+        row.spec = outcome;
+        if (outcome.holds) tally.specHeld++;
+        else tally.specFailed++;
+      }
+    } else if (row.status === 'failed') tally.failed++;
+    else tally.excluded++;
+    return row;
+  };
+
+  const failedRow = (line: number, input: CandidateInput | { formula?: string }, error: IonheatError, salt?: Salt): ScreenRow => {
+    const formula = typeof input.formula === 'string' ? input.formula.slice(0, 200) : '';
+    return finish({ line, status: 'failed', input: { ...input, formula } as CandidateInput, error: error.toJSON(), ...(salt ? { formula: salt.formula } : {}) });
+  };
+
+  return {
+    settings,
+    row(candidate, line) {
+      const at = line ?? nextLine;
+      nextLine = at + 1;
+      let read: { input: CandidateInput; salt?: Salt };
+      try {
+        read = readCandidate(candidate);
+      } catch (e) {
+        if (!isIonheatError(e)) throw e;
+        const formula = candidate && typeof candidate === 'object' && typeof (candidate as { formula?: unknown }).formula === 'string' ? (candidate as { formula: string }).formula : typeof candidate === 'string' ? candidate : '';
+        return failedRow(at, { formula }, e);
+      }
+      const { input } = read;
+      const first = seen.firstLine(read.salt ? `salt\u0000${read.salt.formula}` : candidateKey(input), at);
+      const duplicate = first !== undefined ? { duplicateOf: first } : {};
+
+      const computed = compute(input, read.salt);
+      if (!computed.ok) {
+        const row = failedRow(at, input, computed.error, computed.salt);
+        return Object.assign(row, duplicate);
+      }
+      const { salt, result, hazards } = computed;
+      const excludedBy = exclusion(salt, () => hazards);
+      if (excludedBy !== undefined) {
+        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements });
+      }
+      const notes = [...result.notes];
+      if (computed.ownValues) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
+      if (first !== undefined) notes.push(`the same candidate as line ${first}`);
+      const cost = input.pricePerKg === undefined ? undefined : costPerKJ(input.pricePerKg, result.perGram.salt, direction);
+      if (input.pricePerKg !== undefined && cost === undefined) notes.push(`no cost per kJ: the 95 % interval of the heat per gram reaches zero or the wrong sign for ${direction === 'cool' ? 'cooling' : 'heating'}`);
+      const base = { ...result, ...(cost ? { costPerKJ: cost } : {}) };
+      const objectiveValue = screenObjective(objective, base);
+      if (objective === 'cost-per-kj' && input.pricePerKg === undefined) notes.push('no price per kg given, so no cost per kJ to rank by');
+      const row: ScreenRow = {
+        line: at,
+        status: 'computed',
+        input,
+        ...duplicate,
+        ...result,
+        notes,
+        hazards: hazards.classes,
+        cautions: hazards.statements,
+        suitability: suitabilityOf(result.verdict, direction),
+        ...(objectiveValue ? { objective: objectiveValue } : {}),
+        ...(cost ? { costPerKJ: cost } : {}),
+      };
+      return finish(row);
+    },
+    unreadable(line, input, error) {
+      nextLine = line + 1;
+      const e = isIonheatError(error) ? error : new IonheatError('INVALID_ARGUMENT', error instanceof Error ? error.message : String(error));
+      return failedRow(line, input, e);
+    },
+    blankLine() {
+      tally.blankLines++;
+    },
+    summary() {
+      return { ...tally };
+    },
+  };
+}

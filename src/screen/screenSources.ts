@@ -1,0 +1,20 @@
+/**
+ * Source keys that a screen knows besides the dataset's own: for numbers a
+ * user gives with a candidate, and for the invented numbers of the
+ * demonstration.
+ *
+ * @module
+ */
+import type { SourceEntry } from '../data/schemas.js';
+
+/** Citations the screen adds to the dataset's sources. */
+export const screenSources: Readonly<Record<string, SourceEntry>> = Object.freeze({
+  screenInput: {
+    citation: 'Value given with the candidate in the screening input (the user’s own measurement or supplier figure).',
+    kind: 'derived',
+  },
+  inventedDemo: {
+    citation: 'Numbers invented for the ionheat demonstration scenario: not measurements, prices or specifications of any real product or supplier.',
+    kind: 'invented',
+  },
+});
