@@ -95,6 +95,11 @@ function ionFeatures(dataset: Dataset): ReadonlyMap<string, IonFeatures> {
   });
 }
 
+/** `noble-gas` for a cation with a noble-gas electron core (and polyatomic cations), else `other`. */
+export function cationCore(ion: string, dataset: Dataset): 'noble-gas' | 'other' {
+  return ionFeatures(dataset).get(ion)?.nobleCore === false ? 'other' : 'noble-gas';
+}
+
 /** The distance between two ions of one sign (see {@link ION_DISTANCE}). */
 export function ionDistance(a: string, b: string, dataset: Dataset): number {
   const f = ionFeatures(dataset);

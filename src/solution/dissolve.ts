@@ -122,6 +122,8 @@ interface SaltProfile {
   model: Estimate[];
   /** Anchored and model estimates (a hydrate's carried over from its anhydrous salt), with all data / with the salt's own hidden. */
   modelled: { open?: Estimate[]; hidden?: Estimate[] };
+  /** Every estimate at 25 °C in order of trust, and the heats per gram of the first, with all data / with the salt's own hidden. */
+  ranked: { open?: { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined }; hidden?: { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined } };
   /** The error to throw when nothing can be estimated, kept so that repeated calls do not rebuild it. */
   failure: { open?: IonheatError; hidden?: IonheatError };
 }
@@ -140,6 +142,7 @@ function profileOf(salt: Salt, dataset: Dataset): SaltProfile {
       fill: saturatedFill(salt, dataset),
       model: [],
       modelled: {},
+      ranked: {},
       failure: {},
     };
     const hydration = modelHydration(profile.hydration);
@@ -204,6 +207,32 @@ function frozen<E extends Estimate | undefined>(e: E): E {
   return e;
 }
 
+function perGramOf(best: Estimate, salt: Salt, profile: SaltProfile): DissolveResult['perGram'] {
+  return { salt: heatPerGramOfSalt(best, salt), ...(profile.fill ? { saturatedFill: heatPerGramOfFill(best, profile.fill) } : {}) };
+}
+
+/** Every estimate at 25 °C, most trusted first, and the heats per gram of the first; kept in the profile. */
+function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Dataset): { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined } {
+  const key = hide ? 'hidden' : 'open';
+  let found = profile.ranked[key];
+  if (!found) {
+    const estimates: Estimate[] = [];
+    if (profile.measured && !hide) estimates.push(profile.measured);
+    if (profile.cycle && !hide) estimates.push(profile.cycle);
+    const rule = ruleOf(salt, profile, hide, dataset);
+    if (rule) estimates.push(rule);
+    for (const e of modelledEstimates(salt, hide, dataset)) estimates.push(e);
+    estimates.sort(rank);
+    let perGram: DissolveResult['perGram'] | undefined;
+    if (estimates[0]) {
+      const p = perGramOf(estimates[0], salt, profile);
+      perGram = { salt: frozen(p.salt), ...(p.saturatedFill ? { saturatedFill: frozen(p.saturatedFill) } : {}) };
+    }
+    profile.ranked[key] = found = { estimates: Object.freeze(estimates), perGram };
+  }
+  return found;
+}
+
 /**
  * The enthalpy of solution at infinite dilution of a salt, on every basis
  * the data allow, in order of trust:
@@ -251,25 +280,20 @@ export function dissolve(formula: string | Salt, options: DissolveOptions = {}, 
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
 
   const profile = profileOf(salt, dataset);
-  let estimates: Estimate[] = [];
-  if (profile.measured && !hide) estimates.push(profile.measured);
-  if (profile.cycle && !hide) estimates.push(profile.cycle);
-  const rule = ruleOf(salt, profile, hide, dataset);
-  if (rule) estimates.push(rule);
-  for (const e of modelledEstimates(salt, hide, dataset)) estimates.push(e);
   if (salt.kind !== 'ionic') notes.push('a molecular solute: no lattice model applies, so only measured values (or formation enthalpies) are used');
-
+  const at25 = ranked(salt, profile, hide, dataset);
   const heatCapacity = profile.heatCapacity;
-  if (celsius !== TABLE_TEMPERATURE_C) {
+  let estimates: Estimate[];
+  if (celsius === TABLE_TEMPERATURE_C) {
+    estimates = [...at25.estimates];
+  } else {
     const typical = typicalSolutionHeatCapacity(dataset).rms;
-    estimates = estimates.map((e) => kirchhoffCorrection(e, celsius, heatCapacity, typical));
+    estimates = at25.estimates.map((e) => kirchhoffCorrection(e, celsius, heatCapacity, typical)).sort(rank);
+    if (!heatCapacity) notes.push(`no heat capacity of solution for ${salt.formula}: values are those at 25 °C with a widened interval`);
   }
-  estimates.sort(rank);
   const best = estimates[0];
   if (!best) throw (profile.failure[hide ? 'hidden' : 'open'] ??= failure(salt, hide, dataset));
-  if (celsius !== TABLE_TEMPERATURE_C && !heatCapacity) notes.push(`no heat capacity of solution for ${salt.formula}: values are those at 25 °C with a widened interval`);
-
-  const fill = profile.fill ? heatPerGramOfFill(best, profile.fill) : undefined;
+  const perGram = celsius === TABLE_TEMPERATURE_C && at25.perGram ? { ...at25.perGram } : perGramOf(best, salt, profile);
   const hydration = profile.hydration
     ? { ...(profile.hydration.absolute ? { absolute: profile.hydration.absolute } : {}), ...(profile.hydration.conventional ? { conventional: profile.hydration.conventional } : {}) }
     : undefined;
@@ -279,7 +303,7 @@ export function dissolve(formula: string | Salt, options: DissolveOptions = {}, 
     best,
     estimates,
     ...solutionVerdict(best),
-    perGram: { salt: heatPerGramOfSalt(best, salt), ...(fill ? { saturatedFill: fill } : {}) },
+    perGram,
     ...(hydration ? { hydration } : {}),
     temperature: { celsius, ...(heatCapacity ? { heatCapacityOfSolution: heatCapacity } : {}) },
     notes,
