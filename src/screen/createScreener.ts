@@ -6,7 +6,7 @@
  *
  * @module
  */
-import type { Dataset } from '../data/dataset.js';
+import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { HazardClass, SourceEntry } from '../data/schemas.js';
 import { hazardClassSchema } from '../data/schemas.js';
@@ -16,10 +16,12 @@ import { saltRecords } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { dissolve, type DissolveResult } from '../solution/dissolve.js';
+import { packFinalTemperature, type PackResult } from '../pack/packFinalTemperature.js';
+import { parseFillSpec } from './parseFillSpec.js';
 import { readCandidate, type CandidateInput, type CandidateLike } from './candidate.js';
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
 import { costPerKJ } from './costPerKJ.js';
-import { saltHazardSummary, type SaltHazards } from './saltHazardSummary.js';
+import { hazardSummary, type HazardSummary } from './hazardSummary.js';
 import { screenObjective, suitabilityOf } from './screenObjective.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
 import { screenSources } from './screenSources.js';
@@ -63,6 +65,12 @@ export interface ScreenOptions {
   excludeMeasured?: boolean;
   /** Citations for source keys that candidates name in their `source` field. */
   sources?: Readonly<Record<string, SourceEntry>>;
+  /**
+   * A standard fill to put every candidate through the pack model
+   * ({@link packFinalTemperature}): grams of salt, grams of water and the
+   * start temperature, as an object or as text `40:80@22`.
+   */
+  fill?: FillSpec | string;
 }
 
 /** A screen in progress: one row per candidate, and the counts so far. */
@@ -85,8 +93,20 @@ const DATASET_CACHE_LIMIT = 32;
 const DUPLICATE_LIMIT = 1_000_000;
 
 type Computed =
-  | { ok: true; salt: Salt; result: DissolveResult; hazards: SaltHazards; ownValues: boolean }
+  | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; hazards: HazardSummary; ownValues: boolean }
   | { ok: false; salt?: Salt; error: IonheatError };
+
+/** A fill as given, checked: positive masses, a start where water is liquid. */
+function checkFill(fill: FillSpec | string): FillSpec {
+  if (typeof fill === 'string') return parseFillSpec(fill);
+  if (fill === null || typeof fill !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'fill: a standard fill is { saltMassG, waterMassG, startC } or text such as 40:80@22', { field: 'fill' });
+  const { saltMassG, waterMassG, startC } = fill;
+  const ok = (x: unknown): x is number => typeof x === 'number' && Number.isFinite(x);
+  if (!ok(saltMassG) || saltMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.saltMassG must be a positive number of grams, got ${String(saltMassG)}`, { field: 'fill.saltMassG' });
+  if (!ok(waterMassG) || waterMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.waterMassG must be a positive number of grams, got ${String(waterMassG)}`, { field: 'fill.waterMassG' });
+  if (!ok(startC) || startC < 0 || startC >= 100) throw new IonheatError('INVALID_ARGUMENT', `fill.startC must be a temperature from 0 °C up to (not including) 100 °C, where water is liquid; got ${String(startC)}`, { field: 'fill.startC' });
+  return { saltMassG, waterMassG, startC };
+}
 
 /** The candidate's fields as one text, in a fixed order. */
 function candidateKey(input: CandidateInput): string {
@@ -142,11 +162,10 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  * s.summary().failed; // 1
  * ```
  */
-export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}, dataset: Dataset = builtinDataset()): Screener {
+export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
   if (options === null || typeof options !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
-  const fill = options.fill ?? null;
-  if (fill !== null) throw new IonheatError('NOT_APPLICABLE', 'a standard fill needs the pack model, which this build does not have yet', { field: 'fill' });
-  const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? 'enthalpy');
+  const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
+  const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
   if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: "${String(options.objective)}" is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
   const directionParsed = directionSchema.safeParse(options.direction ?? 'cool');
   if (!directionParsed.success) throw new IonheatError('INVALID_ARGUMENT', `direction: "${String(options.direction)}" is not cool or heat`, { field: 'direction' });
@@ -168,29 +187,53 @@ export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}
   const tally: ScreenSummary = { read: 0, computed: 0, failed: 0, excluded: 0, blankLines: 0, specHeld: 0, specFailed: 0 };
   let nextLine = 1;
 
-  /** The dataset with the row's own measured enthalpy merged over the tables (the tables themselves never change). */
+  /**
+   * The dataset with the row's own values merged over the tables through
+   * {@link Dataset.withOverrides}: a measured enthalpy of solution, and a
+   * solubility taken as the same at every temperature. The tables themselves
+   * never change; each distinct set of values gets its own merged dataset.
+   */
   const rowDataset = (input: CandidateInput, salt: Salt): Dataset => {
     const source = input.source ?? 'screenInput';
     if (!dataset.source(source) && !Object.hasOwn(sources, source)) {
       throw new IonheatError('INVALID_ARGUMENT', `source: "${source}" is neither a source of the ${dataset.label} tables nor one given with the screen (${Object.keys(sources).join(', ')})`, { field: 'source', text: source });
     }
-    const key = JSON.stringify([salt.formula, input.measuredEnthalpy, input.measuredUncertainty, source]);
+    const key = JSON.stringify([salt.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, source]);
     const cached = datasets.get(key);
     if (cached) return cached;
-    // Replace the table's own record for this salt: use its key, as written in the table.
-    const existing = saltRecords('solution-enthalpies.json', salt, dataset)[0];
-    const record = { formula: existing?.formula ?? salt.formula, value: input.measuredEnthalpy, unit: 'kJ/mol', uncertainty: input.measuredUncertainty ?? null, source, fromMemory: false, note: 'given with the candidate in the screening input' };
-    const merged = dataset.withOverrides({ 'solution-enthalpies.json': [record] }, 'screening input', dataset.source(source) ? {} : { [source]: sources[source]! });
+    const overrides: TableOverrides = {};
+    if (input.measuredEnthalpy !== undefined) {
+      // Replace the table's own record for this salt: use its key, as written in the table.
+      const existing = saltRecords('solution-enthalpies.json', salt, dataset)[0];
+      overrides['solution-enthalpies.json'] = [
+        { formula: existing?.formula ?? salt.formula, value: input.measuredEnthalpy, unit: 'kJ/mol', uncertainty: input.measuredUncertainty ?? null, source, fromMemory: false, note: 'given with the candidate in the screening input' },
+      ];
+    }
+    if (input.solubility !== undefined) {
+      const existing = saltRecords('solubility.json', { formula: salt.anhydrous }, dataset)[0];
+      overrides['solubility.json'] = [
+        {
+          formula: existing?.formula ?? salt.anhydrous,
+          ...(salt.water > 0 ? { solidPhase: salt.formula } : {}),
+          unit: 'g/100 g H2O',
+          points: [
+            { t: 0, value: input.solubility },
+            { t: 100, value: input.solubility },
+          ],
+          source,
+          fromMemory: false,
+          note: 'given with the candidate in the screening input, taken as the same at every temperature',
+        },
+      ];
+    }
+    const merged = dataset.withOverrides(overrides, 'screening input', dataset.source(source) ? {} : { [source]: sources[source]! });
     datasets.set(key, merged);
     return merged;
   };
 
   const compute = (input: CandidateInput, given: Salt | undefined): Computed => {
-    const own = input.measuredEnthalpy !== undefined;
-    if (input.solubility !== undefined && fill === null) {
-      // Solubility matters only to a fill; it is carried through unused otherwise.
-    }
-    const key = given ? `salt\u0000${given.formula}` : own ? JSON.stringify([input.formula, input.measuredEnthalpy, input.measuredUncertainty, input.source]) : input.formula;
+    const own = input.measuredEnthalpy !== undefined || input.solubility !== undefined;
+    const key = given ? `salt\u0000${given.formula}` : own ? JSON.stringify([input.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, input.source]) : input.formula;
     const cached = results.get(key);
     if (cached) return cached;
     let computed: Computed;
@@ -199,7 +242,8 @@ export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}
       salt ??= parseSalt(input.formula, dataset);
       const data = own ? rowDataset(input, salt) : dataset;
       const result = dissolve(salt, { excludeMeasured }, data);
-      computed = deepFreeze({ ok: true, salt, result, hazards: saltHazardSummary(salt, dataset), ownValues: own });
+      const pack = fill ? packFinalTemperature({ solids: [{ formula: salt.formula, massG: fill.saltMassG }], waterG: fill.waterMassG, startC: fill.startC }, {}, data) : undefined;
+      computed = deepFreeze({ ok: true, salt, result, pack, hazards: hazardSummary(salt, dataset), ownValues: own });
     } catch (e) {
       if (!isIonheatError(e)) throw e;
       computed = { ok: false, ...(salt ? { salt } : {}), error: e };
@@ -208,7 +252,7 @@ export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}
     return computed;
   };
 
-  const exclusion = (salt: Salt, hazards: () => SaltHazards): string | undefined => {
+  const exclusion = (salt: Salt, hazards: () => HazardSummary): string | undefined => {
     if (filters.salts.has(salt.anhydrous)) return `${salt.anhydrous} is on the list of salts to leave out`;
     const ion = salt.ions.find((i) => filters.ions.has(i.ion));
     if (ion) return `contains ${ion.ion}, an ion to leave out`;
@@ -263,17 +307,19 @@ export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}
         const row = failedRow(at, input, computed.error, computed.salt);
         return Object.assign(row, duplicate);
       }
-      const { salt, result, hazards } = computed;
+      const { salt, result, hazards, pack } = computed;
       const excludedBy = exclusion(salt, () => hazards);
       if (excludedBy !== undefined) {
         return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements });
       }
       const notes = [...result.notes];
-      if (computed.ownValues) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
+      if (input.measuredEnthalpy !== undefined) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
+      if (input.solubility !== undefined) notes.push(`solubility ${input.solubility} g/100 g H2O from the screening input (source ${input.source ?? 'screenInput'}), taken as the same at every temperature${fill ? '' : '; it matters only to a fill'}`);
+      if (pack && excludeMeasured) notes.push('the standard fill uses the enthalpy of solution the pack model finds, measured values included: excludeMeasured hides them from dissolve only');
       if (first !== undefined) notes.push(`the same candidate as line ${first}`);
       const cost = input.pricePerKg === undefined ? undefined : costPerKJ(input.pricePerKg, result.perGram.salt, direction);
       if (input.pricePerKg !== undefined && cost === undefined) notes.push(`no cost per kJ: the 95 % interval of the heat per gram reaches zero or the wrong sign for ${direction === 'cool' ? 'cooling' : 'heating'}`);
-      const base = { ...result, ...(cost ? { costPerKJ: cost } : {}) };
+      const base = { ...result, ...(cost ? { costPerKJ: cost } : {}), ...(pack ? { fill: pack } : {}) };
       const objectiveValue = screenObjective(objective, base);
       if (objective === 'cost-per-kj' && input.pricePerKg === undefined) notes.push('no price per kg given, so no cost per kJ to rank by');
       const row: ScreenRow = {
@@ -285,6 +331,7 @@ export function createScreener(options: ScreenOptions & { fill?: FillSpec } = {}
         notes,
         hazards: hazards.classes,
         cautions: hazards.statements,
+        ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
         suitability: suitabilityOf(result.verdict, direction),
         ...(objectiveValue ? { objective: objectiveValue } : {}),
         ...(cost ? { costPerKJ: cost } : {}),

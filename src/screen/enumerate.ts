@@ -13,7 +13,7 @@ import { findIon } from '../chem/ionIndex.js';
 import { molarMass } from '../chem/molarMass.js';
 import type { Salt } from '../chem/salt.js';
 import { IonheatError } from '../error.js';
-import { saltHazardSummary } from './saltHazardSummary.js';
+import { saltHazards } from '../pack/saltHazards.js';
 
 /** Which salts {@link enumerate} produces. Every filter is optional; together they must all hold. */
 export interface EnumerateFilters {
@@ -124,7 +124,7 @@ export function enumerate(filters: EnumerateFilters = {}, dataset: Dataset = bui
       const salt = saltOf(cation, anion, dataset);
       if (filters.minMolarMass !== undefined && salt.molarMass < filters.minMolarMass) continue;
       if (filters.maxMolarMass !== undefined && salt.molarMass > filters.maxMolarMass) continue;
-      if (banned.size > 0 && saltHazardSummary(salt, dataset).classes.some((c) => banned.has(c))) continue;
+      if (banned.size > 0 && saltHazards(salt, dataset).some((r) => r.classes.some((c) => banned.has(c)))) continue;
       salts.push(salt);
     }
   }

@@ -8,7 +8,7 @@ import { builtinDataset } from '../data/builtin.js';
 import type { CandidateLike } from './candidate.js';
 import { createScreener, type ScreenOptions } from './createScreener.js';
 import { rankRows } from './rankRows.js';
-import type { FillSpec, ScreenRow, ScreenSettings, ScreenSummary } from './screenRow.js';
+import type { ScreenRow, ScreenSettings, ScreenSummary } from './screenRow.js';
 
 /** What {@link screen} returns. */
 export interface ScreenResult {
@@ -50,7 +50,7 @@ export interface ScreenResult {
  * result.summary.failed; // 1
  * ```
  */
-export function screen(candidates: Iterable<CandidateLike>, options: ScreenOptions & { fill?: FillSpec } = {}, dataset: Dataset = builtinDataset()): ScreenResult {
+export function screen(candidates: Iterable<CandidateLike>, options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): ScreenResult {
   const screener = createScreener(options, dataset);
   const rows: ScreenRow[] = [];
   for (const candidate of candidates) rows.push(screener.row(candidate));

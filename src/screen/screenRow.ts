@@ -45,19 +45,18 @@ export const rowErrorSchema = z.strictObject({
   field: z.string().optional(),
 });
 
-const temperatureSchema = z.looseObject({
-  value: z.number(),
-  low: z.number(),
-  high: z.number(),
-  unit: z.literal('°C'),
-});
-
-/** What the pack model says about the standard fill (further fields of the pack result are kept as they come). */
+/** What the pack model says about the standard fill ({@link packFinalTemperature}); further fields of its result are kept as they come. */
 export const fillResultSchema = z
   .looseObject({
-    finalTemperature: temperatureSchema.describe('temperature the fill reaches, with its 95 % interval'),
-    dissolved: z.array(z.looseObject({ formula: z.string(), loadedMass: z.number(), dissolvedMass: z.number(), undissolvedMass: z.number() })).optional(),
-    cautions: z.array(z.string()).optional(),
+    finalTemperature: estimateSchema.describe('temperature the fill reaches, °C, with its 95 % interval'),
+    temperatureChange: z.number().describe('final minus start temperature, K'),
+    dissolved: z
+      .array(z.looseObject({ formula: z.string(), loadedMass: z.number(), dissolvedMass: z.number(), undissolvedMass: z.number(), saturated: z.boolean() }))
+      .describe('grams loaded, dissolved and left undissolved, per solid'),
+    heat: z.looseObject({ unit: z.literal('kJ'), absorbed: z.number() }).describe('heat absorbed by dissolution, kJ (negative = released)'),
+    clamp: z.looseObject({ kind: z.enum(['freezing', 'eutectic', 'boiling']), temperature: z.number(), message: z.string() }).nullable(),
+    cautions: z.array(z.string()).describe('burn, cold-injury and chemical cautions for the fill'),
+    notes: z.array(z.string()),
   })
   .describe('the pack model result for the standard fill');
 

@@ -1,7 +1,7 @@
 /**
  * Source keys that a screen knows besides the dataset's own: for numbers a
- * user gives with a candidate, and for the invented numbers of the
- * demonstration.
+ * user gives with a candidate. (The invented numbers of the demonstration
+ * cite `inventedDemo`, a key of the built-in sources.)
  *
  * @module
  */
@@ -12,9 +12,5 @@ export const screenSources: Readonly<Record<string, SourceEntry>> = Object.freez
   screenInput: {
     citation: 'Value given with the candidate in the screening input (the user’s own measurement or supplier figure).',
     kind: 'derived',
-  },
-  inventedDemo: {
-    citation: 'Numbers invented for the ionheat demonstration scenario: not measurements, prices or specifications of any real product or supplier.',
-    kind: 'invented',
   },
 });

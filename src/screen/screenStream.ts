@@ -7,7 +7,7 @@ import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { CandidateLike } from './candidate.js';
 import { createScreener, type ScreenOptions } from './createScreener.js';
-import type { FillSpec, ScreenRow, ScreenSummary } from './screenRow.js';
+import type { ScreenRow, ScreenSummary } from './screenRow.js';
 
 /**
  * Screens candidates as they arrive and yields one row per candidate, in
@@ -28,7 +28,7 @@ import type { FillSpec, ScreenRow, ScreenSummary } from './screenRow.js';
  */
 export async function* screenStream(
   candidates: Iterable<CandidateLike> | AsyncIterable<CandidateLike>,
-  options: ScreenOptions & { fill?: FillSpec } = {},
+  options: ScreenOptions = {},
   dataset: Dataset = builtinDataset(),
 ): AsyncGenerator<ScreenRow, ScreenSummary, undefined> {
   const screener = createScreener(options, dataset);

@@ -31,7 +31,8 @@ export type ComparisonOp = '<' | '<=' | '>' | '>=' | '==' | '!=';
 export type ArithmeticOp = '+' | '-' | '*' | '/';
 export type SpecFunction = 'abs' | 'min' | 'max' | 'has';
 
-interface Span {
+/** Where a node's text lies in the expression. */
+export interface SpecSpan {
   /** Zero-based offsets of the node's text in the expression. */
   start: number;
   end: number;
@@ -39,18 +40,18 @@ interface Span {
 
 /** A node of a parsed specification. */
 export type SpecNode =
-  | (Span & { kind: 'number'; value: number })
-  | (Span & { kind: 'string'; value: string })
-  | (Span & { kind: 'boolean'; value: boolean })
-  | (Span & { kind: 'field'; path: (string | number)[]; /** Where each step of the path starts. */ steps: number[] })
-  | (Span & { kind: 'list'; items: SpecNode[] })
-  | (Span & { kind: 'not'; operand: SpecNode })
-  | (Span & { kind: 'negate'; operand: SpecNode })
-  | (Span & { kind: 'logic'; op: 'and' | 'or'; left: SpecNode; right: SpecNode })
-  | (Span & { kind: 'compare'; op: ComparisonOp; left: SpecNode; right: SpecNode })
-  | (Span & { kind: 'in'; left: SpecNode; right: SpecNode })
-  | (Span & { kind: 'arithmetic'; op: ArithmeticOp; left: SpecNode; right: SpecNode })
-  | (Span & { kind: 'call'; name: SpecFunction; args: SpecNode[] });
+  | (SpecSpan & { kind: 'number'; value: number })
+  | (SpecSpan & { kind: 'string'; value: string })
+  | (SpecSpan & { kind: 'boolean'; value: boolean })
+  | (SpecSpan & { kind: 'field'; path: (string | number)[]; /** Where each step of the path starts. */ steps: number[] })
+  | (SpecSpan & { kind: 'list'; items: SpecNode[] })
+  | (SpecSpan & { kind: 'not'; operand: SpecNode })
+  | (SpecSpan & { kind: 'negate'; operand: SpecNode })
+  | (SpecSpan & { kind: 'logic'; op: 'and' | 'or'; left: SpecNode; right: SpecNode })
+  | (SpecSpan & { kind: 'compare'; op: ComparisonOp; left: SpecNode; right: SpecNode })
+  | (SpecSpan & { kind: 'in'; left: SpecNode; right: SpecNode })
+  | (SpecSpan & { kind: 'arithmetic'; op: ArithmeticOp; left: SpecNode; right: SpecNode })
+  | (SpecSpan & { kind: 'call'; name: SpecFunction; args: SpecNode[] });
 
 const KEYWORDS = new Set(['and', 'or', 'not', 'in', 'true', 'false']);
 const FUNCTIONS = new Set<string>(['abs', 'min', 'max', 'has']);

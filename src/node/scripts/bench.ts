@@ -3,8 +3,14 @@
  * printed as ratios to their targets. Each section lives in its own file.
  */
 import { benchDissolve } from './benchDissolve.js';
+import { benchPack } from './benchPack.js';
+import { benchLattice } from './benchLattice.js';
 
-const sections: { name: string; run: () => string[] }[] = [{ name: 'dissolve', run: benchDissolve }];
+const sections: { name: string; run: () => string[] }[] = [
+  { name: 'dissolve', run: benchDissolve },
+  { name: 'pack', run: benchPack },
+  { name: 'lattice', run: benchLattice },
+];
 
 for (const section of sections) {
   process.stdout.write(`== ${section.name}\n${section.run().join('\n')}\n\n`);

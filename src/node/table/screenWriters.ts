@@ -73,7 +73,7 @@ function cellsOf(row: ScreenRow, settings: ScreenSettings, withCost: boolean): s
   const cells = [
     row.rank !== undefined ? String(row.rank) : '',
     String(row.line),
-    row.formula ?? row.input.formula,
+    row.status === 'failed' ? row.input.formula : (row.formula ?? row.input.formula),
     row.status === 'computed' ? estimateText(row.objective) : '',
     row.objective?.basis ?? '',
     row.status === 'computed' ? (row.verdict ?? '') : '',

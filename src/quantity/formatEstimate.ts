@@ -1,0 +1,46 @@
+import type { Estimate } from './estimate.js';
+import { roundToUncertainty } from './rounding.js';
+
+/** Text forms of an estimate's numbers, rounded together for display. */
+export interface FormattedEstimate {
+  value: string;
+  u: string;
+  low: string;
+  high: string;
+}
+
+/** Writes x with exactly `places` decimals (or rounded to tens, hundreds… when places < 0), keeping trailing zeros. */
+function fixed(x: number, exponent: number, signed: boolean): string {
+  const places = Math.max(0, -exponent);
+  const scaled = exponent > 0 ? Math.round(x / 10 ** exponent) * 10 ** exponent : x;
+  let s = (Object.is(scaled, -0) ? 0 : scaled).toFixed(Math.min(places, 20));
+  if (/^-0(\.0*)?$/.test(s)) s = s.slice(1);
+  if (signed && !s.startsWith('-') && Number(s) !== 0) s = `+${s}`;
+  return s.replace(/^-/, '−');
+}
+
+/**
+ * The numbers of an estimate as text for tables and reports: the standard
+ * uncertainty to two significant digits and the value and interval ends to
+ * the same decimal place, trailing zeros kept (`0.20`, not `0.2`), a true
+ * minus sign, and a `+` on positive values when `signed` is set (useful for
+ * enthalpies, where the sign is the message).
+ *
+ * @param e - the estimate
+ * @param options.signed - prefix positive numbers with `+`
+ * @example
+ * ```ts
+ * const e = makeEstimate({ quantity: 'enthalpy of solution', value: 34.89, u: 0.2, unit: 'kJ/mol', basis: 'measured', method: 'table' });
+ * formatEstimate(e, { signed: true }).value; // '+34.89'
+ * formatEstimate(e).u; // '0.20'
+ * ```
+ */
+export function formatEstimate(e: Pick<Estimate, 'value' | 'u' | 'low' | 'high'>, options: { signed?: boolean } = {}): FormattedEstimate {
+  const signed = options.signed === true;
+  if (!(e.u > 0)) {
+    const plain = (x: number) => fixed(x, -Math.min(6, Math.max(0, 4 - Math.floor(Math.log10(Math.abs(x) || 1)))), signed);
+    return { value: plain(e.value), u: '0', low: plain(e.low), high: plain(e.high) };
+  }
+  const { exponent } = roundToUncertainty(e.value, e.u);
+  return { value: fixed(e.value, exponent, signed), u: fixed(e.u, exponent, false), low: fixed(e.low, exponent, signed), high: fixed(e.high, exponent, signed) };
+}

@@ -1,0 +1,33 @@
+import type { Dataset } from '../data/dataset.js';
+import { builtinDataset } from '../data/builtin.js';
+import { hazardClassSchema, type HazardClass } from '../data/schemas.js';
+import type { Salt } from '../chem/salt.js';
+import { saltHazards } from '../pack/saltHazards.js';
+
+/** The hazard classes and statements of a salt, as one screen row shows them. */
+export interface HazardSummary {
+  /** Every class of the salt's and its ions' records, each once, in the order of the schema's vocabulary. */
+  classes: HazardClass[];
+  /** The records' plain-words statements, the salt's own first. */
+  statements: string[];
+}
+
+/**
+ * The hazards table's classes and statements for a salt, joined from the
+ * records {@link saltHazards} finds (the salt's own, a hydrate sharing its
+ * anhydrous salt's, and its ions'). Empty lists mean the table names no
+ * hazard, not that the salt is harmless.
+ *
+ * @example
+ * ```ts
+ * hazardSummary(parseSalt('NH4NO3')).classes.includes('explosive-precursor'); // true
+ * hazardSummary(parseSalt('K2CrO4')).classes.includes('carcinogen'); // true (from the chromate ion's record)
+ * hazardSummary(parseSalt('KCl')).classes; // []
+ * ```
+ */
+export function hazardSummary(salt: Salt, dataset: Dataset = builtinDataset()): HazardSummary {
+  const records = saltHazards(salt, dataset);
+  const order = hazardClassSchema.options;
+  const classes = [...new Set(records.flatMap((r) => r.classes))].sort((a, b) => order.indexOf(a) - order.indexOf(b));
+  return { classes, statements: [...new Set(records.map((r) => r.statement))] };
+}
