@@ -56,6 +56,9 @@ export { thermalElectronEnthalpy } from './cycle/thermalElectronEnthalpy.js';
 export { ionText } from './cycle/ionText.js';
 export type { CycleStep, CycleStepKind } from './cycle/cycleStep.js';
 export type { IonShape } from './lattice/latticeIons.js';
+export { anchoredSolutionEnthalpies, anchoredFloor, anchorSets, ANCHOR_NEIGHBOURS, type AnchorSet, type AnchorCombination, type FloorGroupKey } from './solution/anchoredSolution.js';
+export { anchorIndex, ionDistance, cationCore, binaryIons, ION_DISTANCE, type AnchorIndex, type AnchorSalt, type Neighbour } from './solution/anchorIndex.js';
+export { solutionEnthalpyFromModel } from './solution/modelSolution.js';
 export { ewaldMadelung, erfc, type PointChargeCell, type EwaldOptions, type MadelungResult, type Vec3 } from './lattice/ewaldMadelung.js';
 export { idealCell, idealCellTypes } from './lattice/idealCell.js';
 
