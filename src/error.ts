@@ -42,10 +42,16 @@ export interface ErrorContext {
 /**
  * A failure with a stable `code` and a message in a chemist's words.
  *
+ * @param code - one of {@link errorCodes}; stable, so software can branch on it
+ * @param message - what was wrong, naming the field, file, record or position
+ * @param context - the offending text, a zero-based character position in it, and the field it belongs to
+ * @see DEVELOPERS.md, "Conventions", on errors: only this class is thrown for anything a caller can cause.
+ *
  * @example
  * ```ts
  * const e = new IonheatError('UNKNOWN_ION', 'no ion in the table matches "Xy"', { text: 'XyCl', position: 0 });
  * e.code; // 'UNKNOWN_ION'
+ * e.toJSON().position; // 0
  * ```
  */
 export class IonheatError extends Error {
@@ -75,7 +81,23 @@ export class IonheatError extends Error {
   }
 }
 
-/** True when `e` is an {@link IonheatError}, whatever realm it came from. */
+/**
+ * True when `e` is an {@link IonheatError}, whatever realm it came from (an
+ * error thrown by another copy of the library, or one that crossed a worker
+ * boundary, is recognised by its `name` and `code`).
+ *
+ * @param e - anything caught
+ * @see DEVELOPERS.md, "Conventions", on errors.
+ *
+ * @example
+ * ```ts
+ * let caught;
+ * try { parseSalt('NaXy'); } catch (e) { caught = e; }
+ * isIonheatError(caught); // true
+ * caught.code; // 'UNKNOWN_ELEMENT'
+ * isIonheatError(new Error('other')); // false
+ * ```
+ */
 export function isIonheatError(e: unknown): e is IonheatError {
   return e instanceof IonheatError || (typeof e === 'object' && e !== null && (e as { name?: unknown }).name === 'IonheatError' && typeof (e as { code?: unknown }).code === 'string');
 }

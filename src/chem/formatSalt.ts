@@ -39,6 +39,11 @@ function subscriptDigits(formula: string): string {
  * `style: 'unicode'` writes subscript digits for display (`Ca(NO₃)₂·4H₂O`).
  * Parsing the result gives the same salt back.
  *
+ * @param salt - the ions (formula and count) and the moles of water of crystallization per formula unit
+ * @param options - `style`: `'plain'` (ASCII digits, the default) or `'unicode'` (subscripts, for display)
+ * @see IUPAC, Nomenclature of Inorganic Chemistry (Recommendations 2005), IR-4.4: electropositive
+ *   constituents first, polyatomic groups in parentheses, solvates after a centred dot.
+ *
  * @example
  * ```ts
  * formatSalt(parseSalt('Na2SO4.10H2O')); // 'Na2SO4·10H2O'

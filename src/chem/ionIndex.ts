@@ -68,9 +68,15 @@ export function ionIndex(dataset: Dataset): IonIndex {
 /**
  * The ion with this id (`Na[+]`, `SO4[2-]`), or undefined.
  *
+ * @param id - formula plus bracketed charge, as in `data/ions.json`
+ * @param dataset - the ion table (default: built-in)
+ * @see data/ions.json (each record names its source); DEVELOPERS.md, "Adding an ion".
+ *
  * @example
  * ```ts
  * findIon('SO4[2-]')?.charge; // -2
+ * findIon('NH4[+]')?.name; // 'ammonium'
+ * findIon('Xx[+]'); // undefined
  * ```
  */
 export function findIon(id: string, dataset: Dataset = builtinDataset()): IonRecord | undefined {

@@ -18,6 +18,7 @@ export function isKnownElement(symbol: string, dataset: Dataset = builtinDataset
  * IUPAC standard atomic weights of the dataset, summed exactly.
  *
  * @param composition - element symbol → count
+ * @param dataset - the atomic weights table, elements.json (default: built-in)
  * @returns g/mol
  * @see Prohaska et al., Standard atomic weights of the elements 2021, Pure Appl. Chem. 94, 573 (2022).
  * @example

@@ -187,6 +187,9 @@ function buildSalt(kind: Salt['kind'], ions: SaltIon[], water: number, index: Io
  *
  * @param formula - the formula as written
  * @param dataset - ion and element tables (default: built-in)
+ * @see IUPAC, Nomenclature of Inorganic Chemistry (Recommendations 2005), IR-4 (formulae); molar masses from the
+ *   standard atomic weights of Prohaska et al. (2022), source key `iupac2021`.
+ *
  * @example
  * ```ts
  * const s = parseSalt('Ca(NO3)2·4H2O');

@@ -35,7 +35,21 @@ export const saltSchema = z.strictObject({
 });
 export type Salt = z.infer<typeof saltSchema>;
 
-/** `1:1`, `2:1` (CaCl2), `1:2` (Na2SO4)…: |cation charge|:|anion charge| of a salt with one kind of each. */
+/**
+ * The charge type |z₊|:|z₋| of a salt with one kind of cation and one kind of
+ * anion: `1:1` (NaCl), `2:1` (CaCl2), `1:2` (Na2SO4). Undefined for a double
+ * salt or a non-electrolyte.
+ *
+ * @param salt - a parsed salt ({@link parseSalt})
+ * @see The charge-type classes of electrolytes used throughout Parker (1965), source key `parker1965`.
+ *
+ * @example
+ * ```ts
+ * chargeType(parseSalt('CaCl2')); // '2:1'
+ * chargeType(parseSalt('Na2SO4')); // '1:2'
+ * chargeType(parseSalt('KAl(SO4)2·12H2O')); // undefined
+ * ```
+ */
 export function chargeType(salt: Salt): string | undefined {
   const cations = salt.ions.filter((i) => i.charge > 0);
   const anions = salt.ions.filter((i) => i.charge < 0);
@@ -43,7 +57,20 @@ export function chargeType(salt: Salt): string | undefined {
   return `${cations[0]!.charge}:${-anions[0]!.charge}`;
 }
 
-/** Total number of ions per formula unit (ν of the dissolution reaction; water excluded). */
+/**
+ * Total number of ions per formula unit, ν = Σᵢ νᵢ, of the dissolution
+ * reaction MₐXᵦ(s) → a M(aq) + b X(aq); water of crystallization excluded.
+ * ν is the prefactor of the Kapustinskii equation.
+ *
+ * @param salt - a parsed salt ({@link parseSalt})
+ * @see Kapustinskii (1956), source key `kapustinskii1956`, for ν as the number of ions per formula unit.
+ *
+ * @example
+ * ```ts
+ * ionsPerFormulaUnit(parseSalt('CaCl2·6H2O')); // 3
+ * ionsPerFormulaUnit(parseSalt('KAl(SO4)2·12H2O')); // 4
+ * ```
+ */
 export function ionsPerFormulaUnit(salt: Salt): number {
   return salt.ions.reduce((n, i) => n + i.count, 0);
 }

@@ -107,6 +107,7 @@ function affinityUnknown(salt: Salt, dataset: Dataset): { ion: string; element: 
  *
  * @param salt - an anhydrous ionic salt (formula or parsed)
  * @param options - the unknown, and a lattice or formation enthalpy where needed
+ * @param dataset - formation enthalpies, ionization energies, electron affinities, atomization enthalpies (default: built-in)
  * @throws IonheatError `NOT_APPLICABLE` (non-electrolyte, hydrate, an
  *   electron affinity for a polyatomic anion), `MISSING_DATA` (naming the
  *   step without data)

@@ -31,6 +31,8 @@ export interface CycleLatticeOptions {
  * uncertainty treats the terms as independent.
  *
  * @param salt - an anhydrous ionic salt (formula or parsed)
+ * @param dataset - ΔfH°(cr) and the gaseous-ion formation enthalpies (default: built-in)
+ * @param options - `hideCrystal`: ignore the salt's own crystal formation enthalpy (leave-one-out checks)
  * @returns kJ/mol; undefined when a term is missing, for a hydrate or for a non-electrolyte
  * @see Wagman et al. 1982 (NBS tables) for ΔfH°(cr); the Born–Haber cycle (Born 1919, Haber 1919).
  * @example

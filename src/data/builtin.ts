@@ -38,9 +38,12 @@ let builtin: Dataset | undefined;
  * The dataset of built-in tables (the same object on every call; it is
  * immutable). Merge your own tables over it with {@link Dataset.withOverrides}.
  *
+ * @see data/sources.json, the full citation of every source key the records name; DEVELOPERS.md, "Data tables".
+ *
  * @example
  * ```ts
  * builtinDataset().records('ions.json').length > 60; // true
+ * builtinDataset() === builtinDataset(); // true
  * ```
  */
 export function builtinDataset(): Dataset {

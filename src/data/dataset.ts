@@ -24,7 +24,23 @@ function deepFreeze<T>(value: T): T {
   return value;
 }
 
-/** Immutable tables plus per-dataset lazily built indexes. */
+/**
+ * Immutable tables plus per-dataset lazily built indexes. Get the built-in
+ * one from {@link builtinDataset} and a user's variant from
+ * {@link Dataset.withOverrides}; every computing function takes a dataset as
+ * its last argument.
+ *
+ * @see data/sources.json for the citation behind every record's `source` key
+ *   (read them with {@link Dataset.source}); DEVELOPERS.md, "Data tables".
+ *
+ * @example
+ * ```ts
+ * const data = builtinDataset();
+ * data.label; // 'built-in'
+ * data.source('wagman1982').kind; // 'journal'
+ * data.records('solution-enthalpies.json').some((r) => r.formula === 'NH4NO3'); // true
+ * ```
+ */
 export class Dataset {
   readonly #tables: Tables;
   readonly #sources: Readonly<Record<string, SourceEntry>>;
@@ -35,6 +51,10 @@ export class Dataset {
   /**
    * Wraps already-validated tables. Use {@link Dataset.withOverrides} to add
    * user tables; this constructor trusts its input.
+   *
+   * @param tables - table envelopes by file name (`'ions.json'`…), already valid against their schemas
+   * @param sources - citations by source key
+   * @param label - where the tables came from, for messages
    */
   constructor(tables: Tables, sources: Readonly<Record<string, SourceEntry>>, label = 'built-in') {
     this.#tables = deepFreeze({ ...tables });

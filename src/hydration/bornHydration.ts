@@ -251,7 +251,9 @@ export function bornCalibration(options: { excludeIon?: string } = {}, dataset: 
  * instead, and the result says so. Always flagged as an estimate.
  *
  * @param ion - an ion id, e.g. `SO4[2-]`
+ * @param options - calibration choices
  * @param options.excludeIon - leave this ion out of the calibration (to test the estimate on a tabulated ion)
+ * @param dataset - radii (Å) and the tabulated hydration enthalpies (kJ/mol) the offset δ is fitted to (default: built-in)
  * @returns basis `model`, method `born-lps`, on the absolute scale; undefined when no radius is known
  * @see Latimer, Pitzer and Slansky, J. Chem. Phys. 7, 108 (1939); Born, M. Z. Phys. 1, 45 (1920)
  * @example

@@ -54,6 +54,7 @@ function indexes(dataset: Dataset): Indexes {
  * such cycle and are undefined unless tabulated.
  *
  * @param ion - an ion id, e.g. `Mn[2+]`
+ * @param dataset - ion-formation-gas.json, atomization enthalpies, ionization energies and electron affinities (default: built-in)
  * @returns kJ/mol; basis `measured` (tabulated) or `cycle` (atom + ionization); undefined when neither is possible
  * @see Wagman et al. 1982, the NBS tables (J. Phys. Chem. Ref. Data 11, Suppl. 2), for the convention and the tabulated ions
  * @example

@@ -123,6 +123,7 @@ export function tabulatedHydrationTerm(ion: string, scale: HydrationScale, datas
  *
  * @param ion - an ion id, e.g. `Na[+]`
  * @param scale - `absolute` (default) or `conventional`
+ * @param dataset - hydration enthalpies and aqueous and gaseous formation enthalpies (default: built-in)
  * @returns basis `measured` (absolute, tabulated) or `cycle` (conventional); undefined when the tables lack the ion
  * @see Marcus, Y. Ion Properties (Dekker, 1997); Marcus, Y. J. Chem. Soc. Faraday Trans. 87, 2995 (1991)
  * @see Wagman et al. 1982, the NBS tables (J. Phys. Chem. Ref. Data 11, Suppl. 2)

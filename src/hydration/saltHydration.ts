@@ -21,7 +21,26 @@ export interface SaltHydrationOptions {
   born?: boolean;
 }
 
-/** The terms of a salt's hydration sum, or undefined when an ion has no value. */
+/**
+ * The terms ν·ΔhydH°(ion) of a salt's hydration sum, one per ion with its
+ * count ν, or undefined when an ion has no value (or for a non-electrolyte).
+ * Each term is a tabulated value (Marcus, absolute scale; or ΔfH°(aq) −
+ * ΔfH°(g), conventional scale) or, where `born` allows, a Born estimate.
+ *
+ * @param salt - an ionic salt (its water of crystallization plays no part)
+ * @param options - `scale` (`absolute` or `conventional`) and `born` (let Born estimates stand in)
+ * @param dataset - hydration and formation enthalpies (default: built-in)
+ * @returns each ion's term, kJ/mol per ion, gaseous ion → aqueous ion at infinite dilution, with its count
+ * @see Marcus, Ion Properties (1997), source key `marcus1997`; Wagman et al. (1982), `wagman1982`, for the conventional scale.
+ *
+ * @example
+ * ```ts
+ * const terms = saltHydrationTerms(parseSalt('CaCl2'));
+ * terms.map((t) => `${t.count} ${t.term.ion}`); // ['1 Ca[2+]', '2 Cl[-]']
+ * terms[1].term.value; // -367 kJ/mol (Marcus, Cl⁻)
+ * saltHydrationTerms(parseSalt('urea')); // undefined
+ * ```
+ */
 export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {}, dataset: Dataset = builtinDataset()): { term: HydrationTerm; count: number }[] | undefined {
   if (salt.kind !== 'ionic') return undefined;
   const scale = options.scale ?? 'absolute';
@@ -54,6 +73,8 @@ export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {
  * stands in; the notes name the estimated ions.
  *
  * @param salt - an ionic salt (its water of crystallization plays no part)
+ * @param options - `scale` (`absolute`, the default, or `conventional`) and `born` (default true)
+ * @param dataset - hydration and formation enthalpies, radii for the Born estimates (default: built-in)
  * @returns undefined for a non-electrolyte or when an ion has neither a value nor a radius
  * @see Marcus, Y. Ion Properties (Dekker, 1997); Wagman et al. 1982 (NBS tables)
  * @example

@@ -121,6 +121,7 @@ function check(cell: PointChargeCell): void {
  * (primitive, conventional or any supercell).
  *
  * @param cell - lattice vectors and the sites with their charges
+ * @param options - formula units in the cell, the charge product |z₊z₋| the constant is divided by, and the relative tolerance of the lattice sums (default 1e−12)
  * @returns the constant, the cell energy, r₀, Z and |z₊z₋|
  * @throws IonheatError `INVALID_ARGUMENT` for a malformed or charged cell
  * @see Ewald, P. P. Ann. Phys. 369, 253 (1921); published constants: CRC Handbook, 'Madelung constants'.

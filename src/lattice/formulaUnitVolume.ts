@@ -16,6 +16,9 @@ const NM3_PER_CM3 = 1e21;
  * @param molarMass - M, g/mol
  * @param density - ρ, g/cm³
  * @returns V_m in nm³
+ * @see Jenkins et al. (1999), source key `jenkins1999`, for V_m from density as the input of the volume-based estimate;
+ *   N_A from CODATA 2018 (src/quantity/constants.ts).
+ *
  * @example
  * ```ts
  * formulaUnitVolume(58.44, 2.17); // 0.04472 nm³ (NaCl)

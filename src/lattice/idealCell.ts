@@ -33,10 +33,16 @@ export const idealCellTypes = ['rock-salt', 'caesium-chloride', 'zinc-blende', '
  * practice; Wyckoff, Crystal Structures).
  *
  * @param type - one of {@link idealCellTypes}
+ * @returns fractional site positions and charges in a cell of lattice parameter 1 (dimensionless)
  * @throws IonheatError `NOT_APPLICABLE` for the types whose geometry needs measured parameters (rutile, cadmium iodide, cadmium chloride, corundum)
+ * @see Wyckoff, Crystal Structures, 2nd ed. (1963), source key `wyckoff1963`, for the site positions;
+ *   the Madelung constants they give are checked against the CRC table, `crcMadelung`.
+ *
  * @example
  * ```ts
  * ewaldMadelung(idealCell('rock-salt')).madelung; // 1.747565
+ * ewaldMadelung(idealCell('caesium-chloride')).madelung; // 1.762675
+ * idealCell('fluorite').sites.length; // 12
  * ```
  */
 export function idealCell(type: StructureType): PointChargeCell {

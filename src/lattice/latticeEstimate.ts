@@ -64,6 +64,7 @@ function readMethod(method: string): { model: LatticeModel; corrected: boolean }
  * @param salt - an anhydrous ionic salt (formula or parsed)
  * @param method - `kapustinskii`, `born-lande`, `born-mayer`, `vbt`, or one of these with `-corrected`
  * @param options - structure, lattice parameter a (Å), coordination number, a further salt to leave out
+ * @param dataset - radii (Å), ion volumes (nm³), structures, Born exponents and the cycle data of the calibration (default: built-in)
  * @returns kJ/mol, positive for crystal → gaseous ions
  * @throws IonheatError `NOT_APPLICABLE` (non-electrolyte, hydrate, a structure
  *   that does not fit), `MISSING_DATA` (naming the missing radius, volume,
@@ -90,10 +91,19 @@ export function latticeEstimate(salt: Salt | string, method: LatticeMethod, opti
  * does not apply or lacks data (`NOT_APPLICABLE`, `MISSING_DATA`; the fast
  * path for callers that try many salts). Bad arguments still throw.
  *
+ * @param salt - an anhydrous ionic salt (formula or parsed)
+ * @param method - one of {@link latticeMethods}
+ * @param options - structure, lattice parameter a (Å), coordination number, a further salt to leave out
+ * @param dataset - the tables (default: built-in)
+ * @returns kJ/mol, or undefined
+ * @see the methods' sources at {@link latticeEstimate}: Kapustinskii (1956), `kapustinskii1956`; Born and Landé (1918),
+ *   `born1918`; Born and Mayer (1932), `born1932`; Jenkins et al. (1999), `jenkins1999`.
+ *
  * @example
  * ```ts
  * tryLatticeEstimate('KNO3', 'born-lande'); // undefined (no structure type for KNO3)
  * tryLatticeEstimate('KNO3', 'kapustinskii')?.method; // 'kapustinskii'
+ * tryLatticeEstimate('KNO3', 'kapustinskii')?.value; // ≈ 640 kJ/mol
  * ```
  */
 export function tryLatticeEstimate(salt: Salt | string, method: LatticeMethod, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
@@ -213,11 +223,19 @@ function computeEstimate(s: Salt, method: LatticeMethod, options: LatticeEstimat
  * method was skipped.
  *
  * @param salt - an anhydrous ionic salt (formula or parsed)
+ * @param options - structure, lattice parameter a (Å), coordination number, a further salt to leave out
+ * @param dataset - the tables (default: built-in)
+ * @returns the estimates (kJ/mol) in the order of {@link latticeMethods}, and each skipped method with the reason
  * @throws IonheatError `NOT_APPLICABLE` for a non-electrolyte or a hydrate
+ * @see Kapustinskii (1956), `kapustinskii1956`; Born and Landé (1918), `born1918`; Born and Mayer (1932), `born1932`;
+ *   Jenkins et al. (1999), `jenkins1999`; the calibration: docs/lattice-calibration.md.
+ *
  * @example
  * ```ts
- * const { estimates } = latticeEstimates('NaCl');
+ * const { estimates, skipped } = latticeEstimates('NaCl');
  * estimates.map((e) => e.method).includes('born-mayer-corrected'); // true
+ * estimates.find((e) => e.method === 'vbt-corrected').value; // ≈ 785 kJ/mol (cycle: 787)
+ * skipped.length; // 0
  * ```
  */
 export function latticeEstimates(

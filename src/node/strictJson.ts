@@ -11,6 +11,19 @@ import { IonheatError } from '../error.js';
  *
  * @param text - the file's content
  * @param label - the file name, for messages
+ * @throws IonheatError `INVALID_DATA` naming the file and the line
+ * @see ECMA-404, The JSON Data Interchange Syntax, 2nd ed. (2017), and RFC 8259 §4 ("the names within an object
+ *   SHOULD be unique"), which this makes a must.
+ *
+ * @example
+ * ```ts
+ * parseJsonStrict('{"a": 1, "b": [2, 3]}', 'ok.json'); // { a: 1, b: [2, 3] }
+ * let error;
+ * try { parseJsonStrict('{\n"a": 1,\n"a": 2\n}', 'twice.json'); } catch (e) { error = e; }
+ * error.message; // 'twice.json, line 3: the key "a" appears twice in one object'
+ * try { parseJsonStrict('{"__proto__": {}}', 'proto.json'); } catch (e) { error = e; }
+ * error.field; // '__proto__'
+ * ```
  */
 export function parseJsonStrict(text: string, label: string): unknown {
   let value: unknown;

@@ -63,12 +63,20 @@ function shortCitation(citation: string | undefined): string | undefined {
  * - every hazard the hazards table gives for each salt, with its source;
  * - last, the screening line.
  *
+ * @param input - start and final temperatures with the final's 95 % interval (°C), any freezing/eutectic/boiling clamp,
+ *   the salts, and optionally the seconds a time course spends above the burn threshold
+ * @param dataset - the hazards table (default: built-in)
+ * @returns the caution sentences, the screening line last
+ * @see ISO 13732-1:2006, source key `iso13732` (contact-burn threshold); the hazards table's sources, e.g. `clpAnnexVI`,
+ *   `eu2019_1148`, `reachAnnexXVII`, `supplierSds`; cold-injury advice: `commonPractice`.
+ *
  * @example
  * ```ts
  * const salts = [parseSalt('CaCl2')];
  * const list = packCautions({ startC: 20, final: { value: 62, low: 60, high: 64 }, salts });
  * list[0].startsWith('Contact-burn risk'); // true
  * list[list.length - 1] === SCREENING_LINE; // true
+ * list.some((line) => line.startsWith('CaCl2 (irritant)')); // true
  * ```
  */
 export function packCautions(input: CautionInput, dataset: Dataset = builtinDataset()): string[] {

@@ -207,9 +207,18 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
  * 95 % interval comes from the enthalpy intervals and the heat-capacity
  * uncertainty, by bounds (default) or seeded Monte Carlo.
  *
+ * The balance, for solids i dissolving nᵢ(T) mol with ΔsolHᵢ (kJ/mol,
+ * positive = endothermic) into a fill of heat capacity C (J/K):
+ *
+ *   Σᵢ nᵢ(T)·ΔsolHᵢ·1000 = C·(T₀ − T)
+ *
  * @param fill - solids (formula, grams), water (g), start (°C, default 20), container (J/K, default 0)
  * @param options - heat-capacity override, Kirchhoff correction, interval method
+ * @param dataset - enthalpies of solution, solubilities, heat capacities and hazards (default: built-in)
  * @returns temperatures in °C, masses in g, heats in kJ, heat capacity in J/K, with cautions and notes
+ * @see enthalpies of solution: the CRC table, `crcSolution`, and Wagman et al. (1982), `wagman1982`; solubilities: the CRC
+ *   table, `crcSolubility`; heat capacities: `wagman1982`; the root finder: Brent, R. P. Algorithms for Minimization
+ *   without Derivatives (Prentice-Hall, 1973), ch. 4; docs/methods.md, "Pack design".
  * @throws IonheatError `INVALID_ARGUMENT` naming the field for bad input; parser errors or `MISSING_DATA` for an unknown salt
  * @example
  * ```ts
@@ -217,6 +226,11 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
  * const r = packFinalTemperature({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 });
  * r.finalTemperature.value; // 11.93
  * r.dissolved[0].undissolvedMass; // 0
+ * r.heatCapacity.value; // ≈ 427.5 J/K
+ * // 30 g CaCl2 in 100 g water: a hot pack, with the contact-burn caution first
+ * const hot = packFinalTemperature({ solids: [{ formula: 'CaCl2', massG: 30 }], waterG: 100, startC: 20 });
+ * hot.finalTemperature.value; // ≈ 70.3 °C
+ * hot.cautions[0].startsWith('Contact-burn risk'); // true
  * ```
  */
 export function packFinalTemperature(fill: PackFill, options: PackOptions = {}, dataset: Dataset = builtinDataset()): PackResult {

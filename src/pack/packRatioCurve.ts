@@ -132,6 +132,16 @@ function refineMaximum(g: (r: number) => number, xs: readonly number[], k: numbe
  * and container are kept. Maxima are refined by golden-section search to
  * 1e-7 g/g.
  *
+ * @param fill - solids (formula, grams), water (g), start temperature (°C, default 20), container heat capacity (J/K, default 0)
+ * @param options - `points` on the curve, `maxRatio` (g solid per g water), `targetC` (°C)
+ * @param packOptions - as for {@link packFinalTemperature}: heat-capacity override (J/K), Kirchhoff correction, interval method
+ * @param dataset - enthalpies of solution, solubilities, heat capacities and hazards (default: built-in)
+ * @returns ratios in g solid per g water, temperatures in °C
+ * @see enthalpies of solution: the CRC table, `crcSolution`, and Wagman et al. (1982), `wagman1982`; solubilities: the CRC
+ *   table, `crcSolubility`; heat capacities: `wagman1982`; the root finder: Brent, R. P. Algorithms for Minimization
+ *   without Derivatives (Prentice-Hall, 1973), ch. 4; docs/methods.md, "Pack design".
+ * @see golden-section search: Kiefer, J. Proc. Am. Math. Soc. 4, 502–506 (1953).
+ *
  * @example
  * ```ts
  * const curve = packRatioCurve({ solids: [{ formula: 'KNO3', massG: 1 }], waterG: 100, startC: 20 }, { points: 50, targetC: 12 });
@@ -259,9 +269,19 @@ function designForTarget(s: Sweeper, targetC: number, extremeRatio: number): Pac
  * The salt-to-water ratio that brings a fill to a target temperature (see
  * {@link packRatioCurve}).
  *
+ * @param fill - solids (formula, grams), water (g), start temperature (°C, default 20), container heat capacity (J/K, default 0)
+ * @param targetC - the target final temperature, °C
+ * @param packOptions - as for {@link packFinalTemperature}: heat-capacity override (J/K), Kirchhoff correction, interval method
+ * @param dataset - enthalpies of solution, solubilities, heat capacities and hazards (default: built-in)
+ * @returns the design (ratio in g solid per g water, final temperature in °C), or why no ratio reaches the target
+ * @see enthalpies of solution: the CRC table, `crcSolution`, and Wagman et al. (1982), `wagman1982`; solubilities: the CRC
+ *   table, `crcSolubility`; heat capacities: `wagman1982`; the root finder: Brent, R. P. Algorithms for Minimization
+ *   without Derivatives (Prentice-Hall, 1973), ch. 4; docs/methods.md, "Pack design".
+ *
  * @example
  * ```ts
- * ratioForTargetTemperature({ solids: [{ formula: 'NH4NO3', massG: 1 }], waterG: 100, startC: 20 }, 5).design.ratio; // ≈ 0.2126 (21.3 g of NH4NO3 per 100 g of water)
+ * const design = ratioForTargetTemperature({ solids: [{ formula: 'NH4NO3', massG: 1 }], waterG: 100, startC: 20 }, 5);
+ * design.design.ratio; // ≈ 0.2126 (21.3 g of NH4NO3 per 100 g of water)
  * ```
  */
 export function ratioForTargetTemperature(fill: PackFill, targetC: number, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackTargetDesign {
@@ -272,6 +292,15 @@ export function ratioForTargetTemperature(fill: PackFill, targetC: number, packO
  * The salt-to-water ratio with the largest temperature change per gram of
  * fill (solid + water), from a 200-point curve refined by golden section
  * (see {@link packRatioCurve}).
+ *
+ * @param fill - solids (formula, grams), water (g), start temperature (°C, default 20), container heat capacity (J/K, default 0)
+ * @param packOptions - as for {@link packFinalTemperature}: heat-capacity override (J/K), Kirchhoff correction, interval method
+ * @param dataset - enthalpies of solution, solubilities, heat capacities and hazards (default: built-in)
+ * @returns the design point: ratio in g solid per g water, final temperature in °C
+ * @see enthalpies of solution: the CRC table, `crcSolution`, and Wagman et al. (1982), `wagman1982`; solubilities: the CRC
+ *   table, `crcSolubility`; heat capacities: `wagman1982`; the root finder: Brent, R. P. Algorithms for Minimization
+ *   without Derivatives (Prentice-Hall, 1973), ch. 4; docs/methods.md, "Pack design".
+ * @see golden-section search: Kiefer, J. Proc. Am. Math. Soc. 4, 502–506 (1953).
  *
  * @example
  * ```ts

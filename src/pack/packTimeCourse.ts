@@ -141,10 +141,23 @@ function parameter(options: TimeCourseOptions, key: keyof typeof DEFAULTS, check
  * The defaults are assumed values for illustration, not measurements: give
  * your own for a real pack.
  *
+ * @param fill - solids (formula, grams), water (g), start temperature (°C, default 20), container heat capacity (J/K, default 0)
+ * @param options - duration (s), dissolution time constant τ (s), air and skin temperatures (°C) and conductances
+ *   G_air, G_skin (W/K), a comfort band (°C), and the number of samples
+ * @param packOptions - as for {@link packFinalTemperature}: heat-capacity override (J/K), Kirchhoff correction, interval method
+ * @param dataset - enthalpies of solution, solubilities, heat capacities and hazards (default: built-in)
+ * @returns times in s, temperatures in °C, heats in kJ
+ * @see Newton's law of cooling, C·dT/dt = G·(T_env − T): any heat-transfer text, e.g. Incropera, F. P.; DeWitt, D. P.
+ *   Fundamentals of Heat and Mass Transfer (Wiley); first-order dissolution kinetics: `commonPractice`; the
+ *   adiabatic end point as in {@link packFinalTemperature}.
+ *
  * @example
  * ```ts
  * const course = packTimeCourse({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 }, { ambientConductanceWPerK: 0, skinConductanceWPerK: 0 });
  * course.points[course.points.length - 1].temperature; // ≈ 11.93 (the adiabatic final temperature)
+ * // with the default (assumed) exchange with air and skin the pack warms back up within the hour
+ * const held = packTimeCourse({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 });
+ * held.points[held.points.length - 1].t; // 3600 s
  * ```
  */
 export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackTimeCourse {

@@ -45,10 +45,16 @@ function buildIndex(dataset: Dataset): HazardIndex {
  * of its ions not already covered. Empty when the table lists nothing.
  *
  * @param salt - formula or parsed salt
+ * @param dataset - the hazards table (default: built-in)
+ * @see each record's own source: the CLP Regulation's Annex VI, `clpAnnexVI`; the explosives-precursors Regulation,
+ *   `eu2019_1148`; REACH Annexes XIV and XVII, `reachAnnexXIV`, `reachAnnexXVII`; the mercury Regulation,
+ *   `euMercury2017`; supplier safety data sheets, `supplierSds`.
+ *
  * @example
  * ```ts
  * saltHazards('NH4NO3')[0]?.classes.includes('explosive-precursor'); // true
  * saltHazards('NaCl').length; // 0
+ * saltHazards('NH4NO3')[0]?.source; // 'eu2019_1148'
  * ```
  */
 export function saltHazards(salt: string | Salt, dataset: Dataset = builtinDataset()): HazardRecord[] {

@@ -111,9 +111,14 @@ function buildCurves(dataset: Dataset): ReadonlyMap<string, SolubilityCurve> {
  * hydrate finds its salt's curve), or undefined when the table has none.
  *
  * @param salt - a formula or a parsed salt; its water of crystallization is ignored
+ * @param dataset - the solubility table (default: built-in)
+ * @returns points in °C and g anhydrous salt per 100 g water, with the equilibrium solid of each
+ * @see the CRC table, source key `crcSolubility`; Seidell (1941), `seidell1941`, for the organic solutes.
+ *
  * @example
  * ```ts
  * solubilityCurve('Na2S2O3·5H2O')?.points[0]?.phase; // 'Na2S2O3·5H2O'
+ * solubilityCurve('KNO3').points[2]; // { t: 10, value: 21.36, phase: 'KNO3', phaseWater: 0, eutectic: false }
  * ```
  */
 export function solubilityCurve(salt: string | Salt, dataset: Dataset = builtinDataset()): SolubilityCurve | undefined {

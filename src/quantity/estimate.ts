@@ -66,6 +66,11 @@ function requireFinite(x: number, what: string): void {
  * the interval holds the value. The interval is value ± k·u with k = 1.96
  * (normal, 95 %) unless the caller gives its own ends.
  *
+ * @param input - the quantity in words, `value` and its standard uncertainty `u` (both in `unit`,
+ *   e.g. kJ/mol), the basis, the method name, source keys, notes, and optionally the interval ends `low`/`high`
+ * @see JCGM 100:2008 (GUM), Evaluation of measurement data — Guide to the expression of uncertainty in
+ *   measurement, §6.2–6.3: expanded uncertainty U = k·u with coverage factor k = 1.96 for 95 % of a normal distribution.
+ *
  * @example
  * ```ts
  * const e = makeEstimate({ quantity: 'lattice enthalpy', value: 787, u: 10, unit: 'kJ/mol', basis: 'model', method: 'kapustinskii' });
@@ -102,6 +107,9 @@ export function makeEstimate(input: EstimateInput): Estimate {
  * Rounds an estimate for reporting: `u` to two significant digits, and the
  * value and interval ends to the same decimal place.
  *
+ * @param e - the estimate; an exact one (u = 0) is returned unchanged
+ * @see JCGM 100:2008 (GUM), §7.2.6: give an uncertainty to at most two significant digits and the value to match.
+ *
  * @example
  * ```ts
  * const e = makeEstimate({ quantity: 'q', value: 25.6873, u: 0.4321, unit: 'kJ/mol', basis: 'measured', method: 'table' });
@@ -116,7 +124,21 @@ export function roundEstimate(e: Estimate): Estimate {
   return { ...e, value: clean(value), u, low: clean(roundToExponent(e.low, exponent)), high: clean(roundToExponent(e.high, exponent)) };
 }
 
-/** Probability that the true value exceeds zero, for a normal with the estimate's value and u. */
+/**
+ * Probability that the true value exceeds zero, P(X > 0) = Φ(value / u), for
+ * a normal distribution with the estimate's value as mean and `u` as standard
+ * deviation. An exact estimate (u = 0) gives 1 or 0.
+ *
+ * @param e - an estimate's `value` and standard uncertainty `u` (same unit, any unit)
+ * @see JCGM 100:2008 (GUM), §G.2: the normal distribution of a quantity known by its best estimate and standard uncertainty.
+ *
+ * @example
+ * ```ts
+ * probabilityPositive({ value: 1.96, u: 1 }); // 0.975
+ * probabilityPositive({ value: -1, u: 1 }); // 0.159
+ * probabilityPositive({ value: 3, u: 0 }); // 1
+ * ```
+ */
 export function probabilityPositive(e: Pick<Estimate, 'value' | 'u'>): number {
   if (e.u === 0) return e.value > 0 ? 1 : 0;
   return normalCdf(e.value / e.u);
@@ -128,6 +150,7 @@ export function probabilityPositive(e: Pick<Estimate, 'value' | 'u'>): number {
  * Abramowitz–Stegun 7.1.26 form has |error| < 1.5e−7, enough for a probability
  * reported to three digits).
  *
+ * @param x - the standard score z = (value − mean)/σ, dimensionless
  * @see Abramowitz, M.; Stegun, I. A. Handbook of Mathematical Functions (1964), eq. 7.1.26.
  * @example
  * ```ts

@@ -26,8 +26,11 @@ function fixed(x: number, exponent: number, signed: boolean): string {
  * minus sign, and a `+` on positive values when `signed` is set (useful for
  * enthalpies, where the sign is the message).
  *
- * @param e - the estimate
+ * @param e - the estimate's value, standard uncertainty and interval ends (one unit, any unit)
+ * @param options - display choices
  * @param options.signed - prefix positive numbers with `+`
+ * @see JCGM 100:2008 (GUM), §7.2.6, the rounding rule (as in {@link roundToUncertainty}).
+ *
  * @example
  * ```ts
  * const e = makeEstimate({ quantity: 'enthalpy of solution', value: 34.89, u: 0.2, unit: 'kJ/mol', basis: 'measured', method: 'table' });

@@ -26,6 +26,8 @@ export function roundToExponent(x: number, exponent: number): number {
  * @param value - the value, any unit
  * @param u - its standard uncertainty, same unit, ≥ 0
  * @returns the rounded pair and the decimal exponent used
+ * @see JCGM 100:2008 (GUM), Guide to the expression of uncertainty in measurement, §7.2.6.
+ *
  * @example
  * ```ts
  * roundToUncertainty(787.3456, 1.2345); // { value: 787.3, u: 1.2, exponent: -1 }

@@ -53,8 +53,12 @@ function arrow(x: number, y0: number, y1: number, colour: string, dashed: boolea
  * plot with each step's equation, value ± standard uncertainty and source.
  * The step solved for is drawn dashed.
  *
- * @param cycle - from {@link bornHaberCycle}
+ * @param cycle - from {@link bornHaberCycle}; enthalpies in kJ/mol
+ * @param options - `width` of the drawing, px (default 960)
  * @returns a standalone SVG document
+ * @see W3C, Scalable Vector Graphics (SVG) 1.1 (Second Edition), W3C Recommendation, 16 August 2011, for the output format; the
+ *   steps' values and sources come from the cycle (`wagman1982`, `cox1989`, `crcIonization`, `crcElectronAffinity`…).
+ *
  * @example
  * ```ts
  * const svg = cycleDiagram(bornHaberCycle('NaCl'));

@@ -119,13 +119,19 @@ function textWidth(s: string, size: number): number {
  * The axis is drawn at the top and the bottom, so eighty rows read as well
  * as ten.
  *
- * @param result - the result of {@link screen} (or its settings with some of its rows)
+ * @param result - the result of {@link screen} (or its settings with some of its rows); enthalpies in kJ/mol,
+ *   heats per gram in J/g, temperatures in °C, as the objective gives them
+ * @param options - title, extra reference lines (`marks`, in the objective's unit), most rows drawn, width in px
  * @returns SVG text
+ * @see W3C, Scalable Vector Graphics (SVG) 1.1 (Second Edition), W3C Recommendation, 16 August 2011, for the output format; the
+ *   intervals drawn are those of the rows (see {@link screen} for their sources).
+ *
  * @example
  * ```ts
  * const svg = intervalChart(screen(['KNO3', 'NH4Cl', 'NaCl']));
  * svg.startsWith('<svg'); // true
  * svg.includes('KNO₃'); // true
+ * svg.includes('kJ/mol'); // true
  * ```
  */
 export function intervalChart(result: ChartableScreen, options: IntervalChartOptions = {}): string {

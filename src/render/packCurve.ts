@@ -22,12 +22,17 @@ const fmt = (x: number, digits = 1): string => tickLabel(Number(x.toFixed(digits
 /**
  * The temperature–ratio curve as a standalone SVG document.
  *
- * @param curve - from {@link packRatioCurve}
+ * @param curve - from {@link packRatioCurve}: ratios in g solid per g water, temperatures in °C
+ * @param options - title, width and height in px
  * @returns SVG text
+ * @see W3C, Scalable Vector Graphics (SVG) 1.1 (Second Edition), W3C Recommendation, 16 August 2011, for the output format; the
+ *   curve's sources as in {@link packFinalTemperature}.
+ *
  * @example
  * ```ts
  * const curve = packRatioCurve({ solids: [{ formula: 'KNO3', massG: 1 }], waterG: 100, startC: 20 }, { points: 40, targetC: 12 });
  * packCurveSvg(curve).startsWith('<svg'); // true
+ * packCurveSvg(curve).includes('°C'); // true
  * ```
  */
 export function packCurveSvg(curve: PackRatioCurve, options: PackCurveChartOptions = {}): string {

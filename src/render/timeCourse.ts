@@ -24,8 +24,12 @@ const fmt = (x: number, digits = 1): string => tickLabel(Number(x.toFixed(digits
  * The time course T(t) as a standalone SVG document. Parameters that took
  * their assumed defaults are listed with an asterisk.
  *
- * @param course - from {@link packTimeCourse}
+ * @param course - from {@link packTimeCourse}: times in s, temperatures in °C
+ * @param options - title, a line naming the fill, width and height in px
  * @returns SVG text
+ * @see W3C, Scalable Vector Graphics (SVG) 1.1 (Second Edition), W3C Recommendation, 16 August 2011, for the output format; the
+ *   model and its assumed parameters as in {@link packTimeCourse}.
+ *
  * @example
  * ```ts
  * const course = packTimeCourse({ solids: [{ formula: 'CaCl2', massG: 25 }], waterG: 100 }, { band: { lowC: 40, highC: 50 }, samples: 50 });

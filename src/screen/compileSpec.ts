@@ -73,7 +73,12 @@ const typeName = (t: SpecType): string =>
  * makes the specification fail for that row, with the reason.
  *
  * @param text - the expression, at most 1000 characters, nested at most 32 deep
+ * @param options - `schema`: the JSON Schema of the rows the expression reads (e.g. the row schema of
+ *   {@link screenOutputJsonSchema}); `unavailable`: top-level fields that will be missing, with the reason
  * @throws IonheatError `INVALID_EXPRESSION` naming the column and what was wrong
+ * @see docs/methods.md, "Screening", for the language; the parser's grammar is in src/screen/specParse.ts
+ *   (recursive descent: Wirth, N. Algorithms + Data Structures = Programs, Prentice-Hall, 1976, ch. 5).
+ *
  * @example
  * ```ts
  * const spec = compileSpec('best.high < 0 and verdict == "exothermic"');

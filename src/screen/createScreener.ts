@@ -153,6 +153,11 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  * specification against the fields of the output rows) and returns a
  * {@link Screener} that turns candidates into rows one at a time.
  *
+ * @param options - objective, direction (`cool` or `heat`), spec, filters, `excludeMeasured`, extra sources, and a
+ *   standard fill (g salt, g water, start °C; as an object or as text `40:80@22`)
+ * @param dataset - the tables every row is computed from (default: built-in)
+ * @see the bases and their sources as in {@link dissolve} (`crcSolution`, `parker1965`, `wagman1982`, `marcus1997`,
+ *   `jenkinsGlasser2004`); hazards from the hazards table (`clpAnnexVI`, `eu2019_1148`, …); docs/methods.md, "Screening".
  * @throws IonheatError `INVALID_ARGUMENT` for a bad option, `INVALID_EXPRESSION` for a bad spec
  * @example
  * ```ts
@@ -160,6 +165,10 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  * s.row('KNO3').spec?.holds; // true
  * s.row('Xy2O').status; // 'failed'
  * s.summary().failed; // 1
+ * // a hot pack: 30 g CaCl2 in 100 g water from 20 °C
+ * const hot = createScreener({ direction: 'heat', fill: '30:100@20' }).row('CaCl2');
+ * hot.suitability; // 'suitable'
+ * hot.fill.finalTemperature.value; // ≈ 70.3 °C
  * ```
  */
 export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {

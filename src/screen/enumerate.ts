@@ -87,6 +87,9 @@ function saltOf(cation: IonRecord, anion: IonRecord, dataset: Dataset): Salt {
  * for.
  *
  * @param filters - charges, ion kinds, ion lists, hazard classes, molar mass in g/mol
+ * @param dataset - the ion and hazards tables (default: built-in)
+ * @see data/ions.json for the ions and their sources; formulas written by the conventions of IUPAC, Nomenclature of
+ *   Inorganic Chemistry (Recommendations 2005), IR-4.
  * @returns parsed salts, ready for {@link dissolve} or {@link screen}
  * @throws IonheatError `INVALID_ARGUMENT` for a charge outside 1–4 or a non-positive mass; `UNKNOWN_ION` for an ion id not in the table
  * @example

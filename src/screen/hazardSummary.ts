@@ -18,11 +18,18 @@ export interface HazardSummary {
  * anhydrous salt's, and its ions'). Empty lists mean the table names no
  * hazard, not that the salt is harmless.
  *
+ * @param salt - a parsed salt
+ * @param dataset - the hazards table (default: built-in)
+ * @returns the hazard classes and the statements, in the order of the records
+ * @see the hazards table's sources: `clpAnnexVI`, `eu2019_1148`, `reachAnnexXIV`, `reachAnnexXVII`, `euMercury2017`,
+ *   `supplierSds`.
+ *
  * @example
  * ```ts
  * hazardSummary(parseSalt('NH4NO3')).classes.includes('explosive-precursor'); // true
  * hazardSummary(parseSalt('K2CrO4')).classes.includes('carcinogen'); // true (from the chromate ion's record)
  * hazardSummary(parseSalt('KCl')).classes; // []
+ * hazardSummary(parseSalt('KNO3')).classes; // ['oxidizer', 'explosive-precursor']
  * ```
  */
 export function hazardSummary(salt: Salt, dataset: Dataset = builtinDataset()): HazardSummary {

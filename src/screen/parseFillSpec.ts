@@ -23,7 +23,11 @@ function decimal(text: string): number | undefined {
  * `°C` or `C` is allowed). Masses must be positive; the start temperature
  * must lie between 0 and 100 °C (liquid water).
  *
+ * @param text - `<salt-g>:<water-g>@<start-°C>`, masses in g, start temperature in °C
+ * @returns masses in g and the start temperature in °C
  * @throws IonheatError `INVALID_ARGUMENT` naming the part that is wrong
+ * @see docs/methods.md, "Screening", on the standard fill; the fill is then solved as in {@link packFinalTemperature}.
+ *
  * @example
  * ```ts
  * parseFillSpec('40:80@22'); // { saltMassG: 40, waterMassG: 80, startC: 22 }

@@ -38,8 +38,11 @@ export interface ScreenResult {
  *
  * For inputs too large to hold, use {@link screenStream}.
  *
- * @param candidates - formulas, salts or candidate rows
- * @param options - objective, direction, spec, filters, excludeMeasured, extra sources
+ * @param candidates - formulas, salts or candidate rows (enthalpies in kJ/mol, solubility in g per 100 g water)
+ * @param options - objective, direction, spec, filters, excludeMeasured, extra sources, standard fill (g, g, °C)
+ * @param dataset - the tables every row is computed from (default: built-in)
+ * @see the bases and their sources as in {@link dissolve} (`crcSolution`, `parker1965`, `wagman1982`, `marcus1997`,
+ *   `jenkinsGlasser2004`); hazards from the hazards table (`clpAnnexVI`, `eu2019_1148`, …); docs/methods.md, "Screening".
  * @throws IonheatError for a bad option or spec (a bad candidate gives a failed row instead)
  * @example
  * ```ts

@@ -13,9 +13,13 @@ import { screenDocumentSchema, screenRowSchema } from './screenRow.js';
  * ships it as `ionheat/screen-output.schema.json`. A row may carry further
  * fields of the `dissolve` result beyond those listed.
  *
+ * @see JSON Schema Draft 2020-12, Wright, A.; Andrews, H.; Hutton, B.; Dennis, G. (json-schema.org, 2020); the
+ *   generated copy is docs/schema/screen-output.schema.json (`npm run schema`).
+ *
  * @example
  * ```ts
  * screenOutputJsonSchema().properties.rows.type; // 'array'
+ * screenOutputJsonSchema().$schema; // 'https://json-schema.org/draft/2020-12/schema'
  * ```
  */
 export function screenOutputJsonSchema(): Record<string, any> {

@@ -18,6 +18,11 @@ import type { ScreenRow, ScreenSummary } from './screenRow.js';
  * value is the summary of the run.
  *
  * @param candidates - any iterable or async iterable of candidates (see {@link screen})
+ * @param options - as for {@link screen}
+ * @param dataset - the tables every row is computed from (default: built-in)
+ * @see the bases and their sources as in {@link dissolve} (`crcSolution`, `parker1965`, `wagman1982`, `marcus1997`,
+ *   `jenkinsGlasser2004`); hazards from the hazards table (`clpAnnexVI`, `eu2019_1148`, …); docs/methods.md, "Screening".
+ *
  * @example
  * ```ts
  * async function* lines() { yield 'KNO3'; yield 'NH4Cl'; yield 'CaCl2·6H2O'; }

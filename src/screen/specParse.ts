@@ -63,10 +63,16 @@ const describe = (t: SpecToken): string => (t.kind === 'end' ? 'the end of the e
  * Parses a specification into its syntax tree, or throws an
  * `INVALID_EXPRESSION` error that names the column and what was expected.
  *
+ * @param text - the expression, at most 1000 characters, nested at most 32 deep (`SPEC_MAX_DEPTH`)
+ * @returns the tree; every node carries its `start`/`end` character positions in `text`
+ * @see the grammar in this module's comment; recursive descent as in Wirth, N. Algorithms + Data Structures =
+ *   Programs (Prentice-Hall, 1976), ch. 5; docs/methods.md, "Screening".
+ *
  * @example
  * ```ts
  * parseSpec('best.high < 0').kind; // 'compare'
  * parseSpec('not (verdict == "exothermic")').kind; // 'not'
+ * parseSpec('best.high < 0').left.path; // ['best', 'high']
  * ```
  */
 export function parseSpec(text: string): SpecNode {

@@ -317,7 +317,9 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
  * anchor; `excludeMeasured` also leaves its own miss out of the floor.
  *
  * @param salt - an anhydrous salt of one cation and one anion
+ * @param options - leave-one-out switches
  * @param options.excludeMeasured - leave the salt's own miss out of the floor calibration
+ * @param dataset - measured and cycle enthalpies of solution of the anchor salts, and the lattice estimators' inputs (default: built-in)
  * @returns basis `anchored`, method `anchored-<estimator>`; empty when no set applies
  * @see Jenkins, H. D. B.; Glasser, L. on difference rules in thermochemistry; the four-salt difference is common practice in estimating thermochemical quantities
  * @example

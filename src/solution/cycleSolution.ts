@@ -54,7 +54,9 @@ export function solutionCycleTerms(salt: Salt, dataset: Dataset = builtinDataset
  * the tables derive values from one another.
  *
  * @param salt - the salt as dissolved
+ * @param options - leave-one-out switches
  * @param options.hideCrystal - ignore the salt's own crystal formation enthalpy (for leave-one-out validation)
+ * @param dataset - formation enthalpies of the crystal, the aqueous ions and liquid water (default: built-in)
  * @returns kJ/mol, positive = endothermic; undefined when a term is missing
  * @see Wagman et al. 1982, the NBS tables (J. Phys. Chem. Ref. Data 11, Suppl. 2)
  * @example

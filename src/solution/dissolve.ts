@@ -260,15 +260,24 @@ function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
  * lattice model applies to a molecular solute.
  *
  * @param formula - a formula (`NH4NO3`) or an already parsed {@link Salt}
- * @param options - `excludeMeasured`, `temperatureC`
- * @returns kJ/mol, positive = endothermic (the pack cools)
+ * @param options - `excludeMeasured` (hide the salt's own measured and cycle values, for leave-one-out checks) and
+ *   `temperatureC` (°C, 0–40; default 25)
+ * @param dataset - every table the bases draw on (default: built-in)
+ * @returns kJ/mol, positive = endothermic (the pack cools); heats per gram in J/g
  * @throws IonheatError `MISSING_DATA` when no basis applies; `NOT_APPLICABLE` for a non-electrolyte without a measured value
+ * @see measured values: the CRC table, source key `crcSolution`, Parker (1965), `parker1965`; formation enthalpies:
+ *   Wagman et al. (1982), `wagman1982`; hydration: Marcus (1997), `marcus1997`; the difference rule: Jenkins and
+ *   Glasser (2004), `jenkinsGlasser2004`; docs/methods.md, "Enthalpy of solution".
+ *
  * @example
  * ```ts
  * const r = dissolve('NH4NO3');
  * r.best.value; // 25.69 kJ/mol (CRC, measured)
+ * r.best.basis; // 'measured'
  * r.verdict; // 'endothermic'
- * dissolve('CaCl2').verdict; // 'exothermic'
+ * const c = dissolve('CaCl2');
+ * c.best.value; // -81.348 kJ/mol (NBS tables)
+ * c.verdict; // 'exothermic'
  * ```
  */
 export function dissolve(formula: string | Salt, options: DissolveOptions = {}, dataset: Dataset = builtinDataset()): DissolveResult {

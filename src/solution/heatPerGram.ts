@@ -22,6 +22,10 @@ function scaled(e: Estimate, factor: number, quantity: string, notes: readonly s
  * included in the mass), J/g: ΔsolH°·1000/M. Positive = heat absorbed.
  *
  * @param e - the enthalpy of solution, kJ/mol
+ * @param salt - the salt as dissolved; its molar mass M (g/mol) includes any hydrate water
+ * @returns J/g
+ * @see molar masses from the standard atomic weights of Prohaska et al. (2022), source key `iupac2021`.
+ *
  * @example
  * ```ts
  * const e = makeEstimate({ quantity: 'enthalpy of solution', value: 25.69, u: 0.2, unit: 'kJ/mol', basis: 'measured', method: 'table' });
@@ -94,6 +98,8 @@ export interface SaturatedFill {
  * with S the solubility (g anhydrous per 100 g water) and a hydrate's own
  * water counted as solvent.
  *
+ * @param salt - the salt as dissolved (a hydrate brings its water of crystallization into the fill)
+ * @param dataset - the solubility table (g anhydrous salt per 100 g water) and the atomic weights (default: built-in)
  * @returns undefined where there are no solubility data
  * @see CRC Handbook of Chemistry and Physics, 'Aqueous solubility of inorganic compounds at various temperatures' (via solubility.json)
  * @example
@@ -128,7 +134,10 @@ export function saturatedFill(salt: Salt, dataset: Dataset = builtinDataset()): 
  * q = ΔsolH°·1000/(M + m_w). Positive = the fill cools.
  *
  * @param e - the enthalpy of solution of the salt as dissolved, kJ/mol
- * @param fill - the fill, from {@link saturatedFill}
+ * @param fill - the fill, from {@link saturatedFill}: M + m_w, g per mole of salt
+ * @returns J/g of fill
+ * @see the solubilities behind the fill: the CRC table, source key `crcSolubility` (via solubility.json).
+ *
  * @example
  * ```ts
  * const e = makeEstimate({ quantity: 'enthalpy of solution', value: 25.69, u: 0.2, unit: 'kJ/mol', basis: 'measured', method: 'table' });

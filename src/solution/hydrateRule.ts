@@ -132,9 +132,18 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
  * `excludeFormula` leaves out the pairs involving one salt (its own values
  * are hidden in leave-one-out).
  *
+ *   s = √( Σ miss² / Δn ÷ N ),  u(Δn) = s·√Δn
+ *
+ * @param options - `excludeFormula`: a canonical formula whose pairs are left out
+ * @param dataset - crystal formation enthalpies, enthalpies of solution, ΔfH°(H₂O, l) (default: built-in)
+ * @returns s in kJ/mol per √(mole of water), and the number N of pairs
+ * @see Jenkins and Glasser (2004), source key `jenkinsGlasser2004`; the pairs' values from Wagman et al. (1982),
+ *   `wagman1982`, and the CRC table, `crcSolution`.
+ *
  * @example
  * ```ts
  * hydrateRuleScatter().perSqrtWater; // ≈ 16.6 kJ/mol (41 pairs of the NBS and CRC tables)
+ * hydrateRuleScatter().pairs; // 41
  * ```
  */
 export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, dataset: Dataset = builtinDataset()): HydrateRuleScatter {

@@ -10,6 +10,7 @@ import { makeEstimate, type Estimate } from '../quantity/estimate.js';
  * Positive = endothermic = the solution cools.
  *
  * @param salt - the salt as dissolved (a hydrate is its own entry)
+ * @param dataset - the solution-enthalpies table (default: built-in)
  * @returns kJ/mol, with the record's uncertainty or the table default
  * @see CRC Handbook of Chemistry and Physics, 'Enthalpy of solution of electrolytes'
  * @example

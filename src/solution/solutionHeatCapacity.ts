@@ -30,6 +30,8 @@ function ionCpIndex(dataset: Dataset) {
  * with temperature. Ionic heat capacities are on the conventional scale
  * (Cp°(H⁺, aq) = 0), which cancels for a neutral salt.
  *
+ * @param salt - the salt as dissolved
+ * @param dataset - heat capacities of the crystal (J/(K·mol)) and of the aqueous ions at infinite dilution (default: built-in)
  * @returns basis `cycle`; undefined where a heat capacity is missing (non-electrolytes: no aqueous value in the tables)
  * @see Wagman et al. 1982, the NBS tables (J. Phys. Chem. Ref. Data 11, Suppl. 2)
  * @example

@@ -59,7 +59,21 @@ function takeDataFiles(argv: readonly string[]): { files: string[]; rest: string
 /**
  * Runs the command line with these arguments (without `node` and the script).
  *
- * @returns the exit status
+ * @param argv - the arguments, e.g. `['dissolve', 'KNO3']`; `--data <file>` may appear anywhere and repeat
+ * @param io - where to read and write (default: the process's streams); tests and embedding tools pass buffers
+ * @returns the exit status: 0 success, 1 a specification failed, 2 bad input or arguments, 3 a defect
+ * @see README.md, "The command line", for a tour; `ionheat help <command>` for each command's usage.
+ *
+ * @example
+ * ```ts
+ * let out = '';
+ * let err = '';
+ * const io = { stdout: (t) => { out += t; }, stderr: (t) => { err += t; }, stderrIsTTY: false, cwd: '.', readStdin: async () => '' };
+ * await runCli(['salt', 'NaCl'], io); // 0
+ * out.includes('58.44'); // true (g/mol)
+ * await runCli(['salt', 'NaXy'], io); // 2
+ * err; // 'ionheat: "Xy" at position 2 is not a chemical element\n'
+ * ```
  */
 export async function runCli(argv: readonly string[], io: CliIO = processIO()): Promise<number> {
   try {
