@@ -7,8 +7,7 @@
  * @module
  */
 import type { Basis, Estimate } from '../quantity/estimate.js';
-import { roundEstimate } from '../quantity/estimate.js';
-import { roundToUncertainty } from '../quantity/rounding.js';
+import { formatEstimate } from '../quantity/formatEstimate.js';
 import type { Direction, ObjectiveName, ScreenRow, Suitability } from '../screen/screenRow.js';
 import { el, linearScale, niceTicks, num, svgDocument, text, theme, tickLabel } from './svg.js';
 
@@ -89,13 +88,8 @@ function marker(basis: Basis, x: number, y: number, r: number, fill: string, str
 
 /** `34.89 [34.50, 35.28]`, rounded to the uncertainty (two significant digits of u). */
 function valueText(e: Estimate): string {
-  const r = roundEstimate(e);
-  const decimals = e.u > 0 ? Math.min(6, Math.max(0, -roundToUncertainty(e.value, e.u).exponent)) : 2;
-  const f = (x: number) => {
-    const s = x.toFixed(decimals);
-    return s.startsWith('-') ? `−${s.slice(1)}` : s;
-  };
-  return `${f(r.value)}  [${f(r.low)}, ${f(r.high)}]`;
+  const f = formatEstimate(e);
+  return `${f.value}  [${f.low}, ${f.high}]`;
 }
 
 /** Rough width of a text in pixels at a font size (system sans-serif). */
