@@ -110,7 +110,10 @@ function checkFill(fill: FillSpec | string): FillSpec {
 
 /** The candidate's fields as one text, in a fixed order. */
 function candidateKey(input: CandidateInput): string {
-  return `${input.formula}\u0000${input.measuredEnthalpy ?? ''}\u0000${input.measuredUncertainty ?? ''}\u0000${input.solubility ?? ''}\u0000${input.pricePerKg ?? ''}\u0000${input.source ?? ''}\u0000${input.note ?? ''}`;
+  // Numbers through JSON.stringify: the same digits as String(), without V8's number-to-string cache,
+  // which would keep a string per row alive for a while on long screens.
+  const n = (x: number | undefined) => (x === undefined ? '' : JSON.stringify(x));
+  return `${input.formula}\u0000${n(input.measuredEnthalpy)}\u0000${n(input.measuredUncertainty)}\u0000${n(input.solubility)}\u0000${n(input.pricePerKg)}\u0000${input.source ?? ''}\u0000${input.note ?? ''}`;
 }
 
 function deepFreeze<T>(value: T): T {
@@ -312,7 +315,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       if (excludedBy !== undefined) {
         return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements });
       }
-      const notes = [...result.notes];
+      const notes: string[] = [];
       if (input.measuredEnthalpy !== undefined) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
       if (input.solubility !== undefined) notes.push(`solubility ${input.solubility} g/100 g H2O from the screening input (source ${input.source ?? 'screenInput'}), taken as the same at every temperature${fill ? '' : '; it matters only to a fill'}`);
       if (pack && excludeMeasured) notes.push('the standard fill uses the enthalpy of solution the pack model finds, measured values included: excludeMeasured hides them from dissolve only');
@@ -328,7 +331,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         input,
         ...duplicate,
         ...result,
-        notes,
+        notes: notes.length > 0 ? [...result.notes, ...notes] : result.notes,
         hazards: hazards.classes,
         cautions: hazards.statements,
         ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),

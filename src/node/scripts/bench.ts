@@ -3,8 +3,12 @@
  * printed as ratios to their targets. Each section lives in its own file.
  */
 import { benchDissolve } from './benchDissolve.js';
+import { benchScreen } from './benchScreen.js';
 
-const sections: { name: string; run: () => string[] }[] = [{ name: 'dissolve', run: benchDissolve }];
+const sections: { name: string; run: () => string[] }[] = [
+  { name: 'dissolve', run: benchDissolve },
+  { name: 'screen', run: benchScreen },
+];
 
 for (const section of sections) {
   process.stdout.write(`== ${section.name}\n${section.run().join('\n')}\n\n`);

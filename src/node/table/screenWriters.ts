@@ -21,20 +21,20 @@ export interface StreamWriter {
 }
 
 /** Records handed to csv-stringify at a time (one call per batch, not per row). */
-const CSV_BATCH = 256;
+const CSV_BATCH = 64;
 
-/** CSV: a header of JSON field paths, one record per row; text cells neutralised against formula injection. */
+/** CSV: a header of JSON field paths, one record per row, written by csv-stringify; text cells neutralised against formula injection ({@link csvCell}). */
 export function csvWriter(settings: ScreenSettings, inputColumns?: readonly string[]): StreamWriter {
   const columns = screenColumns(settings, inputColumns);
-  let batch: (string | number)[][] = [];
+  let batch: string[][] = [];
   const flush = (): string => {
     if (batch.length === 0) return '';
-    const text = stringify(batch, { escape_formulas: true });
+    const text = stringify(batch);
     batch = [];
     return text;
   };
   return {
-    start: () => stringify([columns.map((c) => c.header)], { escape_formulas: true }),
+    start: () => stringify([columns.map((c) => c.header)]),
     row: (row) => {
       batch.push(columns.map((c) => csvCell(c.get(row))));
       return batch.length >= CSV_BATCH ? flush() : '';
