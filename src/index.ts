@@ -38,7 +38,7 @@ export { hydrateFromParent, hydrateRuleScatter, WATER_OF_CRYSTALLIZATION_ENTHALP
 export { solutionHeatCapacity, kirchhoffCorrection, typicalSolutionHeatCapacity, KIRCHHOFF_RANGE_C } from './solution/solutionHeatCapacity.js';
 export { heatPerGramOfSalt, heatPerGramOfFill, saturatedFill, solubilityAt25, type SaturatedFill, type Solubility25 } from './solution/heatPerGram.js';
 export { widenEstimate } from './solution/widenEstimate.js';
-export { latticeEstimate, latticeEstimates, latticeMethods, type LatticeMethod, type LatticeEstimateOptions } from './lattice/latticeEstimate.js';
+export { latticeEstimate, tryLatticeEstimate, latticeEstimates, latticeMethods, type LatticeMethod, type LatticeEstimateOptions } from './lattice/latticeEstimate.js';
 export { latticeModels, latticeModelPoint, GLASSER_THRESHOLD, type LatticeModel, type LatticeModelOptions, type ModelPoint } from './lattice/latticeModel.js';
 export { latticeCalibration, calibrationStats, calibrationGroups, saltCationCore, saltIonKind, calibrationChargeType, MIN_GROUP, type CationCore, type ModelCalibration, type Sums, type LatticeCalibration, type CalibrationResidual, type CalibrationStats, type SaltIonKind } from './lattice/latticeCalibration.js';
 export { kapustinskii, KAPUSTINSKII_CONSTANT, KAPUSTINSKII_RHO } from './lattice/kapustinskii.js';
@@ -56,6 +56,9 @@ export { thermalElectronEnthalpy } from './cycle/thermalElectronEnthalpy.js';
 export { ionText } from './cycle/ionText.js';
 export type { CycleStep, CycleStepKind } from './cycle/cycleStep.js';
 export type { IonShape } from './lattice/latticeIons.js';
+export { anchoredSolutionEnthalpies, anchoredFloor, anchorSets, ANCHOR_NEIGHBOURS, type AnchorSet, type AnchorCombination, type FloorGroupKey } from './solution/anchoredSolution.js';
+export { anchorIndex, ionDistance, cationCore, binaryIons, ION_DISTANCE, type AnchorIndex, type AnchorSalt, type Neighbour } from './solution/anchorIndex.js';
+export { solutionEnthalpyFromModel } from './solution/modelSolution.js';
 export { ewaldMadelung, erfc, type PointChargeCell, type EwaldOptions, type MadelungResult, type Vec3 } from './lattice/ewaldMadelung.js';
 export { idealCell, idealCellTypes } from './lattice/idealCell.js';
 

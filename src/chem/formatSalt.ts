@@ -13,6 +13,11 @@ export function formatIons(ions: readonly Pick<SaltIon, 'formula' | 'count'>[]):
     .join('');
 }
 
+/** `·6H2O` for six waters of crystallization, `·H2O` for one, nothing for none. */
+export function hydrateSuffix(water: number): string {
+  return water > 0 ? `·${water === 1 ? '' : water}H2O` : '';
+}
+
 /** Turns the digits of a formula into subscripts, except a hydrate's leading count. */
 function subscriptDigits(formula: string): string {
   let out = '';
@@ -42,6 +47,6 @@ function subscriptDigits(formula: string): string {
  */
 export function formatSalt(salt: Pick<Salt, 'ions' | 'water'>, options: { style?: 'plain' | 'unicode' } = {}): string {
   const anhydrous = formatIons(salt.ions);
-  const plain = salt.water > 0 ? `${anhydrous}·${salt.water}H2O` : anhydrous;
+  const plain = anhydrous + hydrateSuffix(salt.water);
   return options.style === 'unicode' ? subscriptDigits(plain) : plain;
 }

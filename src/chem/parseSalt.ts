@@ -12,7 +12,7 @@ import { readFormulaSyntax, unitComposition, type FormulaUnit } from './formulaS
 import { compositionKey, ionIndex, type IonIndex } from './ionIndex.js';
 import { isKnownElement, molarMass } from './molarMass.js';
 import type { Salt, SaltIon } from './salt.js';
-import { formatIons } from './formatSalt.js';
+import { formatIons, hydrateSuffix } from './formatSalt.js';
 
 /** Longest run of formula units one ion may span (CH3COO is five: C, H3, C, O, O). */
 const MAX_UNITS_PER_ION = 8;
@@ -160,7 +160,7 @@ function buildSalt(kind: Salt['kind'], ions: SaltIon[], water: number, index: Io
   const sorted = Object.fromEntries([...composition.entries()].sort(([a], [b]) => (a < b ? -1 : 1)));
   const anhydrous = formatIons(ions);
   return {
-    formula: water > 0 ? `${anhydrous}·${water}H2O` : anhydrous,
+    formula: anhydrous + hydrateSuffix(water),
     anhydrous,
     kind,
     ions,

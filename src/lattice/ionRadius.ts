@@ -49,9 +49,11 @@ function shannonAt(ion: LatticeIon, cn: number): ChosenRadius | undefined {
  * @returns the radius in Å, or undefined when no table has one
  */
 export function ionRadius(ion: LatticeIon, cn: number): ChosenRadius | undefined {
-  const thermo = ion.thermochemicalRadius;
-  const fromThermo = (): ChosenRadius | undefined =>
-    thermo ? { value: thermo.value, u: thermo.u, scale: 'thermochemical', cn: undefined, source: thermo.source, fromMemory: thermo.fromMemory, substituted: false } : undefined;
-  if (ion.kind === 'monatomic') return shannonAt(ion, cn) ?? fromThermo();
-  return fromThermo() ?? shannonAt(ion, cn);
+  if (ion.kind === 'monatomic') return shannonAt(ion, cn) ?? thermochemical(ion);
+  return thermochemical(ion) ?? shannonAt(ion, cn);
+}
+
+function thermochemical(ion: LatticeIon): ChosenRadius | undefined {
+  const t = ion.thermochemicalRadius;
+  return t ? { value: t.value, u: t.u, scale: 'thermochemical', cn: undefined, source: t.source, fromMemory: t.fromMemory, substituted: false } : undefined;
 }

@@ -15,7 +15,7 @@ import type { Salt } from '../chem/salt.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { calibrationChargeType, calibrationGroups, calibrationStats, saltCationCore, saltIonKind } from './latticeCalibration.js';
-import { latticeModelPoint, latticeModels, type LatticeModel, type LatticeModelOptions } from './latticeModel.js';
+import { latticeModelPoint, latticeModels, type LatticeModel, type LatticeModelOptions, type ModelPoint } from './latticeModel.js';
 
 export { cycleLatticeEnthalpy, type CycleLatticeOptions } from '../cycle/cycleLatticeEnthalpy.js';
 export type { LatticeModel, LatticeModelOptions } from './latticeModel.js';
@@ -80,9 +80,40 @@ function readMethod(method: string): { model: LatticeModel; corrected: boolean }
  * ```
  */
 export function latticeEstimate(salt: Salt | string, method: LatticeMethod, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate {
-  const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
-  const key = cacheKey(method, s.formula, options);
-  const cache = dataset.memo('lattice.estimateCache', () => new Map<string, Estimate | IonheatError>());
+  const hit = lookup(typeof salt === 'string' ? parseSalt(salt, dataset) : salt, method, options, dataset);
+  if (hit instanceof Error) throw hit;
+  return copy(hit);
+}
+
+/**
+ * {@link latticeEstimate} without the exception: undefined where the method
+ * does not apply or lacks data (`NOT_APPLICABLE`, `MISSING_DATA`; the fast
+ * path for callers that try many salts). Bad arguments still throw.
+ *
+ * @example
+ * ```ts
+ * tryLatticeEstimate('KNO3', 'born-lande'); // undefined (no structure type for KNO3)
+ * tryLatticeEstimate('KNO3', 'kapustinskii')?.method; // 'kapustinskii'
+ * ```
+ */
+export function tryLatticeEstimate(salt: Salt | string, method: LatticeMethod, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
+  const hit = lookup(typeof salt === 'string' ? parseSalt(salt, dataset) : salt, method, options, dataset);
+  if (hit instanceof Error) {
+    if (hit.code === 'MISSING_DATA' || hit.code === 'NOT_APPLICABLE') return undefined;
+    throw hit;
+  }
+  return copy(hit);
+}
+
+const copy = (e: Estimate): Estimate => ({ ...e, sources: e.sources.slice(), notes: e.notes.slice() });
+
+/** The estimate or the error of one method for one salt, computed once per dataset. */
+function lookup(s: Salt, method: LatticeMethod, options: LatticeEstimateOptions, dataset: Dataset): Estimate | IonheatError {
+  // Estimates are kept per dataset: by method, then by formula (default options) or by formula and options.
+  const caches = dataset.memo('lattice.estimateCache', () => ({ size: 0, byMethod: new Map<string, Map<string, Estimate | IonheatError>>() }));
+  let cache = caches.byMethod.get(method);
+  if (!cache) caches.byMethod.set(method, (cache = new Map()));
+  const key = plainOptions(options) ? s.formula : optionsKey(s.formula, options);
   let hit = cache.get(key);
   if (hit === undefined) {
     try {
@@ -91,25 +122,63 @@ export function latticeEstimate(salt: Salt | string, method: LatticeMethod, opti
       if (!isIonheatError(e)) throw e;
       hit = e;
     }
-    if (cache.size >= CACHE_LIMIT) cache.clear();
+    if (caches.size >= CACHE_LIMIT) {
+      caches.byMethod.clear();
+      caches.size = 0;
+      caches.byMethod.set(method, (cache = new Map()));
+    }
     cache.set(key, hit);
+    caches.size++;
   }
-  if (hit instanceof Error) throw hit;
-  return { ...hit, sources: hit.sources.slice(), notes: hit.notes.slice() };
+  return hit;
 }
 
 /** Most estimates kept per dataset; the cache starts afresh when full. */
 const CACHE_LIMIT = 20_000;
 
-function cacheKey(method: string, formula: string, o: LatticeEstimateOptions): string {
-  if (o.structure === undefined && o.latticeParameter === undefined && o.coordination === undefined && o.excludeSalt === undefined) return `${method}|${formula}`;
-  return `${method}|${formula}|${o.structure ?? ''}|${o.latticeParameter ?? ''}|${o.coordination ?? ''}|${o.excludeSalt ?? ''}`;
+function plainOptions(o: LatticeEstimateOptions): boolean {
+  return o.structure === undefined && o.latticeParameter === undefined && o.coordination === undefined && o.excludeSalt === undefined;
+}
+
+function optionsKey(formula: string, o: LatticeEstimateOptions): string {
+  return `${formula}|${o.structure ?? ''}|${o.latticeParameter ?? ''}|${o.coordination ?? ''}|${o.excludeSalt ?? ''}`;
+}
+
+/** The model point of a salt, kept per dataset (it does not depend on what the calibration leaves out). */
+function cachedPoint(s: Salt, model: LatticeModel, options: LatticeModelOptions, dataset: Dataset): ModelPoint {
+  const cache = dataset.memo('lattice.pointCache', () => new Map<string, ModelPoint | IonheatError>());
+  const key = `${model}|${s.formula}|${options.structure ?? ''}|${options.latticeParameter ?? ''}|${options.coordination ?? ''}`;
+  let hit = cache.get(key);
+  if (hit === undefined) {
+    try {
+      hit = latticeModelPoint(s, model, options, dataset);
+    } catch (e) {
+      if (!isIonheatError(e)) throw e;
+      hit = e;
+    }
+    if (cache.size >= CACHE_LIMIT) cache.clear();
+    cache.set(key, hit);
+  }
+  if (hit instanceof Error) throw hit;
+  return hit;
+}
+
+/** The canonical formula of a formula the caller typed, kept per dataset. */
+function canonicalFormula(text: string, dataset: Dataset): string {
+  const cache = dataset.memo('lattice.canonicalFormulas', () => new Map<string, string>());
+  let f = cache.get(text);
+  if (f === undefined) {
+    f = parseSalt(text, dataset).formula;
+    if (cache.size >= CACHE_LIMIT) cache.clear();
+    cache.set(text, f);
+  }
+  return f;
 }
 
 function computeEstimate(s: Salt, method: LatticeMethod, options: LatticeEstimateOptions, dataset: Dataset): Estimate {
   const { model, corrected } = readMethod(method);
-  const point = latticeModelPoint(s, model, options, dataset);
-  const exclude = options.excludeSalt !== undefined ? [s.formula, parseSalt(options.excludeSalt, dataset).formula] : [s.formula];
+  const point = cachedPoint(s, model, options, dataset);
+  const exclude = options.excludeSalt !== undefined ? [s.formula, canonicalFormula(options.excludeSalt, dataset)] : [s.formula];
   const groups = calibrationGroups(calibrationChargeType(s), saltIonKind(s, dataset), saltCationCore(s, dataset));
   const stats = calibrationStats(model, groups, exclude, dataset);
   if (!stats) {
@@ -160,14 +229,14 @@ export function latticeEstimates(
   const estimates: Estimate[] = [];
   const skipped: { method: LatticeMethod; reason: string }[] = [];
   for (const method of latticeMethods) {
-    try {
-      estimates.push(latticeEstimate(s, method, options, dataset));
-    } catch (e) {
-      if (!isIonheatError(e)) throw e;
-      if (e.code === 'NOT_APPLICABLE' && (s.kind !== 'ionic' || s.water > 0)) throw e;
-      if (e.code === 'INVALID_ARGUMENT') throw e;
-      skipped.push({ method, reason: e.message });
+    const hit = lookup(s, method, options, dataset);
+    if (!(hit instanceof Error)) {
+      estimates.push(copy(hit));
+      continue;
     }
+    if (hit.code === 'NOT_APPLICABLE' && (s.kind !== 'ionic' || s.water > 0)) throw hit;
+    if (hit.code !== 'NOT_APPLICABLE' && hit.code !== 'MISSING_DATA') throw hit;
+    skipped.push({ method, reason: hit.message });
   }
   return { estimates, skipped };
 }

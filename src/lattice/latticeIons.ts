@@ -8,6 +8,7 @@
  */
 import type { Dataset } from '../data/dataset.js';
 import type { IonKind } from '../data/schemas.js';
+import { ionText } from '../cycle/ionText.js';
 
 /** A tabulated ion property with its provenance. */
 export interface SourcedValue {
@@ -33,6 +34,8 @@ export type IonShape = 'monatomic' | 'linear' | 'nonlinear';
 
 export interface LatticeIon {
   id: string;
+  /** The ion written for people: `NO₃⁻`. */
+  text: string;
   formula: string;
   charge: number;
   kind: IonKind;
@@ -85,6 +88,7 @@ export function latticeIons(dataset: Dataset): ReadonlyMap<string, LatticeIon> {
       const b = ion.bornCore ? born.get(ion.bornCore) : undefined;
       out.set(ion.id, {
         id: ion.id,
+        text: ionText(ion.id),
         formula: ion.formula,
         charge: ion.charge,
         kind: ion.kind,

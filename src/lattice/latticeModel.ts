@@ -9,7 +9,6 @@ import type { Salt } from '../chem/salt.js';
 import { chargeType } from '../chem/salt.js';
 import { saltRecords } from '../chem/saltRecords.js';
 import { IonheatError } from '../error.js';
-import { ionText } from '../cycle/ionText.js';
 import { bornLande } from './bornLande.js';
 import { bornMayer } from './bornMayer.js';
 import { formulaUnitVolume } from './formulaUnitVolume.js';
@@ -85,13 +84,13 @@ function radiusOf(ion: LatticeIon, cn: number, salt: Salt, dataset: Dataset, not
   if (!r) {
     throw new IonheatError(
       'MISSING_DATA',
-      `no radius for ${ionText(ion.id)} (neither a Shannon radius in shannon-radii.json nor a thermochemical radius in thermochemical-radii.json of the ${dataset.label} tables), needed for ${salt.formula}`,
+      `no radius for ${ion.text} (neither a Shannon radius in shannon-radii.json nor a thermochemical radius in thermochemical-radii.json of the ${dataset.label} tables), needed for ${salt.formula}`,
       { text: salt.formula, field: ion.id },
     );
   }
   sources.push(r.source);
-  if (r.substituted) notes.push(`${ionText(ion.id)}: Shannon radius at CN ${r.cn} (none tabulated at CN ${cn})`);
-  if (r.fromMemory) notes.push(`${ionText(ion.id)} radius ${r.value} Å entered from memory, not checked against the source`);
+  if (r.substituted) notes.push(`${ion.text}: Shannon radius at CN ${r.cn} (none tabulated at CN ${cn})`);
+  if (r.fromMemory) notes.push(`${ion.text} radius ${r.value} Å entered from memory, not checked against the source`);
   return r;
 }
 
@@ -138,7 +137,7 @@ function bornExponent(ions: SaltIons, salt: Salt, dataset: Dataset, sources: str
   let n = 0;
   for (const { ion, count } of [...ions.cations, ...ions.anions]) {
     if (!ion.bornExponent) {
-      throw new IonheatError('MISSING_DATA', `no Born exponent for ${ionText(ion.id)} (its noble-gas core ${ion.bornCore ?? 'is not given'} has no record in born-exponents.json of the ${dataset.label} tables), needed for ${salt.formula}`, {
+      throw new IonheatError('MISSING_DATA', `no Born exponent for ${ion.text} (its noble-gas core ${ion.bornCore ?? 'is not given'} has no record in born-exponents.json of the ${dataset.label} tables), needed for ${salt.formula}`, {
         text: salt.formula,
         field: ion.id,
       });
@@ -221,7 +220,7 @@ function vbtPoint(salt: Salt, ions: SaltIons, dataset: Dataset): ModelPoint {
     volume = 0;
     for (const { ion, count } of [...ions.cations, ...ions.anions]) {
       if (!ion.volume) {
-        throw new IonheatError('MISSING_DATA', `no density of ${salt.formula} in crystals.json and no volume of ${ionText(ion.id)} in ion-volumes.json of the ${dataset.label} tables, needed for the formula-unit volume`, {
+        throw new IonheatError('MISSING_DATA', `no density of ${salt.formula} in crystals.json and no volume of ${ion.text} in ion-volumes.json of the ${dataset.label} tables, needed for the formula-unit volume`, {
           text: salt.formula,
           field: ion.id,
         });

@@ -74,7 +74,7 @@ function dissolvedFraction(W: number, limited: number, waterToDissolve: number):
 }
 
 /** g(W) = W − Wtot + Σ bᵢ·(1 − xᵢ(W)). */
-function waterBalance(W: number, totalWater: number, limited: Uint8Array, waterToDissolve: Float64Array, holds: Float64Array): number {
+function waterBalance(W: number, totalWater: number, limited: readonly number[], waterToDissolve: readonly number[], holds: readonly number[]): number {
   let sum = W - totalWater;
   for (let i = 0; i < limited.length; i++) if (limited[i] === 1) sum += holds[i]! * (1 - dissolvedFraction(W, 1, waterToDissolve[i]!));
   return sum;
@@ -88,20 +88,20 @@ function waterBalance(W: number, totalWater: number, limited: Uint8Array, waterT
  */
 export interface FillScratch {
   /** 1 where the salt has solubility data. */
-  limited: Uint8Array;
+  limited: number[];
   /** Water (g) that would dissolve all of salt i; Infinity when its solubility is zero. */
-  waterToDissolve: Float64Array;
+  waterToDissolve: number[];
   /** Water of crystallization per formula unit of undissolved salt i once it is the equilibrium solid. */
-  phaseWater: Float64Array;
+  phaseWater: number[];
   /** Water (g) undissolved salt i holds when none of it dissolves. */
-  holds: Float64Array;
+  holds: number[];
   /** 1 where undissolved salt i turns into a different equilibrium solid. */
-  converts: Uint8Array;
-  fraction: Float64Array;
-  dissolutionJ: Float64Array;
-  conversionJ: Float64Array;
-  cpDissolved: Float64Array;
-  cpUndissolved: Float64Array;
+  converts: number[];
+  fraction: number[];
+  dissolutionJ: number[];
+  conversionJ: number[];
+  cpDissolved: number[];
+  cpUndissolved: number[];
   phase: (PreparedPhase | undefined)[];
   solubility: (SolubilityAt | undefined)[];
   liquidWaterG: number;
@@ -116,20 +116,27 @@ export interface FillScratch {
   freezingPointC: number | undefined;
 }
 
+/** n zeros in a plain array (small typed arrays cost more to allocate than they save here). */
+function zeros(n: number): number[] {
+  const a = new Array<number>(n);
+  for (let i = 0; i < n; i++) a[i] = 0;
+  return a;
+}
+
 /** Fresh working arrays for a fill. @internal */
 export function fillScratch(fill: PreparedFill): FillScratch {
   const n = fill.solids.length;
   return {
-    limited: new Uint8Array(n),
-    waterToDissolve: new Float64Array(n),
-    phaseWater: new Float64Array(n),
-    holds: new Float64Array(n),
-    converts: new Uint8Array(n),
-    fraction: new Float64Array(n),
-    dissolutionJ: new Float64Array(n),
-    conversionJ: new Float64Array(n),
-    cpDissolved: new Float64Array(n),
-    cpUndissolved: new Float64Array(n),
+    limited: zeros(n),
+    waterToDissolve: zeros(n),
+    phaseWater: zeros(n),
+    holds: zeros(n),
+    converts: zeros(n),
+    fraction: zeros(n),
+    dissolutionJ: zeros(n),
+    conversionJ: zeros(n),
+    cpDissolved: zeros(n),
+    cpUndissolved: zeros(n),
     phase: new Array<PreparedPhase | undefined>(n),
     solubility: new Array<SolubilityAt | undefined>(n),
     liquidWaterG: 0,

@@ -7,7 +7,7 @@
  */
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { quadrature } from '../quantity/propagate.js';
-import type { Perturbation } from './fillEquilibrium.js';
+import { fillEquilibrium, type Perturbation } from './fillEquilibrium.js';
 import type { PackIntervalOptions, PreparedFill } from './packFill.js';
 import { seededNormal } from './seededNormal.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
@@ -178,8 +178,14 @@ export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolut
     down += Math.max(0, t - plus, t - minus) ** 2;
     central += ((plus - minus) / (2 * COVERAGE_95)) ** 2;
   }
+  let low = Math.min(t, Math.max(floor, t - Math.sqrt(down)));
+  // Shifts combined in quadrature can overshoot a floor that no single re-solve
+  // reached: the solution the fill would hold at the low end still sets a floor
+  // (its freezing point, or the salt–ice eutectic once saturated).
+  const floorAtLow = fillEquilibrium(fill, low).floorC;
+  if (low < floorAtLow) low = Math.min(t, floorAtLow);
   return {
-    low: Math.min(t, Math.max(floor, t - Math.sqrt(down))),
+    low,
     high: Math.max(t, Math.min(ceiling, t + Math.sqrt(up))),
     u: Math.sqrt(central),
     method: 'bounds',

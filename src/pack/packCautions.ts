@@ -105,7 +105,7 @@ export function packCautions(input: CautionInput, dataset: Dataset = builtinData
     }
     for (const h of hazards) {
       const cited = shortCitation(dataset.source(h.source)?.citation) ?? h.source;
-      const restricted = h.classes.includes('restricted') || h.classes.includes('explosive-precursor') ? ' Sale, storage or use is restricted in some jurisdictions; check the local rules before choosing it.' : '';
+      const restricted = h.classes.includes('restricted') || h.classes.includes('explosive-precursor') ? ' Its sale or supply is restricted or must be reported in some jurisdictions; check the local rules before choosing it.' : '';
       out.push(`${salt.formula} (${h.classes.join(', ')}): ${h.statement}${restricted} [${h.source}: ${cited}${h.fromMemory ? '; classification from memory' : ''}]`);
     }
   }

@@ -11,12 +11,12 @@ import { parseSalt } from '../chem/parseSalt.js';
 import { ionsPerFormulaUnit, type Salt } from '../chem/salt.js';
 import { saltRecords, WATER } from '../chem/saltRecords.js';
 import { molarMass } from '../chem/molarMass.js';
-import { dissolve } from '../solution/dissolve.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { quadrature } from '../quantity/propagate.js';
-import { aqueousHeatCapacity, solidHeatCapacity, waterSpecificHeat } from './solidHeatCapacity.js';
-import { solubilityCurve, type SolubilityCurve } from './solubilityCurve.js';
+import { aqueousHeatCapacity, waterSpecificHeat } from './solidHeatCapacity.js';
+import type { SolubilityCurve } from './solubilityCurve.js';
+import { packSaltData, type PackSaltData } from './packSaltData.js';
 
 /** One solid of a fill. */
 export interface PackSolid {
@@ -114,6 +114,8 @@ export interface PreparedFill {
   waterMolarMass: number;
   /** The user's heat capacity, J/K, when given. */
   heatCapacityOverride: { value: number; u: number } | undefined;
+  /** Temperatures (°C, ascending) where a solid's equilibrium solid changes in its solubility table: the balance may jump there. */
+  phaseChanges: number[];
   /** Notes that hold whatever the final state. */
   notes: string[];
   sources: string[];
@@ -160,9 +162,22 @@ function kirchhoff(h25: Estimate, solid: Salt, solidCp: Estimate, startC: number
   });
 }
 
-function enthalpyOf(salt: Salt, field: string, dataset: Dataset): Estimate {
+/** Formula texts kept per dataset once read (up to this many, so that odd inputs cannot grow the cache without bound). */
+const PARSED_CACHE_LIMIT = 4096;
+
+/** {@link parseSalt}, remembered per dataset for texts already read. */
+function parsedFormula(text: string, dataset: Dataset): Salt {
+  const cache = dataset.memo('pack.parsedFormulas', () => new Map<string, Salt>());
+  const known = cache.get(text);
+  if (known) return known;
+  const salt = parseSalt(text, dataset);
+  if (cache.size < PARSED_CACHE_LIMIT) cache.set(text, salt);
+  return salt;
+}
+
+function saltDataOf(salt: Salt, field: string, dataset: Dataset): PackSaltData {
   try {
-    return dissolve(salt, {}, dataset).best;
+    return packSaltData(salt, dataset);
   } catch (e) {
     if (isIonheatError(e)) throw new IonheatError(e.code, `${field} "${salt.formula}": ${e.message}`, { text: salt.formula, field });
     throw e;
@@ -211,7 +226,7 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
     if (typeof solid.formula !== 'string' || solid.formula.trim() === '') throw invalid(`${field}.formula`, `${field}.formula must be a salt formula`);
     let salt: Salt;
     try {
-      salt = parseSalt(solid.formula, dataset);
+      salt = parsedFormula(solid.formula, dataset);
     } catch (e) {
       if (isIonheatError(e)) throw new IonheatError(e.code, `${field}.formula "${solid.formula}": ${e.message}`, { text: solid.formula, field: `${field}.formula` });
       throw e;
@@ -223,11 +238,12 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
     }
     seen.set(salt.anhydrous, `${salt.formula} (${field})`);
 
-    const h25 = enthalpyOf(salt, `${field}.formula`, dataset);
-    const heatCapacityLoaded = solidHeatCapacity(salt, dataset);
-    const anhydrousSalt = salt.water > 0 ? parseSalt(salt.anhydrous, dataset) : salt;
-    const heatCapacityAnhydrous = salt.water > 0 ? solidHeatCapacity(anhydrousSalt, dataset) : heatCapacityLoaded;
-    const aq = aqueousHeatCapacity(anhydrousSalt, dataset);
+    const data = saltDataOf(salt, `${field}.formula`, dataset);
+    const h25 = data.enthalpy;
+    const heatCapacityLoaded = data.heatCapacity;
+    const anhydrousSalt = data.anhydrousSalt;
+    const heatCapacityAnhydrous = data.heatCapacityAnhydrous;
+    const aq = data.aqueousHeatCapacity;
     const additivityU = aq
       ? Math.hypot(Math.abs(heatCapacityAnhydrous.value - aq.value) / Math.sqrt(3), aq.u)
       : ADDITIVITY_FALLBACK_RELATIVE * heatCapacityAnhydrous.value;
@@ -239,31 +255,19 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
       else notes.push(`no Kirchhoff correction for ${salt.formula}: the tables lack the heat capacity of one of its aqueous ions; its 25 °C enthalpy of solution is used`);
     }
 
-    const curve = solubilityCurve(salt, dataset);
+    const curve = data.curve;
     const phases = new Map<string, PreparedPhase>();
-    if (curve) {
-      for (const point of curve.points) {
-        if (phases.has(point.phase)) continue;
-        if (point.phase === salt.formula) {
-          phases.set(point.phase, { formula: point.phase, water: salt.water, enthalpy, heatCapacity: heatCapacityLoaded });
-          continue;
-        }
-        const phaseSalt = parseSalt(point.phase, dataset);
-        let phaseEnthalpy: Estimate | undefined;
-        try {
-          phaseEnthalpy = dissolve(phaseSalt, {}, dataset).best;
-        } catch (e) {
-          if (!isIonheatError(e)) throw e;
-          phaseEnthalpy = undefined;
-        }
-        const phaseCp = solidHeatCapacity(phaseSalt, dataset);
-        if (phaseEnthalpy && options.kirchhoff) phaseEnthalpy = kirchhoff(phaseEnthalpy, phaseSalt, phaseCp, startC, dataset) ?? phaseEnthalpy;
-        phases.set(point.phase, { formula: point.phase, water: phaseSalt.water, enthalpy: phaseEnthalpy, heatCapacity: phaseCp });
+    for (const [formula, phase] of data.phases) {
+      if (formula === salt.formula) {
+        phases.set(formula, { formula, water: salt.water, enthalpy, heatCapacity: heatCapacityLoaded });
+        continue;
       }
-      sources.add(curve.source);
-    } else {
-      notes.push(`no solubility data for ${salt.formula}: assumed to dissolve completely whatever the temperature`);
+      let phaseEnthalpy = phase.enthalpy;
+      if (phaseEnthalpy && options.kirchhoff) phaseEnthalpy = kirchhoff(phaseEnthalpy, phase.salt, phase.heatCapacity, startC, dataset) ?? phaseEnthalpy;
+      phases.set(formula, { formula, water: phase.salt.water, enthalpy: phaseEnthalpy, heatCapacity: phase.heatCapacity });
     }
+    if (curve) sources.add(curve.source);
+    else notes.push(`no solubility data for ${salt.formula}: assumed to dissolve completely whatever the temperature`);
     for (const s of [...enthalpy.sources, ...heatCapacityLoaded.sources, ...heatCapacityAnhydrous.sources, ...(aq?.sources ?? [])]) sources.add(s);
 
     return {
@@ -283,7 +287,12 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
   });
   if (solids.length > 1) notes.push('several solids: their heats of solution are added and each dissolves against the same water as if alone; mixing effects (common ions, salting out, heats of mixing) are ignored');
 
-  return { solids, waterG, startC, containerJPerK, waterSpecificHeat: water, waterMolarMass, heatCapacityOverride, notes, sources: [...sources], dataset };
+  const phaseChanges = new Set<number>();
+  for (const s of solids) {
+    const pts = s.curve?.points ?? [];
+    for (let k = 0; k + 1 < pts.length; k++) if (pts[k]!.phase !== pts[k + 1]!.phase) phaseChanges.add((pts[k]!.t + pts[k + 1]!.t) / 2);
+  }
+  return { solids, waterG, startC, containerJPerK, waterSpecificHeat: water, waterMolarMass, heatCapacityOverride, phaseChanges: [...phaseChanges].sort((a, b) => a - b), notes, sources: [...sources], dataset };
 }
 
 /**

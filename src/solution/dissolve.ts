@@ -18,6 +18,9 @@ import { hydrateFromParent, hydrateRuleScatter, saltFormIndex } from './hydrateR
 import { heatPerGramOfFill, heatPerGramOfSalt, saturatedFill, type SaturatedFill } from './heatPerGram.js';
 import { checkKirchhoffTemperature, kirchhoffCorrection, solutionHeatCapacity, TABLE_TEMPERATURE_C, typicalSolutionHeatCapacity } from './solutionHeatCapacity.js';
 import { solutionVerdict, type Verdict } from './verdict.js';
+import { anchoredSolutionEnthalpies } from './anchoredSolution.js';
+import { solutionEnthalpyFromModel } from './modelSolution.js';
+import { saltLattice } from './saltLattice.js';
 
 export interface DissolveOptions {
   /**
@@ -60,7 +63,7 @@ export interface DissolveResult {
 }
 
 /** Within one basis, methods in order of preference (lower first); others after. */
-const METHOD_RANK: Readonly<Record<string, number>> = { table: 0, 'formation-enthalpies': 1, 'difference-rule': 2 };
+const METHOD_RANK: Readonly<Record<string, number>> = { table: 0, 'formation-enthalpies': 1 };
 
 function rank(a: Estimate, b: Estimate): number {
   return basisOrder.indexOf(a.basis) - basisOrder.indexOf(b.basis) || (METHOD_RANK[a.method] ?? 9) - (METHOD_RANK[b.method] ?? 9) || a.u - b.u || (a.method < b.method ? -1 : a.method > b.method ? 1 : 0);
@@ -104,8 +107,8 @@ function ruleEstimate(salt: Salt, hide: boolean, dataset: Dataset): Estimate | u
 
 /**
  * What dissolve needs of a salt that does not depend on the options, kept
- * per dataset and salt (the tables never change within a dataset). Results
- * get copies, so a caller cannot change what the next caller sees.
+ * per dataset and salt (the tables never change within a dataset). The
+ * estimates kept here are frozen and shared by every result.
  */
 interface SaltProfile {
   measured: Estimate | undefined;
@@ -115,6 +118,14 @@ interface SaltProfile {
   hydration: { absolute?: Estimate; conventional?: Estimate } | undefined;
   heatCapacity: Estimate | undefined;
   fill: SaturatedFill | undefined;
+  /** Lattice estimate + hydration sum, one per lattice method (anhydrous ionic salts). */
+  model: Estimate[];
+  /** Anchored and model estimates (a hydrate's carried over from its anhydrous salt), with all data / with the salt's own hidden. */
+  modelled: { open?: Estimate[]; hidden?: Estimate[] };
+  /** Every estimate at 25 °C in order of trust, and the heats per gram of the first, with all data / with the salt's own hidden. */
+  ranked: { open?: { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined }; hidden?: { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined } };
+  /** The error to throw when nothing can be estimated, kept so that repeated calls do not rebuild it. */
+  failure: { open?: IonheatError; hidden?: IonheatError };
 }
 
 function profileOf(salt: Salt, dataset: Dataset): SaltProfile {
@@ -123,25 +134,104 @@ function profileOf(salt: Salt, dataset: Dataset): SaltProfile {
   if (!profile) {
     const ionic = salt.kind === 'ionic';
     profile = {
-      measured: measuredSolutionEnthalpy(salt, dataset),
-      cycle: solutionEnthalpyFromCycle(salt, dataset),
+      measured: frozen(measuredSolutionEnthalpy(salt, dataset)),
+      cycle: frozen(solutionEnthalpyFromCycle(salt, dataset)),
       rule: {},
-      hydration: ionic ? { absolute: saltHydrationEnthalpy(salt, { scale: 'absolute' }, dataset), conventional: saltHydrationEnthalpy(salt, { scale: 'conventional' }, dataset) } : undefined,
-      heatCapacity: solutionHeatCapacity(salt, dataset),
+      hydration: ionic ? { absolute: frozen(saltHydrationEnthalpy(salt, { scale: 'absolute' }, dataset)), conventional: frozen(saltHydrationEnthalpy(salt, { scale: 'conventional' }, dataset)) } : undefined,
+      heatCapacity: frozen(solutionHeatCapacity(salt, dataset)),
       fill: saturatedFill(salt, dataset),
+      model: [],
+      modelled: {},
+      ranked: {},
+      failure: {},
     };
+    const hydration = modelHydration(profile.hydration);
+    if (hydration) for (const lattice of saltLattice(salt, dataset).values()) profile.model.push(frozen(solutionEnthalpyFromModel(lattice, hydration)));
     cache.set(salt.formula, profile);
   }
   return profile;
 }
 
+/**
+ * The hydration sum the model basis uses: from formation enthalpies where
+ * every ion has them (the NBS set the lattice calibration also rests on),
+ * else Marcus's values, else with Born estimates standing in.
+ */
+function modelHydration(h: SaltProfile['hydration']): Estimate | undefined {
+  if (!h) return undefined;
+  if (h.conventional && h.conventional.basis !== 'model') return h.conventional;
+  if (h.absolute && h.absolute.basis !== 'model') return h.absolute;
+  return h.absolute ?? h.conventional;
+}
+
+/** Anchored and model estimates of a salt, a hydrate's through its anhydrous salt and the difference rule; kept in the salt's profile. */
+function modelledEstimates(salt: Salt, hide: boolean, dataset: Dataset): Estimate[] {
+  const profile = profileOf(salt, dataset);
+  const key = hide ? 'hidden' : 'open';
+  let found = profile.modelled[key];
+  if (!found) profile.modelled[key] = found = computeModelled(salt, hide, dataset).map(frozen);
+  return found;
+}
+
+function computeModelled(salt: Salt, hide: boolean, dataset: Dataset): Estimate[] {
+  if (salt.kind !== 'ionic') return [];
+  if (salt.water === 0) return [...anchoredSolutionEnthalpies(salt, { excludeMeasured: hide }, dataset), ...profileOf(salt, dataset).model];
+  const hw = waterFormation(dataset);
+  if (hw === undefined) return [];
+  const anhydrous = tableSalt(salt.anhydrous, dataset);
+  const scatter = hydrateRuleScatter(hide ? { excludeFormula: salt.formula } : {}, dataset).perSqrtWater;
+  const rule = { parentFormula: anhydrous.formula, parentWater: 0, water: salt.water, waterFormation: hw, scatter };
+  return modelledEstimates(anhydrous, false, dataset).map((e) => hydrateFromParent(e, rule));
+}
+
 function ruleOf(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Dataset): Estimate | undefined {
   const key = hide ? 'hidden' : 'open';
-  if (!(key in profile.rule)) profile.rule[key] = salt.kind === 'ionic' ? ruleEstimate(salt, hide, dataset) : undefined;
+  if (!(key in profile.rule)) profile.rule[key] = salt.kind === 'ionic' ? frozen(ruleEstimate(salt, hide, dataset)) : undefined;
   return profile.rule[key];
 }
 
-const copy = (e: Estimate): Estimate => ({ ...e, sources: [...e.sources], notes: [...e.notes] });
+function failure(salt: Salt, hide: boolean, dataset: Dataset): IonheatError {
+  if (salt.kind === 'non-electrolyte') {
+    return new IonheatError('NOT_APPLICABLE', `no enthalpy of solution can be given for ${salt.formula}: it is a molecular solute, to which no lattice model applies, and the ${dataset.label} tables hold no measured value for it${hide ? ' that is not hidden (excludeMeasured)' : ''}`, { text: salt.formula });
+  }
+  return new IonheatError('MISSING_DATA', `no enthalpy of solution can be given for ${salt.formula}: no measured value, no formation enthalpies and no lattice estimate (a radius, volume or structure is missing) in the ${dataset.label} tables`, { text: salt.formula });
+}
+
+/** Freezes an estimate kept in a profile: results share it, and no caller can change what the next one sees. */
+function frozen<E extends Estimate | undefined>(e: E): E {
+  if (e) {
+    Object.freeze(e.sources);
+    Object.freeze(e.notes);
+    Object.freeze(e);
+  }
+  return e;
+}
+
+function perGramOf(best: Estimate, salt: Salt, profile: SaltProfile): DissolveResult['perGram'] {
+  return { salt: heatPerGramOfSalt(best, salt), ...(profile.fill ? { saturatedFill: heatPerGramOfFill(best, profile.fill) } : {}) };
+}
+
+/** Every estimate at 25 °C, most trusted first, and the heats per gram of the first; kept in the profile. */
+function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Dataset): { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined } {
+  const key = hide ? 'hidden' : 'open';
+  let found = profile.ranked[key];
+  if (!found) {
+    const estimates: Estimate[] = [];
+    if (profile.measured && !hide) estimates.push(profile.measured);
+    if (profile.cycle && !hide) estimates.push(profile.cycle);
+    const rule = ruleOf(salt, profile, hide, dataset);
+    if (rule) estimates.push(rule);
+    for (const e of modelledEstimates(salt, hide, dataset)) estimates.push(e);
+    estimates.sort(rank);
+    let perGram: DissolveResult['perGram'] | undefined;
+    if (estimates[0]) {
+      const p = perGramOf(estimates[0], salt, profile);
+      perGram = { salt: frozen(p.salt), ...(p.saturatedFill ? { saturatedFill: frozen(p.saturatedFill) } : {}) };
+    }
+    profile.ranked[key] = found = { estimates: Object.freeze(estimates), perGram };
+  }
+  return found;
+}
 
 /**
  * The enthalpy of solution at infinite dilution of a salt, on every basis
@@ -149,9 +239,18 @@ const copy = (e: Estimate): Estimate => ({ ...e, sources: [...e.sources], notes:
  *
  * - `measured`: the tabulated value;
  * - `cycle`: Σν·ΔfH°(ions, aq) + n_w·ΔfH°(H₂O, l) − ΔfH°(crystal) from
- *   tabulated formation enthalpies; for a hydrate (or anhydrous salt)
- *   without its own crystal value, the difference rule from the nearest
- *   other form of the salt (method `difference-rule`, flagged).
+ *   tabulated formation enthalpies;
+ * - `anchored`: from related salts with measured or cycle values — the
+ *   four-salt difference with a lattice-model bracket (one estimate per
+ *   lattice estimator, see {@link anchoredSolutionEnthalpies}), and for a
+ *   hydrate or anhydrous salt the difference rule from the nearest other
+ *   form of the same salt (method `difference-rule`);
+ * - `model`: a calibrated lattice estimate plus the hydration sum (one per
+ *   lattice method, see {@link solutionEnthalpyFromModel}); wide by nature.
+ *
+ * A hydrate without values of its own gets the anchored and model
+ * estimates of its anhydrous salt carried over by the difference rule.
+ * Within a basis the estimate with the smallest uncertainty comes first.
  *
  * `best` is the most trusted estimate; the verdict, the probability of an
  * endothermic dissolution and the heats per gram are read from it. Values
@@ -181,31 +280,22 @@ export function dissolve(formula: string | Salt, options: DissolveOptions = {}, 
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
 
   const profile = profileOf(salt, dataset);
-  let estimates: Estimate[] = [];
-  if (profile.measured && !hide) estimates.push(copy(profile.measured));
-  if (profile.cycle && !hide) estimates.push(copy(profile.cycle));
-  const rule = ruleOf(salt, profile, hide, dataset);
-  if (rule) estimates.push(copy(rule));
   if (salt.kind !== 'ionic') notes.push('a molecular solute: no lattice model applies, so only measured values (or formation enthalpies) are used');
-
+  const at25 = ranked(salt, profile, hide, dataset);
   const heatCapacity = profile.heatCapacity;
-  if (celsius !== TABLE_TEMPERATURE_C) {
+  let estimates: Estimate[];
+  if (celsius === TABLE_TEMPERATURE_C) {
+    estimates = [...at25.estimates];
+  } else {
     const typical = typicalSolutionHeatCapacity(dataset).rms;
-    estimates = estimates.map((e) => kirchhoffCorrection(e, celsius, heatCapacity, typical));
+    estimates = at25.estimates.map((e) => kirchhoffCorrection(e, celsius, heatCapacity, typical)).sort(rank);
+    if (!heatCapacity) notes.push(`no heat capacity of solution for ${salt.formula}: values are those at 25 °C with a widened interval`);
   }
-  estimates.sort(rank);
   const best = estimates[0];
-  if (!best) {
-    if (salt.kind === 'non-electrolyte') {
-      throw new IonheatError('NOT_APPLICABLE', `no enthalpy of solution can be given for ${salt.formula}: it is a molecular solute, to which no lattice model applies, and the ${dataset.label} tables hold no measured value for it${hide ? ' that is not hidden (excludeMeasured)' : ''}`, { text: salt.formula });
-    }
-    throw new IonheatError('MISSING_DATA', `no enthalpy of solution can be given for ${salt.formula}: no measured value and no formation enthalpies in the ${dataset.label} tables`, { text: salt.formula });
-  }
-  if (celsius !== TABLE_TEMPERATURE_C && !heatCapacity) notes.push(`no heat capacity of solution for ${salt.formula}: values are those at 25 °C with a widened interval`);
-
-  const fill = profile.fill ? heatPerGramOfFill(best, profile.fill) : undefined;
+  if (!best) throw (profile.failure[hide ? 'hidden' : 'open'] ??= failure(salt, hide, dataset));
+  const perGram = celsius === TABLE_TEMPERATURE_C && at25.perGram ? { ...at25.perGram } : perGramOf(best, salt, profile);
   const hydration = profile.hydration
-    ? { ...(profile.hydration.absolute ? { absolute: copy(profile.hydration.absolute) } : {}), ...(profile.hydration.conventional ? { conventional: copy(profile.hydration.conventional) } : {}) }
+    ? { ...(profile.hydration.absolute ? { absolute: profile.hydration.absolute } : {}), ...(profile.hydration.conventional ? { conventional: profile.hydration.conventional } : {}) }
     : undefined;
   return {
     formula: salt.formula,
@@ -213,9 +303,9 @@ export function dissolve(formula: string | Salt, options: DissolveOptions = {}, 
     best,
     estimates,
     ...solutionVerdict(best),
-    perGram: { salt: heatPerGramOfSalt(best, salt), ...(fill ? { saturatedFill: fill } : {}) },
+    perGram,
     ...(hydration ? { hydration } : {}),
-    temperature: { celsius, ...(heatCapacity ? { heatCapacityOfSolution: copy(heatCapacity) } : {}) },
+    temperature: { celsius, ...(heatCapacity ? { heatCapacityOfSolution: heatCapacity } : {}) },
     notes,
   };
 }

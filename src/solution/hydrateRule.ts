@@ -152,8 +152,10 @@ export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, da
  *
  * with θ = {@link WATER_OF_CRYSTALLIZATION_ENTHALPY}. The standard
  * uncertainty adds √|n − n′| times the rule's scatter (see
- * {@link hydrateRuleScatter}) to the parent's in quadrature. The basis is the parent's, except that
- * a measured parent gives `cycle` (the hydrate's value is not measured).
+ * {@link hydrateRuleScatter}) to the parent's in quadrature. A measured or
+ * cycle parent gives the `anchored` basis (a related salt's value plus an
+ * empirical difference, like the four-salt anchors); an anchored or model
+ * parent keeps its basis.
  *
  * @param parent - the parent's enthalpy of solution, kJ/mol
  * @param rule - the parent's formula and waters, the hydrate's waters, ΔfH°(H₂O, l) and the rule's scatter
@@ -173,7 +175,7 @@ export function hydrateFromParent(parent: Estimate, rule: HydrateRuleInput): Est
   const shifted = widenEstimate(parent, uRule, shift);
   return makeEstimate({
     ...shifted,
-    basis: parent.basis === 'measured' ? 'cycle' : parent.basis,
+    basis: parent.basis === 'measured' || parent.basis === 'cycle' ? 'anchored' : parent.basis,
     method: parent.basis === 'measured' || parent.basis === 'cycle' ? 'difference-rule' : `${parent.method}+difference-rule`,
     sources: [...parent.sources, 'jenkinsGlasser2004'],
     notes: [

@@ -193,3 +193,21 @@ describe('facts of the trade (common practice)', () => {
     }
   });
 });
+
+describe('tryLatticeEstimate', () => {
+  it('returns undefined where a method lacks data, the estimate otherwise, and throws for bad arguments', async () => {
+    const { tryLatticeEstimate } = await import('../../src/index.js');
+    expect(tryLatticeEstimate('KNO3', 'born-lande')).toBeUndefined();
+    expect(tryLatticeEstimate('NaHCOO', 'kapustinskii')).toBeUndefined();
+    expect(tryLatticeEstimate('KNO3', 'kapustinskii')).toEqual(latticeEstimate('KNO3', 'kapustinskii'));
+    expect(code(() => tryLatticeEstimate('NaCl', 'kapustinskii', { excludeSalt: 'NaXy' }))).toBe('UNKNOWN_ELEMENT');
+    expect(code(() => tryLatticeEstimate('NaCl', 'kapustinskii', { coordination: 1 }))).toBe('INVALID_ARGUMENT');
+  });
+  it('returns a fresh copy each time, so a caller cannot change what the next caller sees', () => {
+    const a = latticeEstimate('NaCl', 'vbt');
+    a.notes.push('changed');
+    a.value = 0;
+    expect(latticeEstimate('NaCl', 'vbt').notes).not.toContain('changed');
+    expect(latticeEstimate('NaCl', 'vbt').value).toBeGreaterThan(700);
+  });
+});

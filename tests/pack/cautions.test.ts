@@ -35,12 +35,12 @@ describe('thermal cautions', () => {
 });
 
 describe('chemical hazards from the hazards table', () => {
-  it('names ammonium nitrate as an oxidiser and explosives precursor restricted in some jurisdictions, with the source', () => {
+  it('names ammonium nitrate as an oxidiser and explosives precursor restricted in some jurisdictions (e.g. EU 2019/1148), with the source', () => {
     const r = packFinalTemperature({ solids: [{ formula: 'NH4NO3', massG: 30 }], waterG: 100 });
     const line = r.cautions.find((c) => c.startsWith('NH4NO3'))!;
     expect(line).toContain('oxidizer');
     expect(line).toContain('explosive-precursor');
-    expect(line).toContain('restricted in some jurisdictions');
+    expect(line).toContain('restricted or must be reported in some jurisdictions');
     expect(line).toContain('[eu2019_1148');
   });
   it('finds a hazard that follows an ion (soluble barium) and a hydrate by its anhydrous salt', () => {

@@ -20,7 +20,7 @@ describe('eutectic clamp', () => {
 
 describe('freezing clamp of a dilute fill', () => {
   // 20 g NH4NO3 in 100 g water from 0 °C. All of it dissolves (CRC solubility ≫ 20 g/100 g).
-  // The balance alone: n = 20 / 80.043 = 0.24987 mol, Q = 0.24987 × 25 690 = 6419 J (CRC ΔsolH),
+  // The balance alone: n = 20 / 80.043 = 0.24987 mol, Q = 0.24987 × 25 690 = 6419 J (CRC ΔsolH, checked by the data helper),
   //   C = 417.935 + 0.24987 × 139.3 = 452.74 J/K (NBS Cp°, from memory) → −14.18 °C.
   // But the solution freezes first: T_f = −K_f·ν·m = −1.86 × 2 × 0.24987 / 0.100 = −9.295 °C
   // (ideal freezing-point depression, K_f = 1.86 K·kg/mol, textbook value from memory), above the

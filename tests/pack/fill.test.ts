@@ -28,8 +28,8 @@ describe('a solid without solubility data', () => {
 
 describe('several solids', () => {
   // 20 g NH4Cl + 10 g urea in 100 g water at 20 °C, both unsaturated: heats add.
-  //   NH4Cl: 20/53.489 = 0.37391 mol × 14.78 kJ/mol (CRC) = 5526.4 J; Cp° 84.1 J/(mol·K) (NBS, from memory)
-  //   urea:  10/60.056 = 0.16651 mol × 15.1 kJ/mol (Egan & Luff 1966, per the table) = 2514.3 J; Cp° 93.14 (NBS, from memory)
+  //   NH4Cl: 20/53.489 = 0.37391 mol × 14.78 kJ/mol (CRC, checked by the data helper) = 5526.4 J; Cp° 84.1 J/(mol·K) (NBS, from memory)
+  //   urea:  10/60.056 = 0.16651 mol × 15.1 kJ/mol (Egan & Luff 1966; from memory) = 2514.3 J; Cp° 93.14 (NBS, from memory)
   //   C = 417.935 + 0.37391 × 84.1 + 0.16651 × 93.14 = 417.935 + 31.446 + 15.509 = 464.890 J/K
   //   ΔT = −8040.7 / 464.890 = −17.296 K → 2.704 °C
   const r = packFinalTemperature({ solids: [{ formula: 'NH4Cl', massG: 20 }, { formula: 'CO(NH2)2', massG: 10 }], waterG: 100, startC: 20 });

@@ -53,7 +53,7 @@ describe('dilute potassium nitrate cold fill: 10 g KNO3 in 100 g water at 20 °C
 
 describe('dilute sodium chloride fill: 10 g NaCl in 100 g water at 20 °C', () => {
   // M(NaCl) = 22.98976928 + 35.45 = 58.43977 g/mol (IUPAC 2021)
-  // ΔsolH(NaCl) = +3.88 kJ/mol (CRC Handbook; from memory)
+  // ΔsolH(NaCl) = +3.88 kJ/mol (CRC Handbook, enthalpy of solution of electrolytes; checked against a copy by the data helper)
   // Cp°(NaCl, cr) = 50.5 J/(mol·K) (NBS 1982, checked against a copy by the data helper)
   // n = 10 / 58.43977 = 0.171116 mol; Q = 0.171116 × 3880 = 663.93 J
   // C = 417.935 + 0.171116 × 50.5 = 426.576 J/K; ΔT = −663.93 / 426.576 = −1.5564 K → 18.444 °C

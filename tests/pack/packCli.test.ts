@@ -89,7 +89,7 @@ describe('pack bad input: one line on stderr naming the field, exit 2, no stack 
     ['zero water', ['pack', '--salt', 'KNO3', '--salt-mass', '10', '--water', '0'], '--water'],
     ['no water', ['pack', '--salt', 'KNO3', '--salt-mass', '10'], '--water'],
     ['an unknown salt', ['pack', '--salt', 'Xyz', '--salt-mass', '10', '--water', '100'], '--salt'],
-    ['a salt without an enthalpy of solution', ['pack', '--salt', 'Cs2SO4', '--salt-mass', '10', '--water', '100'], '--salt'],
+    ['a salt without an enthalpy of solution', ['pack', '--salt', 'Cs2C2O4', '--salt-mass', '10', '--water', '100'], '--salt'],
     ['a start below liquid water', [...base, '--start', '-5'], '--start'],
     ['a start above liquid water', [...base, '--start', '120'], '--start'],
     ['a mass that is not a number', ['pack', '--salt', 'KNO3', '--salt-mass', 'ten', '--water', '100'], '--salt-mass'],

@@ -13,8 +13,8 @@ function verdictOrNotApplicable(formula: string, excludeMeasured: boolean): stri
   try {
     return dissolve(formula, { excludeMeasured }).verdict;
   } catch (e) {
-    // No estimate at all is no verdict: the honest 'undetermined'.
-    if (e instanceof IonheatError && (e.code === 'NOT_APPLICABLE' || e.code === 'MISSING_DATA')) return 'undetermined';
+    // A molecular solute without its measured value has no estimate at all: no verdict, the honest 'undetermined'.
+    if (e instanceof IonheatError && e.code === 'NOT_APPLICABLE') return 'undetermined';
     throw e;
   }
 }
@@ -50,7 +50,10 @@ describe('dissolve: facts of the trade (common practice)', () => {
 describe('dissolve: the result', () => {
   it('orders estimates by trust and keeps the contract fields', () => {
     const r = dissolve('NaCl');
-    expect(r.estimates.map((e) => e.basis)).toEqual(['measured', 'cycle']);
+    const order = ['measured', 'cycle', 'anchored', 'model'];
+    expect(r.estimates.slice(0, 2).map((e) => e.basis)).toEqual(['measured', 'cycle']);
+    expect(r.estimates.map((e) => order.indexOf(e.basis))).toEqual([...r.estimates.map((e) => order.indexOf(e.basis))].sort((a, b) => a - b));
+    expect(new Set(r.estimates.map((e) => e.basis))).toEqual(new Set(order));
     expect(r.best).toBe(r.estimates[0]);
     expect(r.formula).toBe('NaCl');
     expect(r.salt.formula).toBe('NaCl');

@@ -80,13 +80,28 @@ describe('a wider input uncertainty never narrows an output interval', () => {
   });
 });
 
+/** Equal, numbers to a relative 1e-12: sums over a table in another order may differ in the last bits of a float. */
+function expectSame(a: unknown, b: unknown, where: string): void {
+  if (typeof a === 'number' && typeof b === 'number') {
+    expect(Math.abs(a - b), where).toBeLessThanOrEqual(1e-12 * Math.max(1, Math.abs(a), Math.abs(b)));
+  } else if (Array.isArray(a) && Array.isArray(b)) {
+    expect(a.length, where).toBe(b.length);
+    a.forEach((x, i) => expectSame(x, b[i], `${where}[${i}]`));
+  } else if (a && b && typeof a === 'object' && typeof b === 'object') {
+    expect(Object.keys(a).sort(), where).toEqual(Object.keys(b).sort());
+    for (const k of Object.keys(a)) expectSame((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], `${where}.${k}`);
+  } else {
+    expect(a, where).toEqual(b);
+  }
+}
+
 describe('results do not depend on the order of the data tables', () => {
   // ions.json is kept in order: its order is the canonical order of ions in a formula (DEVELOPERS.md).
   it.each([7, 1234])('seed %i: every salt gives the same result as with the built-in order', (seed) => {
     const shuffled = shuffledDataset(seed, ['ions.json']);
     for (const formula of formulas) {
       for (const excludeMeasured of [false, true]) {
-        expect(tryDissolve(formula, excludeMeasured, shuffled), `${formula} ${excludeMeasured}`).toEqual(tryDissolve(formula, excludeMeasured, base));
+        expectSame(tryDissolve(formula, excludeMeasured, shuffled), tryDissolve(formula, excludeMeasured, base), `${formula} ${excludeMeasured}`);
       }
     }
   });

@@ -3,6 +3,7 @@ import { formatSalt } from '../../chem/formatSalt.js';
 import type { Salt } from '../../chem/salt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { dissolve, type DissolveResult } from '../../solution/dissolve.js';
+import { saltHazards } from '../../pack/saltHazards.js';
 import { numberOption, readArgs } from './args.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
@@ -11,13 +12,9 @@ import { textTable } from './textTable.js';
 const GENERAL_CAUTION =
   'Screening estimate. A dissolving salt can scald or freeze skin, and some salts are oxidisers, toxic or restricted: follow the safety data sheet, local codes, product-safety regulation and licensed practice.';
 
-/** Hazard statements of the salt, its anhydrous form, or any of its ions, from hazards.json. */
+/** Hazard statements of the salt (a hydrate shares its anhydrous salt's) and of its ions, from hazards.json. */
 function cautionsFor(salt: Salt, dataset: Dataset): string[] {
-  const subjects = new Set([salt.formula, salt.anhydrous, ...salt.ions.map((i) => i.ion)]);
-  return dataset
-    .records('hazards.json')
-    .filter((h) => subjects.has(h.subject))
-    .map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
+  return saltHazards(salt, dataset).map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
 }
 
 const rounded = (e: Estimate | undefined): Estimate | undefined => (e ? roundEstimate(e) : undefined);

@@ -61,19 +61,21 @@ export function benchDissolve(): string[] {
   let t0 = performance.now();
   pass(salts, dataset, counts);
   const cold = performance.now() - t0;
-  let passes = 0;
-  t0 = performance.now();
-  let elapsed = 0;
-  while (elapsed < 2000) {
+  // Let the JIT settle, then time whole passes for three seconds and take the median pass.
+  for (t0 = performance.now(); performance.now() - t0 < 1000; ) pass(salts, dataset);
+  const rates: number[] = [];
+  for (t0 = performance.now(); performance.now() - t0 < 3000; ) {
+    const t = performance.now();
     pass(salts, dataset);
-    passes++;
-    elapsed = performance.now() - t0;
+    rates.push(salts.length / ((performance.now() - t) / 1000));
   }
-  const warmRate = (passes * salts.length) / (elapsed / 1000);
+  rates.sort((a, b) => a - b);
+  const passes = rates.length;
+  const warmRate = rates[Math.floor(passes / 2)]!;
   const coldRate = salts.length / (cold / 1000);
   return [
     `dissolve, every charge-balanced cation–anion pair (${salts.length} salts; best basis: ${[...counts.entries()].map(([b, n]) => `${b} ${n}`).join(', ')})`,
-    `  first pass (indexes and calibrations built): ${cold.toFixed(0)} ms, ${coldRate.toFixed(0)} salts/s`,
-    `  later passes: ${warmRate.toFixed(0)} salts/s over ${passes} passes — ${(warmRate / DISSOLVE_TARGET_PER_SECOND).toFixed(2)} × the target of ${DISSOLVE_TARGET_PER_SECOND} salts/s`,
+    `  first pass on a fresh dataset (builds the anchor index, calibrations, lattice estimates and per-salt profiles): ${cold.toFixed(0)} ms, ${coldRate.toFixed(0)} salts/s`,
+    `  later passes (indexes and profiles reused; median of ${passes} passes): ${warmRate.toFixed(0)} salts/s — ${(warmRate / DISSOLVE_TARGET_PER_SECOND).toFixed(2)} × the target of ${DISSOLVE_TARGET_PER_SECOND} salts/s`,
   ];
 }

@@ -95,27 +95,48 @@ function rows(cases: readonly Case[]): Row[] {
       const e = c.estimates.find((x) => x.basis === basis);
       return e ? [{ e, truth: c.truth }] : [];
     });
-    if (ofBasis.length > 0 && keys.filter((k) => k.startsWith(`${basis} ·`)).length > 1) out.push(row(`${basis} (its first estimate)`, ofBasis));
+    if (ofBasis.length > 0) out.push(row(`${basis} basis (most precise per salt)`, ofBasis));
   }
   out.push(row('best', cases.flatMap((c) => (c.best ? [{ e: c.best, truth: c.truth }] : []))));
   return out;
 }
 
 const pct = (x: number): string => `${(100 * x).toFixed(1)} %`;
-const kj = (x: number): string => x.toFixed(1);
+const kj = (x: number): string => (x.toFixed(1) === '-0.0' ? '0.0' : x.toFixed(1));
 
 function table(rs: readonly Row[]): string {
   const head = '| basis · method | n | MAE | RMS | bias | 95 % coverage | verdict right | undetermined | wrong |\n|---|---:|---:|---:|---:|---:|---:|---:|---:|';
   return [head, ...rs.map((r) => `| ${r.label} | ${r.n} | ${kj(r.mae)} | ${kj(r.rms)} | ${kj(r.bias)} | ${pct(r.coverage)} | ${pct(r.right)} | ${pct(r.undetermined)} | ${pct(r.wrong)} |`)].join('\n');
 }
 
+const carried = (r: Row): boolean => r.label.includes('+difference-rule');
+const summary = (r: Row): boolean => r.label.includes('(') || r.label === 'best';
+
+/** The three tables of one reference set: estimates made directly, hydrates carried over from their anhydrous salt, and per basis. */
+function tables(rs: readonly Row[]): string {
+  const direct = rs.filter((r) => !carried(r) && !summary(r));
+  const hydrates = rs.filter(carried);
+  const bases = rs.filter(summary);
+  return [
+    'Each estimator on its own:',
+    '',
+    table(direct),
+    ...(hydrates.length > 0 ? ['', "Hydrates without values of their own, from their anhydrous salt's anchored or model estimate and the difference rule:", '', table(hydrates)] : []),
+    '',
+    'Per basis (its most precise estimate for each salt) and `best` (the estimate `dissolve` returns):',
+    '',
+    table(bases),
+  ].join('\n');
+}
+
 function byChargeType(cases: readonly Case[]): string {
-  const types = [...new Set(cases.map((c) => (c.salt.water > 0 ? 'hydrates' : (chargeType(c.salt) ?? 'other'))))].sort();
+  const kindOf = (c: Case): string => (c.salt.kind !== 'ionic' ? 'non-electrolytes' : c.salt.water > 0 ? 'hydrates' : (chargeType(c.salt) ?? 'several kinds of ion'));
+  const types = [...new Set(cases.map(kindOf))].sort();
   const lines = ['| salts | n | estimated (best) | best MAE | best 95 % coverage | best wrong verdicts |', '|---|---:|---:|---:|---:|---:|'];
   for (const t of types) {
-    const sub = cases.filter((c) => (c.salt.water > 0 ? 'hydrates' : (chargeType(c.salt) ?? 'other')) === t);
+    const sub = cases.filter((c) => kindOf(c) === t);
     const r = row(t, sub.flatMap((c) => (c.best ? [{ e: c.best, truth: c.truth }] : [])));
-    lines.push(`| ${t} | ${sub.length} | ${r.n} | ${kj(r.mae)} | ${pct(r.coverage)} | ${pct(r.wrong)} |`);
+    lines.push(r.n > 0 ? `| ${t} | ${sub.length} | ${r.n} | ${kj(r.mae)} | ${pct(r.coverage)} | ${pct(r.wrong)} |` : `| ${t} | ${sub.length} | 0 | — | — | — |`);
   }
   return lines.join('\n');
 }
@@ -133,12 +154,19 @@ function worst(cases: readonly Case[], k = 12): string {
 }
 
 function targets(rs: readonly Row[]): string {
+  const verdict = (ok: boolean) => (ok ? 'met' : '**missed**');
   const lines: string[] = [];
-  const anchored = rs.filter((r) => r.label.startsWith('anchored ·'));
-  if (anchored.length === 0) lines.push('- Anchored MAE ≤ 5 kJ/mol: **not measured** (no anchored estimates in this build).');
-  for (const r of anchored) lines.push(`- Anchored MAE ≤ 5 kJ/mol (${r.label}): ${kj(r.mae)} kJ/mol — ${r.mae <= 5 ? 'met' : '**missed**'}.`);
-  for (const r of rs.filter((x) => !x.label.includes('(') && x.label !== 'best')) lines.push(`- 95 % coverage ≥ 90 % (${r.label}): ${pct(r.coverage)} — ${r.coverage >= 0.9 ? 'met' : '**missed**'}.`);
-  for (const r of rs.filter((x) => !x.label.includes('('))) lines.push(`- Wrong verdicts ≤ 2 % (${r.label}): ${pct(r.wrong)} — ${r.wrong <= 0.02 ? 'met' : '**missed**'}.`);
+  const bases = rs.filter(summary);
+  const anchoredBasis = bases.find((r) => r.label.startsWith('anchored basis')) ?? rs.find((r) => r.label.startsWith('anchored ·'));
+  lines.push(anchoredBasis ? `- Anchored MAE ≤ 5 kJ/mol (the anchored basis): ${kj(anchoredBasis.mae)} kJ/mol — ${verdict(anchoredBasis.mae <= 5)}.` : '- Anchored MAE ≤ 5 kJ/mol: **not measured** (no anchored estimates).');
+  for (const r of bases) lines.push(`- 95 % coverage ≥ 90 % (${r.label}): ${pct(r.coverage)} — ${verdict(r.coverage >= 0.9)}; wrong verdicts ≤ 2 %: ${pct(r.wrong)} — ${verdict(r.wrong <= 0.02)}.`);
+  const methods = rs.filter((r) => !summary(r));
+  const met = methods.filter((r) => r.label.startsWith('anchored') && r.mae <= 5).map((r) => `${r.label} (${kj(r.mae)})`);
+  if (met.length > 0) lines.push(`- Single anchored estimators within 5 kJ/mol: ${met.join(', ')}.`);
+  const low = methods.filter((r) => r.coverage < 0.9).map((r) => `${r.label} (${pct(r.coverage)} of ${r.n})`);
+  lines.push(low.length > 0 ? `- Single estimators below 90 % coverage: ${low.join(', ')}.` : '- Every single estimator reaches 90 % coverage.');
+  const wrong = methods.filter((r) => r.wrong > 0.02).map((r) => `${r.label} (${pct(r.wrong)} of ${r.n})`);
+  lines.push(wrong.length > 0 ? `- Single estimators above 2 % wrong verdicts: ${wrong.join(', ')}.` : '- No single estimator gives more than 2 % wrong verdicts.');
   return lines.join('\n');
 }
 
@@ -158,6 +186,13 @@ function main(): void {
     const c = solutionEnthalpyFromCycle(salt, dataset);
     if (c) cycle.push(estimateCase(salt, c.value));
   }
+  // The cycle basis cannot be left out of its own reference set; against the measured values it is checked with nothing hidden.
+  const closure: { e: Estimate; truth: number }[] = [];
+  for (const c of measured) {
+    const e = solutionEnthalpyFromCycle(c.salt, dataset);
+    if (e) closure.push({ e, truth: c.truth });
+  }
+  const closureRow = row('cycle · formation-enthalpies', closure);
   const measuredRows = rows(measured);
   const cycleRows = rows(cycle);
   const missingMeasured = measured.filter((c) => !c.best).map((c) => c.salt.formula);
@@ -179,9 +214,17 @@ is *right* when it names the sign of the reference value, *undetermined* when th
 ${measured.length} salts with a measured enthalpy of solution at infinite dilution (1:1 electrolytes, their hydrates, urea).
 ${missingMeasured.length > 0 ? `No estimate at all for ${missingMeasured.length}: ${missingMeasured.join(', ')}.` : 'Every salt got at least one estimate.'}
 
-${table(measuredRows)}
+${tables(measuredRows)}
+
+By kind of salt (\`best\`):
 
 ${byChargeType(measured)}
+
+The cycle basis against the same measured values, nothing hidden (the NBS formation enthalpies and the CRC
+enthalpies of solution are largely derived from one another, so this checks the tables' consistency and the
+stated uncertainties more than an independent method):
+
+${table([closureRow])}
 
 ## Against cycle values (NBS formation enthalpies) of salts without a measured value
 
@@ -190,7 +233,9 @@ is not in the measured table: 2:1, 1:2, 2:2 and 3:1 salts and the pack hydrates.
 Σν·ΔfH°(aq) + n_w·ΔfH°(H₂O, l) − ΔfH°(cr), good to about 1–2 kJ/mol; the crystal value is hidden from the estimators.
 ${missingCycle.length > 0 ? `No estimate at all for ${missingCycle.length}: ${missingCycle.join(', ')}.` : 'Every salt got at least one estimate.'}
 
-${table(cycleRows)}
+${tables(cycleRows)}
+
+By kind of salt (\`best\`):
 
 ${byChargeType(cycle)}
 
@@ -209,10 +254,27 @@ ${worst(cycle)}
 Measured set:
 
 ${targets(measuredRows)}
+- 95 % coverage ≥ 90 % (cycle basis against measured values, nothing hidden): ${pct(closureRow.coverage)} — ${closureRow.coverage >= 0.9 ? 'met' : '**missed**'}; wrong verdicts: ${pct(closureRow.wrong)}.
 
 Cycle set:
 
 ${targets(cycleRows)}
+
+## Why targets are missed
+
+- **Anchored MAE.** The four-salt difference assumes that a lattice model's error is additive over the ions.
+  It nearly is for the alkali halides with the structure-aware estimators (Born–Landé and Born–Mayer
+  anchored on salts of the same structure, about 1–2 kJ/mol), but not for salts of Li⁺ (anion contact),
+  Ag⁺ and Tl⁺ (covalent bonding), NH₄⁺ and N(CH₃)₄⁺ (hydrogen bonding, shape) or polyatomic anions swapped for
+  monatomic ones, where Kapustinskii's and the volume-based brackets leave 10–50 kJ/mol. The measured table
+  holds few close relatives of such salts to anchor on, so the anchored basis as a whole stays above 5 kJ/mol.
+- **Coverage of single estimators.** The intervals are calibrated by leave-one-out on the anchor pool, so
+  they hold about 95 % overall; a method used on only a handful of salts (Born–Landé and Born–Mayer outside
+  the alkali halides) or a salt unlike any other in the pool (AlCl₃, ZnS, Na₂S, BeCl₂, Mg(NO₃)₂ with the
+  volume-based estimator) can still fall outside.
+- **Wrong verdicts.** Nearly every wrong verdict is a chemically unusual salt (sulfides, hydrates of Mg(NO₃)₂)
+  whose estimate missed by more than its calibrated interval; the model basis otherwise says \`undetermined\`,
+  as it must for a small difference of two large numbers.
 `;
   const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..', '..');
   const out = join(root, 'docs', 'solution-validation.md');

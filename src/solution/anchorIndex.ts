@@ -1,0 +1,173 @@
+/**
+ * The index behind the `anchored` basis, built once per dataset: every
+ * anhydrous salt of one cation and one anion with a measured or cycle
+ * enthalpy of solution and plain lattice estimates (the anchor pool), keyed
+ * by its ion pair, and for every ion the other ions of its sign that occur in
+ * the pool, nearest first.
+ *
+ * @module
+ */
+import type { Dataset } from '../data/dataset.js';
+import { parseSalt } from '../chem/parseSalt.js';
+import { saltRecordIndex, saltRecords, WATER } from '../chem/saltRecords.js';
+import type { Salt } from '../chem/salt.js';
+import { isIonheatError } from '../error.js';
+import type { Estimate } from '../quantity/estimate.js';
+import type { LatticeModel } from '../lattice/latticeModel.js';
+import { bornRadius } from '../hydration/bornHydration.js';
+import { measuredSolutionEnthalpy } from './measuredSolution.js';
+import { solutionEnthalpyFromCycle } from './cycleSolution.js';
+import { anchorLattice } from './saltLattice.js';
+
+/** One anchor: a salt M_aX_b with a known enthalpy of solution. */
+export interface AnchorSalt {
+  formula: string;
+  cation: string;
+  anion: string;
+  /** Cations and anions per formula unit. */
+  cationCount: number;
+  anionCount: number;
+  /** Enthalpy of solution, kJ/mol, and its standard uncertainty. */
+  value: number;
+  u: number;
+  basis: 'measured' | 'cycle';
+  sources: readonly string[];
+  /** Structure type from crystals.json, where given. */
+  structure: string | undefined;
+  /** Plain lattice enthalpy by estimator, kJ/mol. */
+  lattice: ReadonlyMap<LatticeModel, number>;
+}
+
+/** How alike two ions of one sign are: 0 for the same ion, larger for less alike. */
+export interface Neighbour {
+  ion: string;
+  distance: number;
+}
+
+export interface AnchorIndex {
+  /** Every anchor, in formula order. */
+  anchors: readonly AnchorSalt[];
+  /** Anchors by cation, then anion. */
+  byIons: ReadonlyMap<string, ReadonlyMap<string, AnchorSalt>>;
+  /** For every ion of the table, the other ions of its sign that occur in the pool, nearest first. */
+  neighbours: ReadonlyMap<string, readonly Neighbour[]>;
+}
+
+/**
+ * Weights of the ion distance (a method choice of ionheat, not published
+ * values): radius difference in units of 0.25 Å, squared; 4 for a different
+ * charge; 1 for monatomic against polyatomic; 3 for a cation with a
+ * noble-gas core against one without (d-block and post-transition cations
+ * bond more covalently, and the ionic models miss them by more); 4 for the
+ * radius term where an ion has no radius. Chosen by leave-one-out over the
+ * anchor pool among a handful of settings.
+ */
+export const ION_DISTANCE = { radiusScale: 0.25, charge: 4, kind: 1, core: 3, noRadius: 4 } as const;
+
+const NOBLE_GAS_Z = new Set([2, 10, 18, 36, 54, 86]);
+
+/** A binary salt's single cation and anion, or undefined. */
+export function binaryIons(salt: Salt): { cation: string; anion: string; cationCount: number; anionCount: number } | undefined {
+  if (salt.kind !== 'ionic' || salt.ions.length !== 2) return undefined;
+  const [c, a] = salt.ions[0]!.charge > 0 ? [salt.ions[0]!, salt.ions[1]!] : [salt.ions[1]!, salt.ions[0]!];
+  if (!(c.charge > 0 && a.charge < 0)) return undefined;
+  return { cation: c.ion, anion: a.ion, cationCount: c.count, anionCount: a.count };
+}
+
+interface IonFeatures {
+  charge: number;
+  radius: number | undefined;
+  kind: string;
+  nobleCore: boolean;
+}
+
+function ionFeatures(dataset: Dataset): ReadonlyMap<string, IonFeatures> {
+  return dataset.memo('solution.anchorIonFeatures', () => {
+    const z = new Map(dataset.records('elements.json').map((e) => [e.symbol, e.z]));
+    const out = new Map<string, IonFeatures>();
+    for (const ion of dataset.records('ions.json')) {
+      if (ion.charge === 0) continue;
+      const symbols = Object.keys(ion.composition);
+      const nobleCore = ion.kind !== 'monatomic' || (symbols.length === 1 && NOBLE_GAS_Z.has((z.get(symbols[0]!) ?? 0) - ion.charge));
+      out.set(ion.id, { charge: ion.charge, radius: bornRadius(ion.id, dataset)?.radius, kind: ion.kind, nobleCore });
+    }
+    return out;
+  });
+}
+
+/** `noble-gas` for a cation with a noble-gas electron core (and polyatomic cations), else `other`. */
+export function cationCore(ion: string, dataset: Dataset): 'noble-gas' | 'other' {
+  return ionFeatures(dataset).get(ion)?.nobleCore === false ? 'other' : 'noble-gas';
+}
+
+/** The distance between two ions of one sign (see {@link ION_DISTANCE}). */
+export function ionDistance(a: string, b: string, dataset: Dataset): number {
+  const f = ionFeatures(dataset);
+  const x = f.get(a);
+  const y = f.get(b);
+  if (!x || !y) return Infinity;
+  const dr = x.radius !== undefined && y.radius !== undefined ? ((x.radius - y.radius) / ION_DISTANCE.radiusScale) ** 2 : ION_DISTANCE.noRadius;
+  return dr + (x.charge !== y.charge ? ION_DISTANCE.charge : 0) + (x.kind !== y.kind ? ION_DISTANCE.kind : 0) + (x.charge > 0 && x.nobleCore !== y.nobleCore ? ION_DISTANCE.core : 0);
+}
+
+function byName(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+
+/** The anchor index of a dataset, built on first use. */
+export function anchorIndex(dataset: Dataset): AnchorIndex {
+  return dataset.memo('solution.anchorIndex', () => {
+    const formulas = new Set<string>();
+    for (const table of ['solution-enthalpies.json', 'compound-formation.json'] as const) for (const f of saltRecordIndex(table, dataset).keys()) if (f !== WATER) formulas.add(f);
+    const anchors: AnchorSalt[] = [];
+    for (const formula of [...formulas].sort(byName)) {
+      let salt: Salt;
+      try {
+        salt = parseSalt(formula, dataset);
+      } catch (e) {
+        if (isIonheatError(e)) continue;
+        throw e;
+      }
+      if (salt.water > 0) continue;
+      const ions = binaryIons(salt);
+      if (!ions) continue;
+      const known: Estimate | undefined = measuredSolutionEnthalpy(salt, dataset) ?? solutionEnthalpyFromCycle(salt, dataset);
+      if (!known) continue;
+      const lattice = anchorLattice(salt, dataset);
+      if (lattice.size === 0) continue;
+      anchors.push({
+        formula: salt.formula,
+        ...ions,
+        value: known.value,
+        u: known.u,
+        basis: known.basis === 'measured' ? 'measured' : 'cycle',
+        sources: known.sources,
+        structure: saltRecords('crystals.json', salt, dataset)[0]?.structure,
+        lattice,
+      });
+    }
+    const byIons = new Map<string, Map<string, AnchorSalt>>();
+    const inPool = { cation: new Set<string>(), anion: new Set<string>() };
+    for (const a of anchors) {
+      inPool.cation.add(a.cation);
+      inPool.anion.add(a.anion);
+      let row = byIons.get(a.cation);
+      if (!row) byIons.set(a.cation, (row = new Map()));
+      row.set(a.anion, a);
+    }
+    const neighbours = new Map<string, Neighbour[]>();
+    for (const ion of dataset.records('ions.json')) {
+      if (ion.charge === 0) continue;
+      const candidates = ion.charge > 0 ? inPool.cation : inPool.anion;
+      const list: Neighbour[] = [];
+      for (const other of candidates) {
+        if (other === ion.id) continue;
+        const distance = ionDistance(ion.id, other, dataset);
+        if (Number.isFinite(distance)) list.push({ ion: other, distance });
+      }
+      list.sort((a, b) => a.distance - b.distance || byName(a.ion, b.ion));
+      neighbours.set(ion.id, list);
+    }
+    return { anchors, byIons, neighbours };
+  });
+}

@@ -1,0 +1,109 @@
+// The anchored basis: four-salt differences with a lattice-model bracket.
+// Reference values: the CRC Handbook table 'Enthalpy of solution of
+// electrolytes' (after Parker 1965) and NBS formation enthalpies (Wagman et
+// al. 1982), as entered in data/.
+import { describe, expect, it } from 'vitest';
+import { builtinDataset } from '../../src/data/builtin.js';
+import { parseSalt } from '../../src/chem/parseSalt.js';
+import { anchoredSolutionEnthalpies, anchorSets, anchoredFloor } from '../../src/solution/anchoredSolution.js';
+import { anchorIndex } from '../../src/solution/anchorIndex.js';
+import { dissolve } from '../../src/solution/dissolve.js';
+
+const dataset = builtinDataset();
+const charge = new Map(dataset.records('ions.json').map((i) => [i.id, i.charge]));
+
+/** Ions of a salt as a vector, count per ion id. */
+function ionVector(formula: string, factor = 1, into = new Map<string, number>()): Map<string, number> {
+  for (const { ion, count } of parseSalt(formula).ions) into.set(ion, (into.get(ion) ?? 0) + factor * count);
+  return into;
+}
+
+describe('anchor sets', () => {
+  it.each(['KCl', 'CaCl2', 'Na2SO4', 'MgSO4', 'K2CO3', 'BaBr2'])('%s: α·MY + β·NX + γ·NY holds exactly the ions of the target, so hydration cancels', (formula) => {
+    const c = anchorSets(parseSalt(formula), 'kapustinskii');
+    expect(c, formula).toBeDefined();
+    for (const s of c!.sets) {
+      const v = ionVector(s.my.formula, s.alpha);
+      ionVector(s.nx.formula, s.beta, v);
+      ionVector(s.ny.formula, s.gamma, v);
+      const target = ionVector(formula);
+      for (const ion of new Set([...v.keys(), ...target.keys()])) expect(v.get(ion) ?? 0, `${formula} ${ion}`).toBeCloseTo(target.get(ion) ?? 0, 12);
+    }
+  });
+
+  it('mixes charge types where the ions require it (Na2SO4 from 2·NaClO4 + K2SO4 − 2·KClO4; BaCl2 from BaBr2 + 2·KCl − 2·KBr)', () => {
+    const na2so4 = anchorSets(parseSalt('Na2SO4'), 'kapustinskii')!;
+    expect(na2so4.sets.some((s) => charge.get(s.my.anion) === -1 && s.alpha === 2 && s.beta === 1 && s.gamma === -2)).toBe(true);
+    const bacl2 = anchorSets(parseSalt('BaCl2'), 'kapustinskii')!;
+    expect(bacl2.sets.some((s) => charge.get(s.nx.cation) === 1 && s.alpha === 1 && s.beta === 2 && s.gamma === -2)).toBe(true);
+  });
+
+  it('never uses the target itself as an anchor', () => {
+    for (const formula of ['NaCl', 'KNO3', 'CaCl2']) {
+      const c = anchorSets(parseSalt(formula), 'kapustinskii')!;
+      for (const s of c.sets) for (const a of [s.my, s.nx, s.ny]) expect(a.formula).not.toBe(formula);
+    }
+  });
+
+  it('indexes the pool by ion pair and keeps neighbours nearest first', () => {
+    const index = anchorIndex(dataset);
+    expect(index.byIons.get('Na[+]')?.get('Cl[-]')?.value).toBe(3.88); // CRC measured value wins over the cycle
+    const near = index.neighbours.get('K[+]')!;
+    expect(near[0]!.ion).toBe('Rb[+]'); // Shannon: K+ 1.38 Å, Rb+ 1.52 Å, the nearest alkali ion
+    for (let i = 1; i < near.length; i++) expect(near[i]!.distance).toBeGreaterThanOrEqual(near[i - 1]!.distance);
+  });
+});
+
+describe('anchored estimates, each salt with its own values hidden', () => {
+  const measured = dataset.records('solution-enthalpies.json').filter((r) => {
+    const s = parseSalt(r.formula);
+    return s.kind === 'ionic' && s.water === 0;
+  });
+  const results = measured.map((r) => ({ r, e: anchoredSolutionEnthalpies(parseSalt(r.formula), { excludeMeasured: true }) })).filter((x) => x.e.length > 0);
+
+  it('reach most measured salts', () => expect(results.length).toBeGreaterThan(60));
+
+  it('hold the CRC value in the 95 % interval of the most precise anchored estimate for at least 90 % of salts', () => {
+    const inside = results.filter(({ r, e }) => {
+      const best = [...e].sort((a, b) => a.u - b.u)[0]!;
+      return best.low <= r.value && r.value <= best.high;
+    });
+    expect(inside.length / results.length).toBeGreaterThanOrEqual(0.9);
+  });
+
+  it('are within 5 kJ/mol on average for the alkali halides (CRC)', () => {
+    const halides = results.filter(({ r }) => /^(Li|Na|K|Rb|Cs)(F|Cl|Br|I)$/.test(r.formula));
+    expect(halides.length).toBeGreaterThanOrEqual(15);
+    const mae = halides.reduce((s, { r, e }) => s + Math.abs([...e].sort((a, b) => a.u - b.u)[0]!.value - r.value), 0) / halides.length;
+    expect(mae).toBeLessThanOrEqual(5);
+  });
+
+  it('leave the salt’s own miss out of the floor under excludeMeasured', () => {
+    const group = { chargeType: '1:1', cationCore: 'noble-gas' } as const;
+    const all = anchoredFloor('kapustinskii', group);
+    const without = anchoredFloor('kapustinskii', group, { excludeFormula: 'KCl' });
+    expect(without.salts).toBe(all.salts - 1);
+    expect(anchoredFloor('kapustinskii', group, { excludeFormula: 'no such salt' }).salts).toBe(all.salts);
+  });
+});
+
+describe('dissolve with excludeMeasured: verdicts over the measured table', () => {
+  const cases = dataset.records('solution-enthalpies.json').map((r) => {
+    try {
+      return { r, d: dissolve(r.formula, { excludeMeasured: true }) };
+    } catch {
+      return { r, d: undefined };
+    }
+  });
+  it('never gives a wrong endothermic/exothermic verdict for more than 2 % of salts', () => {
+    const judged = cases.filter((c) => c.d);
+    const wrong = judged.filter(({ r, d }) => (d!.verdict === 'endothermic' && r.value < 0) || (d!.verdict === 'exothermic' && r.value > 0));
+    expect(judged.length).toBeGreaterThan(75);
+    expect(wrong.length / judged.length).toBeLessThanOrEqual(0.02);
+  });
+  it('holds the CRC value in the 95 % interval of best for at least 90 % of salts', () => {
+    const judged = cases.filter((c) => c.d);
+    const inside = judged.filter(({ r, d }) => d!.best.low <= r.value && r.value <= d!.best.high);
+    expect(inside.length / judged.length).toBeGreaterThanOrEqual(0.9);
+  });
+});
