@@ -18,6 +18,7 @@ import { IonheatError, isIonheatError } from '../error.js';
 import { dissolve, type DissolveResult } from '../solution/dissolve.js';
 import { packFinalTemperature, type PackResult } from '../pack/packFinalTemperature.js';
 import { parseFillSpec } from './parseFillSpec.js';
+import { ownMeasuredEstimate, withOwnMeasurement } from './ownMeasurement.js';
 import { readCandidate, type CandidateInput, type CandidateLike } from './candidate.js';
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
 import { costPerKJ } from './costPerKJ.js';
@@ -197,10 +198,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
    * never change; each distinct set of values gets its own merged dataset.
    */
   const rowDataset = (input: CandidateInput, salt: Salt): Dataset => {
-    const source = input.source ?? 'screenInput';
-    if (!dataset.source(source) && !Object.hasOwn(sources, source)) {
-      throw new IonheatError('INVALID_ARGUMENT', `source: "${source}" is neither a source of the ${dataset.label} tables nor one given with the screen (${Object.keys(sources).join(', ')})`, { field: 'source', text: source });
-    }
+    const { source } = sourceOf(input);
     const key = JSON.stringify([salt.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, source]);
     const cached = datasets.get(key);
     if (cached) return cached;
@@ -234,6 +232,33 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
     return merged;
   };
 
+  /** The source of a row's own values, checked: a key of the dataset's sources or of the screen's. */
+  const sourceOf = (input: CandidateInput): { source: string; citation?: SourceEntry } => {
+    const source = input.source ?? 'screenInput';
+    if (dataset.source(source)) return { source };
+    if (Object.hasOwn(sources, source)) return { source, citation: sources[source]! };
+    throw new IonheatError('INVALID_ARGUMENT', `source: "${source}" is neither a source of the ${dataset.label} tables nor one given with the screen (${Object.keys(sources).join(', ')})`, { field: 'source', text: source });
+  };
+
+  /**
+   * dissolve with the row's own measured enthalpy: the cheap path of
+   * ownMeasurement.ts where the tables alone can already estimate the salt,
+   * else (a salt the tables cannot speak for) a merged dataset.
+   */
+  const dissolveOwn = (input: CandidateInput, salt: Salt): DissolveResult => {
+    const { source, citation } = sourceOf(input);
+    const existing = saltRecords('solution-enthalpies.json', salt, dataset)[0];
+    const measured = ownMeasuredEstimate(salt, existing?.formula ?? salt.formula, { value: input.measuredEnthalpy!, u: input.measuredUncertainty, source, ...(citation ? { citation } : {}) }, dataset);
+    let base: DissolveResult | undefined;
+    try {
+      base = dissolve(salt, { excludeMeasured }, dataset);
+    } catch (e) {
+      if (!isIonheatError(e) || excludeMeasured) throw e;
+    }
+    if (excludeMeasured) return base!;
+    return base ? withOwnMeasurement(base, measured, dataset) : dissolve(salt, {}, rowDataset(input, salt));
+  };
+
   const compute = (input: CandidateInput, given: Salt | undefined): Computed => {
     const own = input.measuredEnthalpy !== undefined || input.solubility !== undefined;
     const key = given ? `salt\u0000${given.formula}` : own ? JSON.stringify([input.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, input.source]) : input.formula;
@@ -243,9 +268,12 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
     let salt: Salt | undefined = given;
     try {
       salt ??= parseSalt(input.formula, dataset);
-      const data = own ? rowDataset(input, salt) : dataset;
-      const result = dissolve(salt, { excludeMeasured }, data);
-      const pack = fill ? packFinalTemperature({ solids: [{ formula: salt.formula, massG: fill.saltMassG }], waterG: fill.waterMassG, startC: fill.startC }, {}, data) : undefined;
+      // A fill, or a solubility, needs the row's values in a merged dataset (the pack model reads the tables);
+      // a measured value alone takes the cheap path.
+      const merged = own && (fill !== null || input.solubility !== undefined) ? rowDataset(input, salt) : undefined;
+      if (input.source !== undefined || own) sourceOf(input);
+      const result = merged ? dissolve(salt, { excludeMeasured }, merged) : input.measuredEnthalpy !== undefined ? dissolveOwn(input, salt) : dissolve(salt, { excludeMeasured }, dataset);
+      const pack = fill ? packFinalTemperature({ solids: [{ formula: salt.formula, massG: fill.saltMassG }], waterG: fill.waterMassG, startC: fill.startC }, {}, merged ?? dataset) : undefined;
       computed = deepFreeze({ ok: true, salt, result, pack, hazards: hazardSummary(salt, dataset), ownValues: own });
     } catch (e) {
       if (!isIonheatError(e)) throw e;
