@@ -94,7 +94,7 @@ const DATASET_CACHE_LIMIT = 32;
 const DUPLICATE_LIMIT = 1_000_000;
 
 type Computed =
-  | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; hazards: HazardSummary; ownValues: boolean }
+  | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; hazards: HazardSummary }
   | { ok: false; salt?: Salt; error: IonheatError };
 
 /** A fill as given, checked: positive masses, a start where water is liquid. */
@@ -265,7 +265,8 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
     const cached = results.get(key);
     if (cached) return cached;
     let computed: Computed;
-    let salt: Salt | undefined = given;
+    // A salt given by the caller is copied: the results kept here are frozen, and the caller's object stays theirs.
+    let salt: Salt | undefined = given ? structuredClone(given) : undefined;
     try {
       salt ??= parseSalt(input.formula, dataset);
       // A fill, or a solubility, needs the row's values in a merged dataset (the pack model reads the tables);
@@ -274,7 +275,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       if (input.source !== undefined || own) sourceOf(input);
       const result = merged ? dissolve(salt, { excludeMeasured }, merged) : input.measuredEnthalpy !== undefined ? dissolveOwn(input, salt) : dissolve(salt, { excludeMeasured }, dataset);
       const pack = fill ? packFinalTemperature({ solids: [{ formula: salt.formula, massG: fill.saltMassG }], waterG: fill.waterMassG, startC: fill.startC }, {}, merged ?? dataset) : undefined;
-      computed = deepFreeze({ ok: true, salt, result, pack, hazards: hazardSummary(salt, dataset), ownValues: own });
+      computed = deepFreeze({ ok: true, salt, result, pack, hazards: hazardSummary(salt, dataset) });
     } catch (e) {
       if (!isIonheatError(e)) throw e;
       computed = { ok: false, ...(salt ? { salt } : {}), error: e };
