@@ -7,8 +7,7 @@
  * @module
  */
 import type { Basis, Estimate } from '../quantity/estimate.js';
-import { roundEstimate } from '../quantity/estimate.js';
-import { roundToUncertainty } from '../quantity/rounding.js';
+import { formatEstimate } from '../quantity/formatEstimate.js';
 import type { Direction, ObjectiveName, ScreenRow, Suitability } from '../screen/screenRow.js';
 import { el, linearScale, niceTicks, num, svgDocument, text, theme, tickLabel } from './svg.js';
 
@@ -89,13 +88,8 @@ function marker(basis: Basis, x: number, y: number, r: number, fill: string, str
 
 /** `34.89 [34.50, 35.28]`, rounded to the uncertainty (two significant digits of u). */
 function valueText(e: Estimate): string {
-  const r = roundEstimate(e);
-  const decimals = e.u > 0 ? Math.min(6, Math.max(0, -roundToUncertainty(e.value, e.u).exponent)) : 2;
-  const f = (x: number) => {
-    const s = x.toFixed(decimals);
-    return s.startsWith('-') ? `−${s.slice(1)}` : s;
-  };
-  return `${f(r.value)}  [${f(r.low)}, ${f(r.high)}]`;
+  const f = formatEstimate(e);
+  return `${f.value}  [${f.low}, ${f.high}]`;
 }
 
 /** Rough width of a text in pixels at a font size (system sans-serif). */
@@ -117,7 +111,9 @@ function textWidth(s: string, size: number): number {
  * square cycle, diamond anchored, triangle model; legend at the top), and the
  * numbers at the right. A vertical line marks zero, and any `marks` given.
  * The axis is drawn at the top and the bottom, so eighty rows read as well
- * as ten.
+ * as ten; with more than ten rows it spans every value but leaves out the
+ * widest tenth of the interval ends at each side (such a bar ends in an
+ * arrow), so that one wild interval cannot squeeze all the others.
  *
  * @param result - the result of {@link screen} (or its settings with some of its rows); enthalpies in kJ/mol,
  *   heats per gram in J/g, temperatures in °C, as the objective gives them
@@ -153,17 +149,25 @@ export function intervalChart(result: ChartableScreen, options: IntervalChartOpt
   const rowH = n <= 15 ? 26 : n <= 40 ? 20 : 16;
   const font = n <= 40 ? 12 : 11;
   const markerR = rowH <= 16 ? 4 : 5;
-  const labels = shown.map((r) => displayFormula(r.formula ?? r.input.formula));
-  const labelW = Math.min(220, Math.max(90, ...labels.map((l) => textWidth(l, font) + 40)));
-  const values = shown.map((r) => valueText(r.objective!));
-  const valueW = Math.max(120, ...values.map((v) => textWidth(v, font) + 16));
+  const labels = shown.map((r) => `${r.rank !== undefined ? `${r.rank}. ` : ''}${displayFormula(r.formula ?? r.input.formula)}`);
+  const labelW = Math.min(260, Math.max(90, ...labels.map((l) => textWidth(l, font) + 24)));
+  const valueTexts = shown.map((r) => valueText(r.objective!));
+  const valueW = Math.max(120, ...valueTexts.map((v) => textWidth(v, font) + 16));
   const left = labelW;
   const right = width - valueW - 16;
 
   // Domain: every interval, zero and every mark.
   const marks = [...(options.marks ?? [])].filter((m) => Number.isFinite(m.at));
-  const xs = [0, ...shown.flatMap((r) => [r.objective!.low, r.objective!.high]), ...marks.map((m) => m.at)];
-  const { ticks, domain } = niceTicks(Math.min(...xs), Math.max(...xs), width > 800 ? 8 : 6);
+  // Domain: every value, zero and every mark, and the interval ends but for the widest few (with more than ten rows,
+  // the lowest and highest tenth of the ends are left out): a bar that runs past the axis ends in an arrow, and its
+  // numbers stand at the right. One wild interval would otherwise squeeze every other row into a few pixels.
+  const values = [0, ...shown.map((r) => r.objective!.value), ...marks.map((m) => m.at)];
+  const lows = shown.map((r) => r.objective!.low).sort((a, b) => a - b);
+  const highs = shown.map((r) => r.objective!.high).sort((a, b) => a - b);
+  const cut = n > 10 ? Math.floor(n / 10) : 0;
+  const lo = Math.min(...values, ...(lows.length > 0 ? [lows[cut]!] : []));
+  const hi = Math.max(...values, ...(highs.length > 0 ? [highs[highs.length - 1 - cut]!] : []));
+  const { ticks, domain } = niceTicks(lo, hi, width > 800 ? 8 : 6);
   const x = linearScale(domain, [left, right]);
 
   const title = options.title ?? `${OBJECTIVE_TITLE[objective]} — candidates ranked for ${direction === 'cool' ? 'a cold pack' : 'a hot pack'}`;
@@ -220,15 +224,18 @@ export function intervalChart(result: ChartableScreen, options: IntervalChartOpt
       if (group === 'undetermined') shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: '#fdf3d7' }));
       else if (index % 2 === 1) shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: '#f5f7fa' }));
       const colour = group === 'suitable' ? (cool ? theme.cool : theme.heat) : group === 'undetermined' ? '#b7791f' : theme.neutral;
-      const rank = r.rank !== undefined ? `${r.rank}. ` : '';
-      body.push(text(left - 10, cy + font * 0.36, `${rank}${labels[i]}`, { 'text-anchor': 'end', 'font-size': font, ...(group === 'unsuitable' ? { class: 'muted' } : {}), ...(group === 'undetermined' ? { 'font-style': 'italic' } : {}) }));
+      body.push(text(left - 10, cy + font * 0.36, labels[i]!, { 'text-anchor': 'end', 'font-size': font, ...(group === 'unsuitable' ? { class: 'muted' } : {}), ...(group === 'undetermined' ? { 'font-style': 'italic' } : {}) }));
       const x0 = Math.max(left, Math.min(right, x(e.low)));
       const x1 = Math.max(left, Math.min(right, x(e.high)));
       body.push(el('line', { x1: x0, y1: cy, x2: Math.max(x1, x0 + 1), y2: cy, stroke: colour, 'stroke-width': rowH <= 16 ? 3 : 4, 'stroke-linecap': 'butt', ...(group === 'undetermined' ? { 'stroke-dasharray': '5 3' } : {}), ...(group === 'unsuitable' ? { opacity: 0.6 } : {}) }));
-      for (const end of [x0, x1]) body.push(el('line', { x1: end, y1: cy - rowH * 0.25, x2: end, y2: cy + rowH * 0.25, stroke: colour, 'stroke-width': 1.2 }));
+      const h = rowH * 0.25;
+      for (const [end, clipped, dir] of [[x0, x(e.low) < left, -1], [x1, x(e.high) > right, 1]] as const) {
+        if (clipped) body.push(el('path', { d: `M${num(end)} ${num(cy)}L${num(end - dir * 8)} ${num(cy - h - 1)}L${num(end - dir * 8)} ${num(cy + h + 1)}Z`, fill: colour }));
+        else body.push(el('line', { x1: end, y1: cy - h, x2: end, y2: cy + h, stroke: colour, 'stroke-width': 1.2 }));
+      }
       const hollow = group === 'undetermined';
       body.push(marker(e.basis, Math.max(left, Math.min(right, x(e.value))), cy, markerR, hollow ? '#ffffff' : colour, group === 'suitable' ? theme.ink : colour));
-      body.push(text(right + 12, cy + font * 0.36, values[i]!, { 'font-size': font, class: group === 'unsuitable' ? 'muted' : '' }));
+      body.push(text(right + 12, cy + font * 0.36, valueTexts[i]!, { 'font-size': font, class: group === 'unsuitable' ? 'muted' : '' }));
       rowY += rowH;
       index++;
     }
@@ -266,6 +273,10 @@ export function intervalChart(result: ChartableScreen, options: IntervalChartOpt
   if (excluded > 0) missing.push(`${excluded} left out by filters`);
   if (noObjective > 0) missing.push(`${noObjective} without ${objective === 'cost-per-kj' ? 'a price' : 'a value to rank by'}`);
   footY += 22;
+  if (shown.some((r) => x(r.objective!.low) < left || x(r.objective!.high) > right)) {
+    footer.push(text(16, footY, 'An arrow at the end of a bar marks an interval that runs past the axis; the numbers at the right give it whole.', { class: 'small muted' }));
+    footY += 16;
+  }
   footer.push(text(16, footY, `${n} of ${total} candidate${total === 1 ? '' : 's'} drawn${missing.length > 0 ? `; ${missing.join(', ')}` : ''}.`, { class: 'small muted' }));
   footY += 16;
   footer.push(text(16, footY, 'Screening estimates: confirm by measurement, and defer to local codes, product-safety regulation and licensed practice.', { class: 'small muted' }));

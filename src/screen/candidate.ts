@@ -71,6 +71,28 @@ function decimalCell(text: string): number | undefined {
   return Number.isFinite(n) ? n : undefined;
 }
 
+const knownFields = new Set<string>(candidateFields);
+const finiteNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
+
+/**
+ * The common case checked by hand, for speed on long inputs: every field
+ * known and of the right kind and range, exactly as {@link candidateInputSchema}
+ * requires. Anything else goes through the schema, which says what is wrong
+ * (a test holds the two to the same verdicts).
+ */
+function plainlyValid(fields: Record<string, unknown>): boolean {
+  for (const key in fields) if (!knownFields.has(key)) return false;
+  const { formula, measuredEnthalpy, measuredUncertainty, solubility, pricePerKg, source, note } = fields;
+  if (typeof formula !== 'string' || formula.length > 200) return false;
+  if (measuredEnthalpy !== undefined && !finiteNumber(measuredEnthalpy)) return false;
+  if (measuredUncertainty !== undefined && !(finiteNumber(measuredUncertainty) && measuredUncertainty >= 0 && measuredEnthalpy !== undefined)) return false;
+  if (solubility !== undefined && !(finiteNumber(solubility) && solubility > 0)) return false;
+  if (pricePerKg !== undefined && !(finiteNumber(pricePerKg) && pricePerKg >= 0)) return false;
+  if (source !== undefined && !(typeof source === 'string' && source.length >= 1 && source.length <= 80)) return false;
+  if (note !== undefined && !(typeof note === 'string' && note.length <= 2000)) return false;
+  return true;
+}
+
 function isSalt(x: object): x is Salt {
   return 'ions' in x && 'molarMass' in x && 'anhydrous' in x && typeof (x as Salt).formula === 'string';
 }
@@ -97,6 +119,7 @@ export function readCandidate(raw: CandidateLike): { input: CandidateInput; salt
       fields[key] = n;
     } else fields[key] = typeof value === 'string' && key !== 'note' ? value.trim() : value;
   }
+  if (plainlyValid(fields)) return { input: fields as CandidateInput };
   const parsed = candidateInputSchema.safeParse(fields);
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;

@@ -12,6 +12,7 @@ import { specError } from './specTokenize.js';
 import { parseSpec, type SpecNode } from './specParse.js';
 import { SpecFields, type SpecType } from './specFields.js';
 import type { SpecOutcome } from './screenRow.js';
+import { screenSpecSchema } from './screenOutputJsonSchema.js';
 
 /** A checked specification, ready to test rows. */
 export interface CompiledSpec {
@@ -25,8 +26,8 @@ export interface CompiledSpec {
 
 /** Options of {@link compileSpec}. */
 export interface CompileSpecOptions {
-  /** The JSON Schema whose fields the expression may read (default: none, every field is read unchecked). */
-  schema?: object;
+  /** The JSON Schema whose fields the expression may read (default: the screen's output rows; `null` reads every field unchecked). */
+  schema?: object | null;
   /** Top-level fields that will not be there, with the reason (`fill`: no standard fill was given). */
   unavailable?: Readonly<Record<string, string>>;
 }
@@ -67,9 +68,10 @@ const typeName = (t: SpecType): string =>
  * `and` and `or` stop as soon as the answer is known, so
  * `not has(costPerKJ) or costPerKJ.high < 0.02` reads the cost only where there is one.
  *
- * With a `schema`, every field path is looked up before any row is read: a
- * misspelt field, a comparison of a text with a number, or a text that a
- * field can never take is an error with its column. A field that a row lacks
+ * Every field path is looked up in the schema of the output rows (or the
+ * `schema` given) before any row is read: a misspelt field, a comparison of
+ * a text with a number, or a text that a field can never take is an error
+ * with its column. A field that a row lacks
  * makes the specification fail for that row, with the reason.
  *
  * @param text - the expression, at most 1000 characters, nested at most 32 deep
@@ -88,7 +90,8 @@ const typeName = (t: SpecType): string =>
  */
 export function compileSpec(text: string, options: CompileSpecOptions = {}): CompiledSpec {
   const tree = parseSpec(text);
-  const fields = options.schema ? new SpecFields(options.schema) : undefined;
+  const schema = options.schema === undefined ? screenSpecSchema() : options.schema;
+  const fields = schema ? new SpecFields(schema) : undefined;
   const paths = new Set<string>();
   const src = (n: SpecNode): string => text.slice(n.start, n.end).trim();
 

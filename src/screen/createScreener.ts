@@ -18,6 +18,7 @@ import { IonheatError, isIonheatError } from '../error.js';
 import { dissolve, type DissolveResult } from '../solution/dissolve.js';
 import { packFinalTemperature, type PackResult } from '../pack/packFinalTemperature.js';
 import { parseFillSpec } from './parseFillSpec.js';
+import { ownMeasuredEstimate, withOwnMeasurement } from './ownMeasurement.js';
 import { readCandidate, type CandidateInput, type CandidateLike } from './candidate.js';
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
 import { costPerKJ } from './costPerKJ.js';
@@ -93,7 +94,7 @@ const DATASET_CACHE_LIMIT = 32;
 const DUPLICATE_LIMIT = 1_000_000;
 
 type Computed =
-  | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; hazards: HazardSummary; ownValues: boolean }
+  | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; hazards: HazardSummary }
   | { ok: false; salt?: Salt; error: IonheatError };
 
 /** A fill as given, checked: positive masses, a start where water is liquid. */
@@ -110,7 +111,10 @@ function checkFill(fill: FillSpec | string): FillSpec {
 
 /** The candidate's fields as one text, in a fixed order. */
 function candidateKey(input: CandidateInput): string {
-  return `${input.formula}\u0000${input.measuredEnthalpy ?? ''}\u0000${input.measuredUncertainty ?? ''}\u0000${input.solubility ?? ''}\u0000${input.pricePerKg ?? ''}\u0000${input.source ?? ''}\u0000${input.note ?? ''}`;
+  // Numbers through JSON.stringify: the same digits as String(), without V8's number-to-string cache,
+  // which would keep a string per row alive for a while on long screens.
+  const n = (x: number | undefined) => (x === undefined ? '' : JSON.stringify(x));
+  return `${input.formula}\u0000${n(input.measuredEnthalpy)}\u0000${n(input.measuredUncertainty)}\u0000${n(input.solubility)}\u0000${n(input.pricePerKg)}\u0000${input.source ?? ''}\u0000${input.note ?? ''}`;
 }
 
 function deepFreeze<T>(value: T): T {
@@ -203,10 +207,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
    * never change; each distinct set of values gets its own merged dataset.
    */
   const rowDataset = (input: CandidateInput, salt: Salt): Dataset => {
-    const source = input.source ?? 'screenInput';
-    if (!dataset.source(source) && !Object.hasOwn(sources, source)) {
-      throw new IonheatError('INVALID_ARGUMENT', `source: "${source}" is neither a source of the ${dataset.label} tables nor one given with the screen (${Object.keys(sources).join(', ')})`, { field: 'source', text: source });
-    }
+    const { source } = sourceOf(input);
     const key = JSON.stringify([salt.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, source]);
     const cached = datasets.get(key);
     if (cached) return cached;
@@ -240,19 +241,50 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
     return merged;
   };
 
+  /** The source of a row's own values, checked: a key of the dataset's sources or of the screen's. */
+  const sourceOf = (input: CandidateInput): { source: string; citation?: SourceEntry } => {
+    const source = input.source ?? 'screenInput';
+    if (dataset.source(source)) return { source };
+    if (Object.hasOwn(sources, source)) return { source, citation: sources[source]! };
+    throw new IonheatError('INVALID_ARGUMENT', `source: "${source}" is neither a source of the ${dataset.label} tables nor one given with the screen (${Object.keys(sources).join(', ')})`, { field: 'source', text: source });
+  };
+
+  /**
+   * dissolve with the row's own measured enthalpy: the cheap path of
+   * ownMeasurement.ts where the tables alone can already estimate the salt,
+   * else (a salt the tables cannot speak for) a merged dataset.
+   */
+  const dissolveOwn = (input: CandidateInput, salt: Salt): DissolveResult => {
+    const { source, citation } = sourceOf(input);
+    const existing = saltRecords('solution-enthalpies.json', salt, dataset)[0];
+    const measured = ownMeasuredEstimate(salt, existing?.formula ?? salt.formula, { value: input.measuredEnthalpy!, u: input.measuredUncertainty, source, ...(citation ? { citation } : {}) }, dataset);
+    let base: DissolveResult | undefined;
+    try {
+      base = dissolve(salt, { excludeMeasured }, dataset);
+    } catch (e) {
+      if (!isIonheatError(e) || excludeMeasured) throw e;
+    }
+    if (excludeMeasured) return base!;
+    return base ? withOwnMeasurement(base, measured, dataset) : dissolve(salt, {}, rowDataset(input, salt));
+  };
+
   const compute = (input: CandidateInput, given: Salt | undefined): Computed => {
     const own = input.measuredEnthalpy !== undefined || input.solubility !== undefined;
     const key = given ? `salt\u0000${given.formula}` : own ? JSON.stringify([input.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, input.source]) : input.formula;
     const cached = results.get(key);
     if (cached) return cached;
     let computed: Computed;
-    let salt: Salt | undefined = given;
+    // A salt given by the caller is copied: the results kept here are frozen, and the caller's object stays theirs.
+    let salt: Salt | undefined = given ? structuredClone(given) : undefined;
     try {
       salt ??= parseSalt(input.formula, dataset);
-      const data = own ? rowDataset(input, salt) : dataset;
-      const result = dissolve(salt, { excludeMeasured }, data);
-      const pack = fill ? packFinalTemperature({ solids: [{ formula: salt.formula, massG: fill.saltMassG }], waterG: fill.waterMassG, startC: fill.startC }, {}, data) : undefined;
-      computed = deepFreeze({ ok: true, salt, result, pack, hazards: hazardSummary(salt, dataset), ownValues: own });
+      // A fill, or a solubility, needs the row's values in a merged dataset (the pack model reads the tables);
+      // a measured value alone takes the cheap path.
+      const merged = own && (fill !== null || input.solubility !== undefined) ? rowDataset(input, salt) : undefined;
+      if (input.source !== undefined || own) sourceOf(input);
+      const result = merged ? dissolve(salt, { excludeMeasured }, merged) : input.measuredEnthalpy !== undefined ? dissolveOwn(input, salt) : dissolve(salt, { excludeMeasured }, dataset);
+      const pack = fill ? packFinalTemperature({ solids: [{ formula: salt.formula, massG: fill.saltMassG }], waterG: fill.waterMassG, startC: fill.startC }, {}, merged ?? dataset) : undefined;
+      computed = deepFreeze({ ok: true, salt, result, pack, hazards: hazardSummary(salt, dataset) });
     } catch (e) {
       if (!isIonheatError(e)) throw e;
       computed = { ok: false, ...(salt ? { salt } : {}), error: e };
@@ -321,7 +353,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       if (excludedBy !== undefined) {
         return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements });
       }
-      const notes = [...result.notes];
+      const notes: string[] = [];
       if (input.measuredEnthalpy !== undefined) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
       if (input.solubility !== undefined) notes.push(`solubility ${input.solubility} g/100 g H2O from the screening input (source ${input.source ?? 'screenInput'}), taken as the same at every temperature${fill ? '' : '; it matters only to a fill'}`);
       if (pack && excludeMeasured) notes.push('the standard fill uses the enthalpy of solution the pack model finds, measured values included: excludeMeasured hides them from dissolve only');
@@ -337,7 +369,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         input,
         ...duplicate,
         ...result,
-        notes,
+        notes: notes.length > 0 ? [...result.notes, ...notes] : result.notes,
         hazards: hazards.classes,
         cautions: hazards.statements,
         ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),

@@ -36,7 +36,9 @@ export interface ScreenResult {
  * candidate is merged over the tables for that candidate only
  * ({@link Dataset.withOverrides}); the tables themselves never change.
  *
- * For inputs too large to hold, use {@link screenStream}.
+ * Rows are plain JSON-serialisable objects. Candidates with the same
+ * formula share their results, which are frozen: copy a row's parts before
+ * changing them. For inputs too large to hold, use {@link screenStream}.
  *
  * @param candidates - formulas, salts or candidate rows (enthalpies in kJ/mol, solubility in g per 100 g water)
  * @param options - objective, direction, spec, filters, excludeMeasured, extra sources, standard fill (g, g, °C)

@@ -86,7 +86,12 @@ export const screenRowSchema = z
     estimates: z.array(estimateSchema).optional().describe('every estimate of the enthalpy of solution, most trusted basis first'),
     verdict: z.enum(['endothermic', 'exothermic', 'undetermined']).optional(),
     probabilityEndothermic: z.number().min(0).max(1).optional(),
-    perGram: z.looseObject({ salt: estimateSchema }).optional().describe('heat absorbed per gram, J/g, positive = cools'),
+    perGram: z
+      .looseObject({ salt: estimateSchema, saturatedFill: estimateSchema.optional() })
+      .optional()
+      .describe('heat absorbed per gram of salt, and of a fill saturated at 25 °C where solubility data exist, J/g, positive = cools'),
+    hydration: z.looseObject({ absolute: estimateSchema.optional(), conventional: estimateSchema.optional() }).optional().describe('hydration enthalpy of the ions, Σν·ΔhydH°, kJ/mol, on both scales'),
+    temperature: z.looseObject({ celsius: z.number(), heatCapacityOfSolution: estimateSchema.optional() }).optional().describe('the temperature the values refer to, °C, and ΔsolCp° where tabulated'),
     notes: z.array(z.string()).optional(),
     hazards: z.array(hazardClassSchema).optional().describe('hazard classes of the salt and its ions from the hazards table'),
     cautions: z.array(z.string()).optional().describe('the hazards table statements for the salt and its ions'),

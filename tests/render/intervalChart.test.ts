@@ -65,6 +65,20 @@ describe('intervalChart', () => {
     expect(svg).toContain('Temperature the standard fill reaches (°C)');
   });
 
+  it('keeps one wild interval from squeezing the others: its bar runs past the axis and ends in an arrow', () => {
+    const rows = [
+      ...['KNO3', 'NH4Cl', 'NaCl', 'KCl', 'NH4NO3', 'CO(NH2)2', 'NaCH3COO·3H2O', 'CsCl', 'RbCl', 'KBr', 'NaBr', 'KI'],
+      { formula: 'LiF', measuredEnthalpy: 5, measuredUncertainty: 300 },
+    ];
+    const svg = intervalChart(screen(rows));
+    expect(svg).toContain('An arrow at the end of a bar marks an interval that runs past the axis');
+    // The axis spans the values, not ±600 kJ/mol.
+    const ticks = [...svg.matchAll(/class="small muted" text-anchor="middle">([−\d.]+)</g)].map((m) => Number(m[1]!.replace('−', '-')));
+    expect(Math.min(...ticks)).toBeGreaterThan(-100);
+    expect(Math.max(...ticks)).toBeLessThan(100);
+    expect(svg).toContain('10  [−580, 590]'); // 5 ± 588, rounded to the tens that u = 300 allows
+  });
+
   it('escapes every text it draws', () => {
     const svg = intervalChart(ten, { title: 'a <b> & "c"' });
     expect(svg).toContain('a &lt;b&gt; &amp; &quot;c&quot;');

@@ -161,6 +161,9 @@ describe('screen', () => {
     const { rows } = screen(salts);
     expect(rows.map((r) => r.input.formula)).toEqual(salts.map((s) => s.formula));
     for (const r of rows) expect(screenRowSchema.safeParse(JSON.parse(JSON.stringify(r))).success, r.input.formula).toBe(true);
+    // The caller's salts are not frozen by the screen (its own copies are).
+    expect(Object.isFrozen(salts[0])).toBe(false);
+    expect(Object.isFrozen(rows[0]!.best)).toBe(true);
   });
 
   it('gives the same rows whatever the order of the input (ranks aside from line ties)', () => {

@@ -80,7 +80,7 @@ describe('spec language: what expressions give', () => {
   });
 
   it('fails a row, with the reason, when a field the schema leaves open holds the wrong type', () => {
-    const loose = compileSpec('fill.finalTemperature.high <= 5');
+    const loose = compileSpec('fill.finalTemperature.high <= 5', { schema: null });
     expect(loose.test({ fill: { finalTemperature: { high: 'cold' } } })).toEqual({ holds: false, reason: 'fill.finalTemperature.high is "cold", not a number' });
     expect(loose.test({ fill: { finalTemperature: { high: 4.2 } } }).holds).toBe(true);
   });
@@ -182,8 +182,10 @@ describe('spec language: malformed expressions get a clear error, never an evalu
       expect(() => compileSpec(text, { schema }), text).toThrow(/spec, column/);
     }
     // Without a schema, unknown fields are read from the row as data only.
-    expect(compileSpec('constructor == "x"').test({}).reason).toBe('constructor is absent for this row');
-    expect(compileSpec('__proto__ == "x"').test({}).reason).toBe('__proto__ is absent for this row');
+    expect(compileSpec('constructor == "x"', { schema: null }).test({}).reason).toBe('constructor is absent for this row');
+    expect(compileSpec('__proto__ == "x"', { schema: null }).test({}).reason).toBe('__proto__ is absent for this row');
+    // With the default schema (the output rows), they are refused outright.
+    expect(() => compileSpec('constructor == "x"')).toThrow(/a row has no field "constructor"/);
   });
 
   it('the language code uses no eval and no Function constructor', () => {

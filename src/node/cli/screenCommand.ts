@@ -98,12 +98,12 @@ export const screenCommand: Command = {
     const { settings } = screener;
 
     // Where the candidates come from.
-    let records: AsyncIterable<InputRecord> | Iterable<InputRecord>;
+    let records: AsyncIterable<InputRecord[]> | Iterable<InputRecord[]>;
     let progressOf: () => { bytes: number; total?: number } = () => ({ bytes: 0 });
     let inputColumns: () => readonly string[] | undefined = () => ['formula'];
     if (path === undefined) {
       const salts = enumerate({}, dataset);
-      records = salts.map((salt, i) => ({ kind: 'candidate' as const, line: i + 1, candidate: salt }));
+      records = [salts.map((salt, i): InputRecord => ({ kind: 'candidate', line: i + 1, candidate: salt }))];
       progressOf = () => ({ bytes: 0, total: salts.length });
     } else {
       const stdin = path === '-' ? (io.stdinStream ? (io.stdinStream() as Readable) : Readable.from([await io.readStdin()])) : Readable.from([]);
@@ -141,7 +141,7 @@ export const screenCommand: Command = {
 
     let count = 0;
     try {
-      for await (const record of records as AsyncIterable<InputRecord>) {
+      for await (const batch of records as AsyncIterable<InputRecord[]>) for (const record of batch) {
         if (record.kind === 'blank') {
           screener.blankLine();
           continue;

@@ -5,11 +5,13 @@
 import { benchDissolve } from './benchDissolve.js';
 import { benchPack } from './benchPack.js';
 import { benchLattice } from './benchLattice.js';
+import { benchScreen } from './benchScreen.js';
 
 const sections: { name: string; run: () => string[] }[] = [
   { name: 'dissolve', run: benchDissolve },
   { name: 'pack', run: benchPack },
   { name: 'lattice', run: benchLattice },
+  { name: 'screen', run: benchScreen },
 ];
 
 for (const section of sections) {

@@ -1,7 +1,9 @@
 /**
  * Writes the JSON Schema of the screen output, generated from the zod
- * schemas, to docs/schema/screen-output.schema.json (shipped in the
- * package). Run with `npm run schema`; a test fails when the file is stale.
+ * schemas, to docs/schema/screen-output.schema.json; the build copies it
+ * into dist/ (tsup publicDir), and the package exports it as
+ * `ionheat/screen-output.schema.json`. Run with `npm run schema`; a test
+ * fails when the file is stale.
  */
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';

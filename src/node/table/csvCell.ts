@@ -1,13 +1,27 @@
 /**
- * A value as a CSV cell: numbers stay numbers (finite ones), true/false are
- * written as words, an absent value is an empty cell. Formula injection is
- * neutralised by the CSV writer itself (csv-stringify's `escape_formulas`:
- * a text cell starting with `=`, `+`, `-`, `@`, a tab, a carriage return or
- * their full-width forms gets a leading apostrophe; a negative number does not).
+ * Values as CSV cells that a spreadsheet will not run as formulas.
+ *
+ * @module
  */
-export function csvCell(value: string | number | boolean | undefined): string | number {
+
+/** First characters that make a spreadsheet read a cell as a formula (and their full-width forms). */
+const TRIGGERS = new Set(['=', '+', '-', '@', '\t', '\r', '＝', '＋', '－', '＠']);
+
+/**
+ * A value as a CSV cell. Numbers stay numbers: a finite number is written in
+ * full, the shortest text that reads back as the same number (`-37.03`), and
+ * is never altered. A text that starts with `=`, `+`, `-`, `@`, a tab, a
+ * carriage return or their full-width forms gets a leading apostrophe, which
+ * spreadsheets show as text and never evaluate. true/false are written as
+ * words; an absent value is an empty cell.
+ *
+ * (Numbers are written with JSON.stringify, which gives the same digits as
+ * String() but does not go through V8's number-to-string cache; on long
+ * screens that cache kept every written number alive for a while.)
+ */
+export function csvCell(value: string | number | boolean | undefined): string {
   if (value === undefined) return '';
-  if (typeof value === 'number') return Number.isFinite(value) ? value : '';
+  if (typeof value === 'number') return Number.isFinite(value) ? JSON.stringify(value) : '';
   if (typeof value === 'boolean') return value ? 'true' : 'false';
-  return value;
+  return value.length > 0 && TRIGGERS.has(value[0]!) ? `'${value}` : value;
 }

@@ -7,7 +7,7 @@
  */
 import { createReadStream, statSync } from 'node:fs';
 import { PassThrough, type Readable } from 'node:stream';
-import { parse } from 'csv-parse';
+import { parse, type Options } from 'csv-parse';
 import { IonheatError } from '../../error.js';
 import { candidateFields, type CandidateLike } from '../../screen/candidate.js';
 import { parseJsonStrict } from '../strictJson.js';
@@ -24,8 +24,8 @@ export interface CandidateSource {
   label: string;
   /** `csv` or `json`: by the file's extension, or for standard input by its first character. */
   format: 'csv' | 'json';
-  /** The records, in input order. */
-  records: AsyncIterable<InputRecord>;
+  /** The records, in input order, a batch at a time (what the parser has ready). */
+  records: AsyncIterable<InputRecord[]>;
   /** Bytes of input read so far, and in all when known (for a progress bar). */
   progress(): { bytes: number; total?: number };
   /** The candidate fields the input can have: a CSV header's columns once read; undefined for JSON (any field). */
@@ -62,14 +62,42 @@ function breaksIn(record: readonly string[]): number {
   return n;
 }
 
+/** The records a csv-parse stream has ready, a batch at a time, without a promise per record. */
+async function* parsedBatches(parser: ReturnType<typeof parse>): AsyncGenerator<string[][]> {
+  let ended = false;
+  let failure: unknown;
+  let wake: () => void = () => {};
+  parser.on('end', () => {
+    ended = true;
+    wake();
+  });
+  parser.on('error', (e) => {
+    failure = e;
+    wake();
+  });
+  for (;;) {
+    const batch: string[][] = [];
+    for (let record = parser.read() as string[] | null; record !== null; record = parser.read() as string[] | null) batch.push(record);
+    if (batch.length > 0) yield batch;
+    if (failure !== undefined) throw failure;
+    if (ended) return;
+    await new Promise<void>((resolve) => {
+      wake = resolve;
+      parser.once('readable', resolve);
+    });
+  }
+}
+
 /**
  * The records of a CSV text stream: header first, then one record per row,
  * each with the line it starts on. Lines are counted from the records
  * (one per record, plus the line breaks inside quoted cells), which is much
  * cheaper than asking the parser for its position at every record.
  */
-async function* csvRecords(input: Readable, label: string, counter: { bytes: number; columns?: string[] }): AsyncGenerator<InputRecord> {
-  const parser = parse({ bom: true, relax_column_count: true, relax_quotes: true, skip_empty_lines: false, max_record_size: MAX_RECORD });
+async function* csvRecords(input: Readable, label: string, counter: { bytes: number; columns?: string[] }): AsyncGenerator<InputRecord[]> {
+  // highWaterMark (a stream option the parser passes on) lets a batch hold a few hundred records.
+  const options: Options & { highWaterMark: number } = { bom: true, relax_column_count: true, relax_quotes: true, skip_empty_lines: false, max_record_size: MAX_RECORD, highWaterMark: 64 };
+  const parser = parse(options);
   input.on('data', (chunk: Buffer | string) => {
     counter.bytes += chunk.length;
   });
@@ -79,36 +107,40 @@ async function* csvRecords(input: Readable, label: string, counter: { bytes: num
   let formulaAt = 0;
   let nextLine = 1;
   try {
-    for await (const record of parser as AsyncIterable<string[]>) {
-      const line = nextLine;
-      nextLine = line + 1 + breaksIn(record);
-      let blank = true;
-      for (const cell of record) {
-        if (cell.trim() !== '') {
-          blank = false;
-          break;
+    for await (const records of parsedBatches(parser)) {
+      const out: InputRecord[] = [];
+      for (const record of records) {
+        const line = nextLine;
+        nextLine = line + 1 + breaksIn(record);
+        let blank = true;
+        for (const cell of record) {
+          if (cell.trim() !== '') {
+            blank = false;
+            break;
+          }
         }
+        if (blank) {
+          if (columns) out.push({ kind: 'blank', line });
+          continue;
+        }
+        if (!columns) {
+          columns = columnsOf(record, label);
+          counter.columns = columns;
+          formulaAt = columns.indexOf('formula');
+          continue;
+        }
+        if (record.length > columns.length) {
+          out.push({ kind: 'unreadable', line, formula: record[formulaAt] ?? '', error: new IonheatError('INVALID_DATA', `${label}, line ${line}: ${record.length} fields, but the header names ${columns.length} columns`, { field: label }) });
+          continue;
+        }
+        const fields: Record<string, unknown> = {};
+        for (let i = 0; i < record.length; i++) {
+          const cell = record[i]!;
+          if (cell !== '') fields[columns[i]!] = cell;
+        }
+        out.push({ kind: 'candidate', line, candidate: fields });
       }
-      if (blank) {
-        if (columns) yield { kind: 'blank', line };
-        continue;
-      }
-      if (!columns) {
-        columns = columnsOf(record, label);
-        counter.columns = columns;
-        formulaAt = columns.indexOf('formula');
-        continue;
-      }
-      if (record.length > columns.length) {
-        yield { kind: 'unreadable', line, formula: record[formulaAt] ?? '', error: new IonheatError('INVALID_DATA', `${label}, line ${line}: ${record.length} fields, but the header names ${columns.length} columns`, { field: label }) };
-        continue;
-      }
-      const fields: Record<string, unknown> = {};
-      for (let i = 0; i < record.length; i++) {
-        const cell = record[i]!;
-        if (cell !== '') fields[columns[i]!] = cell;
-      }
-      yield { kind: 'candidate', line, candidate: fields };
+      if (out.length > 0) yield out;
     }
   } catch (e) {
     if (e instanceof IonheatError) throw e;
@@ -153,17 +185,18 @@ function elementLines(text: string): number[] {
   return lines;
 }
 
-async function* jsonRecords(text: string, label: string): AsyncGenerator<InputRecord> {
+async function* jsonRecords(text: string, label: string): AsyncGenerator<InputRecord[]> {
   const value = parseJsonStrict(text, label);
   const rows = Array.isArray(value) ? value : undefined;
   if (!rows) throw new IonheatError('INVALID_DATA', `${label}: a JSON candidate list is an array of rows, e.g. [{"formula": "KNO3"}, "NH4Cl"]`, { field: label });
   const lines = elementLines(text);
-  for (const [i, row] of rows.entries()) {
+  const batch = (i: number, row: unknown): InputRecord => {
     const line = lines[i] ?? i + 1;
-    if (typeof row === 'string') yield { kind: 'candidate', line, candidate: row };
-    else if (row !== null && typeof row === 'object' && !Array.isArray(row)) yield { kind: 'candidate', line, candidate: row as Record<string, unknown> };
-    else yield { kind: 'unreadable', line, error: new IonheatError('INVALID_DATA', `${label}, line ${line}: a row is a formula or an object with a "formula" field, got ${row === null ? 'null' : Array.isArray(row) ? 'a list' : typeof row}`, { field: label }) };
-  }
+    if (typeof row === 'string') return { kind: 'candidate', line, candidate: row };
+    if (row !== null && typeof row === 'object' && !Array.isArray(row)) return { kind: 'candidate', line, candidate: row as Record<string, unknown> };
+    return { kind: 'unreadable', line, error: new IonheatError('INVALID_DATA', `${label}, line ${line}: a row is a formula or an object with a "formula" field, got ${row === null ? 'null' : Array.isArray(row) ? 'a list' : typeof row}`, { field: label }) };
+  };
+  for (let start = 0; start < rows.length; start += 256) yield rows.slice(start, start + 256).map((row, k) => batch(start + k, row));
 }
 
 async function readAll(input: Readable): Promise<string> {

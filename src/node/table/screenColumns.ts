@@ -3,7 +3,8 @@
  * field in the JSON output, so that the same names work in a `--spec`, in
  * the JSON and in a spreadsheet. Columns that could only ever be empty in a
  * run are left out: the fill columns without a fill, the spec columns
- * without a spec, and override columns the input does not have.
+ * without a spec, override columns the input does not have, and the
+ * objective columns when the objective is the enthalpy (they would repeat best).
  *
  * @module
  */
@@ -38,11 +39,16 @@ export function screenColumns(settings: ScreenSettings, inputColumns?: readonly 
     { header: 'probabilityEndothermic', get: (r) => r.probabilityEndothermic },
     { header: 'perGram.salt.value', get: (r) => r.perGram?.salt.value },
     { header: 'suitability', get: (r) => r.suitability },
-    { header: 'objective.value', get: (r) => r.objective?.value },
-    { header: 'objective.low', get: (r) => r.objective?.low },
-    { header: 'objective.high', get: (r) => r.objective?.high },
-    { header: 'objective.unit', get: (r) => r.objective?.unit },
   ];
+  // With the enthalpy as objective, the objective columns would repeat best.*.
+  if (settings.objective !== 'enthalpy') {
+    columns.push(
+      { header: 'objective.value', get: (r) => r.objective?.value },
+      { header: 'objective.low', get: (r) => r.objective?.low },
+      { header: 'objective.high', get: (r) => r.objective?.high },
+      { header: 'objective.unit', get: (r) => r.objective?.unit },
+    );
+  }
   if (settings.fill) {
     columns.push(
       { header: 'fill.finalTemperature.value', get: (r) => r.fill?.finalTemperature.value },

@@ -6,8 +6,8 @@
  * @module
  */
 import { stringify } from 'csv-stringify/sync';
-import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
-import { roundToUncertainty } from '../../quantity/rounding.js';
+import type { Estimate } from '../../quantity/estimate.js';
+import { formatEstimate } from '../../quantity/formatEstimate.js';
 import type { ScreenRow, ScreenSettings, ScreenSummary } from '../../screen/screenRow.js';
 import { textTable } from '../cli/textTable.js';
 import { csvCell } from './csvCell.js';
@@ -21,20 +21,20 @@ export interface StreamWriter {
 }
 
 /** Records handed to csv-stringify at a time (one call per batch, not per row). */
-const CSV_BATCH = 256;
+const CSV_BATCH = 64;
 
-/** CSV: a header of JSON field paths, one record per row; text cells neutralised against formula injection. */
+/** CSV: a header of JSON field paths, one record per row, written by csv-stringify; text cells neutralised against formula injection ({@link csvCell}). */
 export function csvWriter(settings: ScreenSettings, inputColumns?: readonly string[]): StreamWriter {
   const columns = screenColumns(settings, inputColumns);
-  let batch: (string | number)[][] = [];
+  let batch: string[][] = [];
   const flush = (): string => {
     if (batch.length === 0) return '';
-    const text = stringify(batch, { escape_formulas: true });
+    const text = stringify(batch);
     batch = [];
     return text;
   };
   return {
-    start: () => stringify([columns.map((c) => c.header)], { escape_formulas: true }),
+    start: () => stringify([columns.map((c) => c.header)]),
     row: (row) => {
       batch.push(columns.map((c) => csvCell(c.get(row))));
       return batch.length >= CSV_BATCH ? flush() : '';
@@ -57,15 +57,11 @@ export function jsonWriter(settings: ScreenSettings): StreamWriter {
   };
 }
 
-const minus = (s: string): string => (s.startsWith('-') ? `−${s.slice(1)}` : s);
-
-/** `34.89 [34.50, 35.28]` with the decimals the uncertainty allows. */
+/** `34.89 [34.50, 35.28]`: value and 95 % interval with the decimals the uncertainty allows. */
 export function estimateText(e: Estimate | undefined, withUnit = false): string {
   if (!e) return '—';
-  const r = roundEstimate(e);
-  const decimals = e.u > 0 ? Math.min(6, Math.max(0, -roundToUncertainty(e.value, e.u).exponent)) : 2;
-  const f = (x: number) => minus(x.toFixed(decimals));
-  return `${f(r.value)} [${f(r.low)}, ${f(r.high)}]${withUnit ? ` ${e.unit}` : ''}`;
+  const f = formatEstimate(e);
+  return `${f.value} [${f.low}, ${f.high}]${withUnit ? ` ${e.unit}` : ''}`;
 }
 
 function cellsOf(row: ScreenRow, settings: ScreenSettings, withCost: boolean): string[] {

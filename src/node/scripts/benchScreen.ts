@@ -1,0 +1,144 @@
+/**
+ * The screen section of `npm run bench`:
+ *
+ * - `screen` over the enumeration of every charge-balanced salt of the
+ *   built-in ions, in process (first pass with fresh indexes, then warm);
+ * - `ionheat screen` over a 100,000-row CSV (and a 10,000-row one) in a child
+ *   process, CSV out to /dev/null, for throughput and peak memory.
+ *
+ * Targets: ≥ 50,000 rows per second through the command, and peak memory at
+ * 100,000 rows within 1.5 times that at 10,000 rows. The machine may be
+ * shared: each command timing is the best of three runs.
+ */
+import { spawnSync } from 'node:child_process';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { performance } from 'node:perf_hooks';
+import { Dataset, type Tables } from '../../data/dataset.js';
+import { builtinDataset } from '../../data/builtin.js';
+import { tableSchemas, type TableName } from '../../data/schemas.js';
+import { enumerate } from '../../screen/enumerate.js';
+import { screen } from '../../screen/screen.js';
+
+/** Rows per second through the command. */
+export const SCREEN_COMMAND_TARGET_PER_SECOND = 50_000;
+/** Peak memory at 100,000 rows over peak memory at 10,000 rows. */
+export const SCREEN_MEMORY_RATIO_TARGET = 1.5;
+
+const root = fileURLToPath(new URL('../../../', import.meta.url));
+
+function freshDataset(): Dataset {
+  const base = builtinDataset();
+  const tables: Tables = {};
+  for (const name of Object.keys(tableSchemas) as TableName[]) {
+    const t = base.table(name);
+    if (t) (tables as Record<string, unknown>)[name] = t;
+  }
+  return new Dataset(tables, base.sources, 'built-in (fresh)');
+}
+
+/** A candidate CSV of n rows: the enumerated salts in turn, each row with its own price and note. */
+function candidateCsv(n: number, formulas: readonly string[]): string {
+  const lines = ['formula,pricePerKg,note'];
+  for (let i = 0; i < n; i++) lines.push(`${formulas[i % formulas.length]},${(0.5 + (i % 997) / 100).toFixed(2)},quote ${i + 1}`);
+  return `${lines.join('\n')}\n`;
+}
+
+interface ChildRun {
+  wallMs: number;
+  inProcessMs: number;
+  maxRssKb: number;
+  peakHeapBytes: number;
+  /** JS heap still in use after the run and a full garbage collection. */
+  retainedBytes: number;
+  status: number;
+  summary: string;
+}
+
+/** Runs `ionheat screen <file> --format csv` in a child process, output to /dev/null; reports time and peak memory. */
+function runCommand(file: string, wrapper: string): ChildRun {
+  const t0 = performance.now();
+  const child = spawnSync(process.execPath, ['--expose-gc', wrapper, 'screen', file, '--format', 'csv'], { stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8', maxBuffer: 1 << 24 });
+  const wallMs = performance.now() - t0;
+  const lines = (child.stderr ?? '').trim().split('\n');
+  const report = JSON.parse(lines[lines.length - 1]!) as { status: number; ms: number; maxRssKb: number; peakHeap: number; retained: number };
+  return { wallMs, inProcessMs: report.ms, maxRssKb: report.maxRssKb, peakHeapBytes: report.peakHeap, retainedBytes: report.retained, status: report.status, summary: lines.find((l) => l.startsWith('screen:')) ?? '' };
+}
+
+const best = (runs: ChildRun[]): ChildRun => runs.reduce((a, b) => (b.wallMs < a.wallMs ? b : a));
+const mb = (kb: number): string => `${(kb / 1024).toFixed(1)} MB`;
+
+/** Runs the section and returns its report lines. */
+export function benchScreen(): string[] {
+  const out: string[] = [];
+
+  // 1. The API over the enumeration.
+  const dataset = freshDataset();
+  const salts = enumerate({}, dataset);
+  let t0 = performance.now();
+  const first = screen(salts, {}, dataset);
+  const cold = performance.now() - t0;
+  let passes = 0;
+  t0 = performance.now();
+  let elapsed = 0;
+  while (elapsed < 2000) {
+    screen(salts, {}, dataset);
+    passes++;
+    elapsed = performance.now() - t0;
+  }
+  const s = first.summary;
+  out.push(`screen() over every charge-balanced salt of the built-in ions (${salts.length} salts: ${s.computed} computed, ${s.failed} without an enthalpy of solution)`);
+  out.push(`  first pass (indexes and calibrations built): ${cold.toFixed(0)} ms, ${(salts.length / (cold / 1000)).toFixed(0)} salts/s`);
+  out.push(`  later passes (each a new screen, its own caches): ${((passes * salts.length) / (elapsed / 1000)).toFixed(0)} salts/s over ${passes} passes`);
+
+  // 2. The command over 10,000 and 100,000 rows.
+  const cli = join(root, 'dist', 'node', 'index.js');
+  if (!existsSync(cli)) {
+    out.push('ionheat screen: dist/ is missing; run npm run build (npm run bench builds first)');
+    return out;
+  }
+  const dir = mkdtempSync(join(tmpdir(), 'ionheat-bench-'));
+  try {
+    const wrapper = join(dir, 'run.mjs');
+    writeFileSync(
+      wrapper,
+      [
+        `import { runCli } from ${JSON.stringify(pathToFileURL(cli).href)};`,
+        'let peakHeap = 0;',
+        'const timer = setInterval(() => { peakHeap = Math.max(peakHeap, process.memoryUsage().heapUsed); }, 20);',
+        'const t0 = performance.now();',
+        'const status = await runCli(process.argv.slice(2));',
+        'const ms = performance.now() - t0;',
+        'clearInterval(timer);',
+        'peakHeap = Math.max(peakHeap, process.memoryUsage().heapUsed);',
+        'globalThis.gc();',
+        'const retained = process.memoryUsage().heapUsed;',
+        "process.stderr.write('\\n' + JSON.stringify({ status, ms, maxRssKb: process.resourceUsage().maxRSS, peakHeap, retained }) + '\\n');",
+      ].join('\n'),
+    );
+    const formulas = salts.map((x) => x.formula);
+    const sizes = [10_000, 100_000];
+    const results = new Map<number, ChildRun>();
+    for (const n of sizes) {
+      const file = join(dir, `candidates-${n}.csv`);
+      writeFileSync(file, candidateCsv(n, formulas));
+      results.set(n, best([runCommand(file, wrapper), runCommand(file, wrapper), runCommand(file, wrapper)]));
+    }
+    const small = results.get(10_000)!;
+    const large = results.get(100_000)!;
+    const rate = 100_000 / (large.wallMs / 1000);
+    const steady = 90_000 / ((large.inProcessMs - small.inProcessMs) / 1000);
+    out.push(`ionheat screen <100,000-row CSV> --format csv > /dev/null (enumerated salts in turn, each row its own price and note; best of 3)`);
+    out.push(`  ${large.summary.replace(/^screen: /, '')}`);
+    out.push(`  whole command, node start to exit: ${large.wallMs.toFixed(0)} ms, ${rate.toFixed(0)} rows/s — ${(rate / SCREEN_COMMAND_TARGET_PER_SECOND).toFixed(2)} × the target of ${SCREEN_COMMAND_TARGET_PER_SECOND} rows/s`);
+    out.push(`  inside the command: ${large.inProcessMs.toFixed(0)} ms for 100,000 rows, ${small.inProcessMs.toFixed(0)} ms for 10,000; the 90,000 rows between at ${steady.toFixed(0)} rows/s`);
+    out.push(`  peak memory (resident set, whole process): ${mb(small.maxRssKb)} at 10,000 rows, ${mb(large.maxRssKb)} at 100,000 rows — ratio ${(large.maxRssKb / small.maxRssKb).toFixed(2)} (target ≤ ${SCREEN_MEMORY_RATIO_TARGET})`);
+    out.push(`  peak JS heap in use, garbage included (sampled every 20 ms): ${(small.peakHeapBytes / 2 ** 20).toFixed(1)} MB at 10,000 rows, ${(large.peakHeapBytes / 2 ** 20).toFixed(1)} MB at 100,000 rows`);
+    out.push(`  JS heap still held after the run and a full collection: ${(small.retainedBytes / 2 ** 20).toFixed(1)} MB at 10,000 rows, ${(large.retainedBytes / 2 ** 20).toFixed(1)} MB at 100,000 rows — ratio ${(large.retainedBytes / small.retainedBytes).toFixed(2)}`);
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+  return out;
+}
