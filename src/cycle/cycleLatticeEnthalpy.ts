@@ -26,7 +26,7 @@ export interface CycleLatticeOptions {
  *   ΔH_L = Σνᵢ·ΔfH°(ionᵢ, g) − ΔfH°(salt, cr)
  *
  * positive, for crystal → gaseous ions. The gaseous ions come from
- * {@link gaseousIon} (monatomic ions from their elements, polyatomic ions
+ * `gaseousIon` (monatomic ions from their elements, polyatomic ions
  * from the tabulated gaseous-ion enthalpies). Summed exactly; the
  * uncertainty treats the terms as independent.
  *

@@ -55,7 +55,7 @@ function readMethod(method: string): { model: LatticeModel; corrected: boolean }
  * ΔH_model of the estimator over the built-in salts with a closed cycle, in
  * the salt's group (charge type, ion kind and cation core, falling back to
  * charge type and core, then core, then all salts, when a group has fewer
- * than {@link MIN_GROUP}), leaving the salt
+ * than `MIN_GROUP`), leaving the salt
  * itself out: with bias b, scatter s and n salts, the plain method reports
  * ΔH_model ± t·ΔH_model·√(b² + s²(1 + 1/n)); the corrected method reports
  * ΔH_model·(1 + b) ± t·ΔH_model·s·√(1 + 1/n), t the Student quantile with

@@ -14,7 +14,7 @@ import type { ScreenRow, ScreenSummary } from './screenRow.js';
  * input order, without holding the input or the output: memory stays flat
  * however long the input is (results for repeated formulas come from a
  * bounded cache). Rows carry no `rank`, which needs every row; rank them
- * afterwards with {@link rankRows} if you keep them. The generator's return
+ * afterwards with `rankRows` if you keep them. The generator's return
  * value is the summary of the run.
  *
  * @param candidates - any iterable or async iterable of candidates (see {@link screen})

@@ -1,19 +1,8 @@
 // The public lattice API: estimates with calibrated intervals, the cycle
 // lattice enthalpy, leave-one-out coverage, trends, and errors.
 import { describe, expect, it } from 'vitest';
-import {
-  builtinDataset,
-  calibrationStats,
-  cycleLatticeEnthalpy,
-  IonheatError,
-  kapustinskii,
-  latticeCalibration,
-  latticeEnthalpyCorrection,
-  latticeEstimate,
-  latticeEstimates,
-  latticeMethods,
-  parseSalt,
-} from '../../src/index.js';
+import { builtinDataset, cycleLatticeEnthalpy, IonheatError, kapustinskii, latticeCalibration, latticeEnthalpyCorrection, latticeEstimate, latticeEstimates, latticeMethods, parseSalt } from '../../src/index.js';
+import { calibrationStats } from '../../src/lattice/latticeCalibration.js';
 import { RT_STANDARD } from '../../src/quantity/constants.js';
 
 const dataset = builtinDataset();

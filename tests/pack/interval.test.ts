@@ -1,6 +1,7 @@
 // The 95 % interval of the final temperature: bounds by default, seeded Monte Carlo on request.
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_SEED, packFinalTemperature } from '../../src/index.js';
+import { packFinalTemperature } from '../../src/index.js';
+import { DEFAULT_SEED } from '../../src/pack/finalTemperatureInterval.js';
 
 const fill = { solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 };
 

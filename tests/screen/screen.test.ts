@@ -1,17 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import {
-  builtinDataset,
-  costPerKJ,
-  createScreener,
-  dissolve,
-  enumerate,
-  measuredSolutionEnthalpy,
-  parseSalt,
-  rankRows,
-  screen,
-  screenRowSchema,
-  screenStream,
-} from '../../src/index.js';
+import { builtinDataset, createScreener, dissolve, enumerate, measuredSolutionEnthalpy, parseSalt, screen, screenRowSchema, screenStream } from '../../src/index.js';
+import { costPerKJ } from '../../src/screen/costPerKJ.js';
+import { rankRows } from '../../src/screen/rankRows.js';
 
 describe('screen', () => {
   it('gives one row per candidate, in input order, with line numbers and ranks', () => {
