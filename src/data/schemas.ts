@@ -95,6 +95,8 @@ export const ionRecordSchema = z.strictObject({
   bornCore: nobleGasCoreSchema.nullable(),
   /** Other ways the same ion is written inside formulas (`C2H3O2` for acetate). */
   aliases: z.array(z.string().min(1).max(40)).optional(),
+  /** `false` where the ion does not survive in water (O²⁻ takes a proton from water to give 2 OH⁻), so no enthalpy of solution to that ion exists. */
+  stableInWater: z.boolean().optional(),
   ...provenance,
 });
 

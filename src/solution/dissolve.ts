@@ -12,6 +12,7 @@ import { saltRecords, WATER } from '../chem/saltRecords.js';
 import { IonheatError } from '../error.js';
 import { basisOrder, type Estimate } from '../quantity/estimate.js';
 import { saltHydrationEnthalpy } from '../hydration/saltHydration.js';
+import { ionsUnstableInWater } from './waterStability.js';
 import { measuredSolutionEnthalpy } from './measuredSolution.js';
 import { solutionEnthalpyFromCycle } from './cycleSolution.js';
 import { hydrateFromParent, hydrateRuleScatter, saltFormIndex } from './hydrateRule.js';
@@ -174,7 +175,7 @@ function modelledEstimates(salt: Salt, hide: boolean, dataset: Dataset): Estimat
 }
 
 function computeModelled(salt: Salt, hide: boolean, dataset: Dataset): Estimate[] {
-  if (salt.kind !== 'ionic') return [];
+  if (salt.kind !== 'ionic' || ionsUnstableInWater(salt, dataset).length > 0) return [];
   if (salt.water === 0) return [...anchoredSolutionEnthalpies(salt, { excludeMeasured: hide }, dataset), ...profileOf(salt, dataset).model];
   const hw = waterFormation(dataset);
   if (hw === undefined) return [];
@@ -193,6 +194,10 @@ function ruleOf(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
 function failure(salt: Salt, hide: boolean, dataset: Dataset): IonheatError {
   if (salt.kind === 'non-electrolyte') {
     return new IonheatError('NOT_APPLICABLE', `no enthalpy of solution can be given for ${salt.formula}: it is a molecular solute, to which no lattice model applies, and the ${dataset.label} tables hold no measured value for it${hide ? ' that is not hidden (excludeMeasured)' : ''}`, { text: salt.formula });
+  }
+  const unstable = ionsUnstableInWater(salt, dataset);
+  if (unstable.length > 0) {
+    return new IonheatError('NOT_APPLICABLE', `${salt.formula} reacts with water instead of dissolving to its ions: ${unstable.join(', ')} does not exist in water (O²⁻ + H₂O → 2 OH⁻), so no enthalpy of solution applies`, { text: salt.formula });
   }
   return new IonheatError('MISSING_DATA', `no enthalpy of solution can be given for ${salt.formula}: no measured value, no formation enthalpies and no lattice estimate (a radius, volume or structure is missing) in the ${dataset.label} tables`, { text: salt.formula });
 }

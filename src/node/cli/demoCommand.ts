@@ -121,6 +121,14 @@ const tempText = (r: ScreenRow): string => (r.fill ? estimateText(r.fill.finalTe
 /** The rows best first, then those without a rank in input order. */
 const rankOrder = (rows: readonly ScreenRow[]): ScreenRow[] => [...rows].sort((a, b) => (a.rank ?? Infinity) - (b.rank ?? Infinity) || a.line - b.line);
 
+/** Hazard classes, then what a formulator must know about the row: its own measured value, a fill without solubility data. */
+function remarks(r: ScreenRow): string {
+  const parts: string[] = [...(r.hazards ?? [])];
+  if (r.input.measuredEnthalpy !== undefined) parts.push('own measured ΔsolH');
+  if (r.fill?.notes.some((n) => n.startsWith('no solubility data'))) parts.push('no solubility data: assumed to dissolve fully');
+  return parts.join(', ');
+}
+
 /** The ranked table of a part: best first, then rows without a rank. */
 function rankedTable(result: ScreenResult): string {
   const rows = rankOrder(result.rows);
@@ -132,7 +140,7 @@ function rankedTable(result: ScreenResult): string {
     r.fill ? `${r.fill.dissolved[0]!.undissolvedMass.toFixed(1)} g` : '',
     r.costPerKJ ? estimateText(r.costPerKJ) : '',
     r.spec ? (r.spec.holds ? 'meets it' : 'fails') : '',
-    r.status === 'failed' ? `cannot be computed: ${r.error?.message ?? ''}` : r.status === 'excluded' ? `ruled out: ${r.excludedBy ?? ''}` : (r.hazards ?? []).join(', '),
+    r.status === 'failed' ? `cannot be computed: ${r.error?.message ?? ''}` : r.status === 'excluded' ? `ruled out: ${r.excludedBy ?? ''}` : remarks(r),
   ]);
   return textTable(['rank', 'salt', 'ΔsolH kJ/mol [95 %], basis', 'fill reaches °C [95 %]', 'left solid', 'price/kJ [95 %]', 'meets spec?', 'hazards / remarks'], body, new Set([0]));
 }
