@@ -63,14 +63,39 @@ function bad(field: string, message: string): IonheatError {
   return new IonheatError('INVALID_ARGUMENT', message, { field });
 }
 
-function positive(value: string | undefined, name: string, unit: string, required: boolean): number | undefined {
+/**
+ * Largest mass of salt or water accepted, g: a tonne, far beyond any pack. Bounds the arithmetic: near 1e308 g the
+ * heat capacities overflow to Infinity and the temperature solver cannot converge.
+ */
+const MAX_MASS_G = 1e6;
+/**
+ * Smallest mass of salt or water accepted, g: a milligram. Below it the numbers say nothing about a pack, and
+ * subnormal masses (1e-320 g) stall the temperature solver.
+ */
+const MIN_MASS_G = 1e-3;
+/** Largest heat capacity accepted (container, or the whole fill), J/K: a tonne of water is about 4.2e6 J/K. */
+const MAX_HEAT_CAPACITY_J_PER_K = 1e8;
+/** Smallest heat capacity of the whole fill accepted, J/K (a milligram of water holds about 4e-3 J/K). */
+const MIN_HEAT_CAPACITY_J_PER_K = 1e-3;
+
+function atMost(n: number, max: number, name: string, unit: string): number {
+  if (n > max) throw bad(name, `--${name} must be at most ${max} ${unit}, got ${n} ${unit}`);
+  return n;
+}
+
+function atLeast(n: number, min: number, name: string, unit: string): number {
+  if (n < min) throw bad(name, `--${name} must be at least ${min} ${unit}, got ${n} ${unit}`);
+  return n;
+}
+
+function positive(value: string | undefined, name: string, unit: string, required: boolean, max: number, min = 0): number | undefined {
   const n = numberOption(value, name);
   if (n === undefined) {
     if (required) throw bad(name, `--${name} is required (${unit})`);
     return undefined;
   }
   if (!(n > 0)) throw bad(name, `--${name} must be greater than zero, got ${n} ${unit}`);
-  return n;
+  return atMost(atLeast(n, min, name, unit), max, name, unit);
 }
 
 const r = (x: number, digits: number): number => {
@@ -261,21 +286,25 @@ export const packCommand: Command = {
       }
       const mass = numberOption(massesGiven[i], 'salt-mass')!;
       if (!(mass > 0)) throw bad('salt-mass', `--salt-mass must be greater than zero, got ${mass} g (for ${formula})`);
+      if (mass > MAX_MASS_G) throw bad('salt-mass', `--salt-mass must be at most ${MAX_MASS_G} g, got ${mass} g (for ${formula})`);
+      if (mass < MIN_MASS_G) throw bad('salt-mass', `--salt-mass must be at least ${MIN_MASS_G} g, got ${mass} g (for ${formula})`);
       return { formula, massG: mass };
     });
-    const water = positive(values.water, 'water', 'g', true)!;
+    const water = positive(values.water, 'water', 'g', true, MAX_MASS_G, MIN_MASS_G)!;
     const start = numberOption(values.start, 'start');
     if (start !== undefined && !(start >= 0 && start < 100)) throw bad('start', `--start must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${start} °C`);
     const container = numberOption(values.container, 'container');
     if (container !== undefined && !(container >= 0)) throw bad('container', `--container must be zero or more J/K, got ${container}`);
+    if (container !== undefined) atMost(container, MAX_HEAT_CAPACITY_J_PER_K, 'container', 'J/K');
     const target = numberOption(values.target, 'target');
-    const heatCapacity = positive(values['heat-capacity'], 'heat-capacity', 'J/K', false);
+    const heatCapacity = positive(values['heat-capacity'], 'heat-capacity', 'J/K', false, MAX_HEAT_CAPACITY_J_PER_K, MIN_HEAT_CAPACITY_J_PER_K);
     const heatCapacityU = numberOption(values['heat-capacity-u'], 'heat-capacity-u');
     if (heatCapacityU !== undefined && !(heatCapacityU >= 0)) throw bad('heat-capacity-u', `--heat-capacity-u must be zero or more J/K, got ${heatCapacityU}`);
+    if (heatCapacityU !== undefined) atMost(heatCapacityU, MAX_HEAT_CAPACITY_J_PER_K, 'heat-capacity-u', 'J/K');
     const draws = numberOption(values['monte-carlo'], 'monte-carlo');
     if (draws !== undefined && !(Number.isInteger(draws) && draws >= 20 && draws <= 1_000_000)) throw bad('monte-carlo', `--monte-carlo needs a whole number of draws from 20 to 1000000, got ${draws}`);
     const seed = numberOption(values.seed, 'seed');
-    if (seed !== undefined && !Number.isInteger(seed)) throw bad('seed', `--seed must be a whole number, got ${seed}`);
+    if (seed !== undefined && !Number.isSafeInteger(seed)) throw bad('seed', `--seed must be a whole number of at most 15 digits, got ${seed}`);
     const points = numberOption(values.points, 'points');
 
     const fill: PackFill = { solids, waterG: water, ...(start !== undefined ? { startC: start } : {}), ...(container !== undefined ? { containerJPerK: container } : {}) };
