@@ -12,8 +12,31 @@ export interface CliIO {
   stdinStream?(): NodeJS.ReadableStream;
 }
 
+/**
+ * What to do when an output stream fails. A reader that stops early (`ionheat screen big.csv | head -1`) closes
+ * the pipe, and the next write fails with EPIPE: the output is no longer wanted, so the process ends at once,
+ * quietly, with status 0 (as other command-line tools do). Any other failure to write (a full disk) ends it with
+ * one line on stderr, if stderr still works, and status 2.
+ */
+function onOutputError(e: NodeJS.ErrnoException): void {
+  if (e.code === 'EPIPE' || e.code === 'ERR_STREAM_DESTROYED') process.exit(0);
+  try {
+    process.stderr.write(`ionheat: cannot write the output: ${e.code ?? e.message}\n`);
+  } finally {
+    process.exit(2);
+  }
+}
+
+/** A closed or failing stderr: nothing can be said any more; a closed reader is no failure. */
+function onStderrError(e: NodeJS.ErrnoException): void {
+  process.exit(e.code === 'EPIPE' || e.code === 'ERR_STREAM_DESTROYED' ? 0 : 2);
+}
+
 /** The process's own streams. */
 export function processIO(): CliIO {
+  // Attached once per process, however often processIO is called.
+  if (!process.stdout.listeners('error').includes(onOutputError)) process.stdout.on('error', onOutputError);
+  if (!process.stderr.listeners('error').includes(onStderrError)) process.stderr.on('error', onStderrError);
   return {
     stdout: (t) => void process.stdout.write(t),
     stderr: (t) => void process.stderr.write(t),
