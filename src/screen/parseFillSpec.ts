@@ -1,6 +1,13 @@
 import { IonheatError } from '../error.js';
 import type { FillSpec } from './screenRow.js';
 
+/**
+ * Masses a standard fill may have, g: a milligram to a tonne (as `ionheat pack` accepts). Outside them the
+ * numbers say nothing about a pack.
+ */
+const MIN_MASS_G = 1e-3;
+const MAX_MASS_G = 1e6;
+
 /** Reads a plain decimal number (digits, optional point, optional sign); undefined for anything else. */
 function decimal(text: string): number | undefined {
   const s = text.trim();
@@ -20,7 +27,7 @@ function decimal(text: string): number | undefined {
 /**
  * Reads a standard fill written `<salt-g>:<water-g>@<start-°C>`, e.g.
  * `40:80@22` for 40 g of salt in 80 g of water starting at 22 °C (a trailing
- * `°C` or `C` is allowed). Masses must be positive; the start temperature
+ * `°C` or `C` is allowed). Masses must lie between a milligram and a tonne; the start temperature
  * must lie between 0 and 100 °C (liquid water).
  *
  * @param text - `<salt-g>:<water-g>@<start-°C>`, masses in g, start temperature in °C
@@ -47,6 +54,9 @@ export function parseFillSpec(text: string): FillSpec {
   const startC = decimal(start);
   if (saltMassG === undefined || !(saltMassG > 0)) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": the salt mass (before ":") must be a positive number of grams`, { field: 'fill', text });
   if (waterMassG === undefined || !(waterMassG > 0)) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": the water mass (between ":" and "@") must be a positive number of grams`, { field: 'fill', text });
+  for (const [mass, part] of [[saltMassG, 'the salt mass (before ":")'], [waterMassG, 'the water mass (between ":" and "@")']] as const) {
+    if (mass < MIN_MASS_G || mass > MAX_MASS_G) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": ${part} must lie between ${MIN_MASS_G} g and ${MAX_MASS_G} g`, { field: 'fill', text });
+  }
   if (startC === undefined || !(startC > 0 && startC < 100)) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": the start temperature (after "@") must be a number of °C above 0 and below 100, where water is liquid`, { field: 'fill', text });
   return { saltMassG, waterMassG, startC };
 }

@@ -6,12 +6,14 @@ import { benchDissolve } from './benchDissolve.js';
 import { benchPack } from './benchPack.js';
 import { benchLattice } from './benchLattice.js';
 import { benchScreen } from './benchScreen.js';
+import { benchHostile } from './benchHostile.js';
 
 const sections: { name: string; run: () => string[] }[] = [
   { name: 'dissolve', run: benchDissolve },
   { name: 'pack', run: benchPack },
   { name: 'lattice', run: benchLattice },
   { name: 'screen', run: benchScreen },
+  { name: 'hostile input', run: benchHostile },
 ];
 
 for (const section of sections) {
