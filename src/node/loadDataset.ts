@@ -28,6 +28,7 @@ import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { sourceSchema } from '../data/schemas.js';
 import { IonheatError } from '../error.js';
 import { parseJsonStrict } from './strictJson.js';
+import { checkPlausibleOverrides } from './plausibleOverrides.js';
 
 const overrideFileSchema = z.strictObject({
   $schema: z.string().optional(),
@@ -68,6 +69,7 @@ export function applyOverrideDocument(document: unknown, label: string, base: Da
   }
   const tables: Record<string, unknown[]> = {};
   for (const [name, records] of Object.entries(parsed.data.tables)) tables[name.endsWith('.json') ? name : `${name}.json`] = records;
+  checkPlausibleOverrides(tables, label);
   return base.withOverrides(tables as TableOverrides, label, parsed.data.sources ?? {});
 }
 

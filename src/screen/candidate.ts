@@ -17,11 +17,20 @@ export const candidateInputSchema = z.strictObject({
   /** The salt as written by the user (`KNO3`, `CaCl2·6H2O`, `urea`). */
   formula: z.string().max(200).describe('the salt as written in the input'),
   /** The user's measured enthalpy of solution at infinite dilution, 25 °C, kJ/mol, positive = endothermic. Used in place of the table value. */
-  measuredEnthalpy: finite.optional().describe('your measured enthalpy of solution, kJ/mol, positive = endothermic (the pack cools)'),
+  measuredEnthalpy: finite
+    .refine((v) => Math.abs(v) <= 2000, 'must lie between -2000 and 2000 kJ/mol (common practice: no enthalpy of solution comes near; check the unit)')
+    .optional()
+    .describe('your measured enthalpy of solution, kJ/mol, positive = endothermic (the pack cools)'),
   /** Standard uncertainty of `measuredEnthalpy`, kJ/mol; default the solution-enthalpy table's default uncertainty. */
-  measuredUncertainty: finite.refine((v) => v >= 0, 'must not be negative').optional().describe('standard uncertainty of measuredEnthalpy, kJ/mol'),
+  measuredUncertainty: finite
+    .refine((v) => v >= 0, 'must not be negative')
+    .refine((v) => v <= 1000, 'must be at most 1000 kJ/mol (check the unit)')
+    .optional().describe('standard uncertainty of measuredEnthalpy, kJ/mol'),
   /** Solubility of the anhydrous salt, g per 100 g of water, taken as the same at every temperature of the fill. */
-  solubility: finite.refine((v) => v > 0, 'must be greater than zero').optional().describe('g of anhydrous salt per 100 g of water, taken as the same at every temperature'),
+  solubility: finite
+    .refine((v) => v > 0, 'must be greater than zero')
+    .refine((v) => v <= 100_000, 'must be at most 100000 g per 100 g of water (check the unit)')
+    .optional().describe('g of anhydrous salt per 100 g of water, taken as the same at every temperature'),
   /** Price of the solid as listed, per kg, in any currency (the cost per kJ comes out in the same currency). */
   pricePerKg: finite.refine((v) => v >= 0, 'must not be negative').optional().describe('price of the solid per kg, in your currency'),
   /** Source key for `measuredEnthalpy` and `solubility`: a key of the dataset's sources or of the screen's own (`screenInput`, the default). */
@@ -84,9 +93,9 @@ function plainlyValid(fields: Record<string, unknown>): boolean {
   for (const key in fields) if (!knownFields.has(key)) return false;
   const { formula, measuredEnthalpy, measuredUncertainty, solubility, pricePerKg, source, note } = fields;
   if (typeof formula !== 'string' || formula.length > 200) return false;
-  if (measuredEnthalpy !== undefined && !finiteNumber(measuredEnthalpy)) return false;
-  if (measuredUncertainty !== undefined && !(finiteNumber(measuredUncertainty) && measuredUncertainty >= 0 && measuredEnthalpy !== undefined)) return false;
-  if (solubility !== undefined && !(finiteNumber(solubility) && solubility > 0)) return false;
+  if (measuredEnthalpy !== undefined && !(finiteNumber(measuredEnthalpy) && Math.abs(measuredEnthalpy) <= 2000)) return false;
+  if (measuredUncertainty !== undefined && !(finiteNumber(measuredUncertainty) && measuredUncertainty >= 0 && measuredUncertainty <= 1000 && measuredEnthalpy !== undefined)) return false;
+  if (solubility !== undefined && !(finiteNumber(solubility) && solubility > 0 && solubility <= 100_000)) return false;
   if (pricePerKg !== undefined && !(finiteNumber(pricePerKg) && pricePerKg >= 0)) return false;
   if (source !== undefined && !(typeof source === 'string' && source.length >= 1 && source.length <= 80)) return false;
   if (note !== undefined && !(typeof note === 'string' && note.length <= 2000)) return false;
