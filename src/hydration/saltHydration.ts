@@ -21,6 +21,50 @@ export interface SaltHydrationOptions {
   born?: boolean;
 }
 
+/** One ion's term on one scale, tabulated or (where allowed) a Born estimate; undefined when neither exists. */
+function ionTerm(ion: string, charge: number, scale: HydrationScale, born: boolean, dataset: Dataset): HydrationTerm | undefined {
+  let term = tabulatedHydrationTerm(ion, scale, dataset);
+  if (!term && born) {
+    const estimate = bornHydrationEnthalpy(ion, {}, dataset);
+    const proton = protonHydration(dataset);
+    if (estimate && (scale === 'absolute' || proton)) {
+      // The Born value is absolute; on the conventional scale subtract z·ΔhydH°abs(H⁺).
+      const shift = scale === 'conventional' ? -charge * proton!.value : 0;
+      term = { ion, charge, value: estimate.value + shift, u: estimate.u, sources: estimate.sources, fromMemory: false, kind: 'born', notes: estimate.notes };
+    }
+  }
+  return term;
+}
+
+/**
+ * Each ion's term per scale (with and without Born estimates), built on
+ * first use and kept per dataset: per-ion data, shared by every salt of the
+ * ion. The terms kept are never handed out (see {@link saltHydrationTerms}).
+ */
+function ionTerms(dataset: Dataset): Record<HydrationScale, { born: Map<string, HydrationTerm | null>; tabulated: Map<string, HydrationTerm | null> }> {
+  return dataset.memo('hydration.ionTerms', () => ({ absolute: { born: new Map(), tabulated: new Map() }, conventional: { born: new Map(), tabulated: new Map() } }));
+}
+
+/** The kept terms of a salt's hydration sum (shared: not to be changed or handed out), or undefined when an ion has no value. */
+function keptTerms(salt: Salt, options: SaltHydrationOptions, dataset: Dataset): { term: HydrationTerm; count: number }[] | undefined {
+  if (salt.kind !== 'ionic') return undefined;
+  const scale = options.scale ?? 'absolute';
+  const born = options.born !== false;
+  const byScale = ionTerms(dataset)[scale];
+  const cache = born ? byScale.born : byScale.tabulated;
+  const out: { term: HydrationTerm; count: number }[] = [];
+  for (const { ion, count, charge } of salt.ions) {
+    let term = cache.get(ion);
+    if (term === undefined) {
+      term = ionTerm(ion, charge, scale, born, dataset) ?? null;
+      cache.set(ion, term);
+    }
+    if (!term) return undefined;
+    out.push({ term, count });
+  }
+  return out;
+}
+
 /**
  * The terms ν·ΔhydH°(ion) of a salt's hydration sum, one per ion with its
  * count ν, or undefined when an ion has no value (or for a non-electrolyte).
@@ -42,24 +86,7 @@ export interface SaltHydrationOptions {
  * ```
  */
 export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {}, dataset: Dataset = builtinDataset()): { term: HydrationTerm; count: number }[] | undefined {
-  if (salt.kind !== 'ionic') return undefined;
-  const scale = options.scale ?? 'absolute';
-  const out: { term: HydrationTerm; count: number }[] = [];
-  for (const { ion, count, charge } of salt.ions) {
-    let term = tabulatedHydrationTerm(ion, scale, dataset);
-    if (!term && options.born !== false) {
-      const born = bornHydrationEnthalpy(ion, {}, dataset);
-      const proton = protonHydration(dataset);
-      if (born && (scale === 'absolute' || proton)) {
-        // The Born value is absolute; on the conventional scale subtract z·ΔhydH°abs(H⁺).
-        const shift = scale === 'conventional' ? -charge * proton!.value : 0;
-        term = { ion, charge, value: born.value + shift, u: born.u, sources: born.sources, fromMemory: false, kind: 'born', notes: born.notes };
-      }
-    }
-    if (!term) return undefined;
-    out.push({ term, count });
-  }
-  return out;
+  return keptTerms(salt, options, dataset)?.map(({ term, count }) => ({ term: { ...term, sources: [...term.sources], notes: [...term.notes] }, count }));
 }
 
 /**
@@ -85,22 +112,32 @@ export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {
  * ```
  */
 export function saltHydrationEnthalpy(salt: Salt, options: SaltHydrationOptions = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
-  const terms = saltHydrationTerms(salt, options, dataset);
+  const terms = keptTerms(salt, options, dataset);
   if (!terms) return undefined;
   const scale = options.scale ?? 'absolute';
-  const born = terms.filter((t) => t.term.kind === 'born');
-  const memory = terms.filter((t) => t.term.fromMemory).map((t) => t.term.ion);
+  // Plain loops: this runs for every salt dissolve is asked about.
+  const sum: { coefficient: number; value: number }[] = [];
+  const us: { coefficient: number; u: number }[] = [];
+  const sources: string[] = [];
+  const notes: string[] = [];
+  const memory: string[] = [];
+  for (const { term, count } of terms) {
+    sum.push({ coefficient: count, value: term.value });
+    us.push({ coefficient: count, u: term.u });
+    for (const source of term.sources) sources.push(source);
+    if (term.kind === 'born') notes.push(`${term.ion}: ${term.notes[0] ?? 'Born estimate'}`);
+    if (term.fromMemory && !memory.includes(term.ion)) memory.push(term.ion);
+  }
+  const born = notes.length > 0;
+  if (memory.length > 0) notes.push(`entered from memory, not checked against the source: ${memory.join(', ')}`);
   return makeEstimate({
     quantity: 'hydration enthalpy of the salt',
-    value: exactSum(terms.map((t) => ({ coefficient: t.count, value: t.term.value }))),
-    u: linearUncertainty(terms.map((t) => ({ coefficient: t.count, u: t.term.u }))),
+    value: exactSum(sum),
+    u: linearUncertainty(us),
     unit: 'kJ/mol',
-    basis: born.length > 0 ? 'model' : scale === 'absolute' ? 'measured' : 'cycle',
-    method: `${scale === 'absolute' ? 'marcus' : 'formation-enthalpies'}${born.length > 0 ? '+born-lps' : ''}`,
-    sources: terms.flatMap((t) => t.term.sources),
-    notes: [
-      ...born.map((t) => `${t.term.ion}: ${t.term.notes[0] ?? 'Born estimate'}`),
-      ...(memory.length > 0 ? [`entered from memory, not checked against the source: ${[...new Set(memory)].join(', ')}`] : []),
-    ],
+    basis: born ? 'model' : scale === 'absolute' ? 'measured' : 'cycle',
+    method: born ? (scale === 'absolute' ? 'marcus+born-lps' : 'formation-enthalpies+born-lps') : scale === 'absolute' ? 'marcus' : 'formation-enthalpies',
+    sources,
+    notes,
   });
 }
