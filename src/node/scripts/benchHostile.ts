@@ -5,6 +5,7 @@
  */
 import { performance } from 'node:perf_hooks';
 import { parseSalt } from '../../chem/parseSalt.js';
+import { compileSpec } from '../../screen/compileSpec.js';
 import { hostileCases } from './hostileCases.js';
 
 /** Longest time any hostile input may take, ms (issue 7). */
@@ -21,7 +22,9 @@ function timeOnce(run: () => unknown): number {
 }
 
 export function benchHostile(): string[] {
-  parseSalt('NaCl'); // load the ion table's indexes first: the cases time the parsers, not the data loading
+  // Build the ion table's indexes and the spec's field list first: the cases time the parsers, not that set-up.
+  parseSalt('NaCl');
+  compileSpec('best.low > 0');
   const out: string[] = [];
   let worst = 0;
   for (const c of hostileCases()) {
