@@ -30,7 +30,9 @@ export function parseJsonStrict(text: string, label: string): unknown {
   try {
     value = JSON.parse(text);
   } catch (e) {
-    throw new IonheatError('INVALID_DATA', `${label}: not valid JSON (${e instanceof Error ? e.message : String(e)})`, { field: label });
+    // JSON.parse quotes a piece of the text in its message: keep the message on one line and short.
+    const reason = (e instanceof Error ? e.message : String(e)).replace(/\s+/g, ' ');
+    throw new IonheatError('INVALID_DATA', `${label}: not valid JSON (${reason.length > 160 ? `${reason.slice(0, 160)}…` : reason})`, { field: label });
   }
   // Walk the text once, tracking the keys of each open object.
   const stack: (Set<string> | null)[] = [];

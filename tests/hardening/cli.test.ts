@@ -183,6 +183,9 @@ describe('the command line under hostile arguments', () => {
     [['dissolve', 'NaCl', '--data', 'missing.json'], /^ionheat: cannot read data file .*missing\.json/],
     [['dissolve', 'NaCl', '--data'], /^ionheat: --data needs a file name/],
     [['cycle', 'NaCl', '--svg', '/nonexistent/dir/x.svg'], /^ionheat: .*x\.svg/],
+    // Found with IONHEAT_FC_SEED=4: JSON.parse quotes the file's text, newlines and all, in its message.
+    [['salt', 'NaCl', '--data=good.csv'], /^ionheat: good\.csv: not valid JSON \(.*\)\n$/],
+    [['screen', 'broken.csv', '--data', 'mixed.csv'], /^ionheat: mixed\.csv: not valid JSON/],
   ];
   // Fresh input files: the random runs above may have written charts over the scratch files.
   const clean = scratchFiles();
