@@ -5,6 +5,8 @@
  *
  * @module
  */
+import { saltArgument } from '../chem/saltArgument.js';
+import { optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
@@ -42,6 +44,8 @@ export interface SaltHydrationOptions {
  * ```
  */
 export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {}, dataset: Dataset = builtinDataset()): { term: HydrationTerm; count: number }[] | undefined {
+  salt = saltArgument(salt, dataset);
+  options = optionsArgument(options);
   if (salt.kind !== 'ionic') return undefined;
   const scale = options.scale ?? 'absolute';
   const out: { term: HydrationTerm; count: number }[] = [];
@@ -85,6 +89,7 @@ export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {
  * ```
  */
 export function saltHydrationEnthalpy(salt: Salt, options: SaltHydrationOptions = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
+  options = optionsArgument(options);
   const terms = saltHydrationTerms(salt, options, dataset);
   if (!terms) return undefined;
   const scale = options.scale ?? 'absolute';

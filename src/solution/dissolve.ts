@@ -4,6 +4,8 @@
  *
  * @module
  */
+import { saltArgument } from '../chem/saltArgument.js';
+import { optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -286,7 +288,8 @@ function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
  * ```
  */
 export function dissolve(formula: string | Salt, options: DissolveOptions = {}, dataset: Dataset = builtinDataset()): DissolveResult {
-  const salt = typeof formula === 'string' ? parseSalt(formula, dataset) : formula;
+  const salt = saltArgument(formula, dataset, 'formula');
+  options = optionsArgument(options);
   const hide = options.excludeMeasured === true;
   const celsius = options.temperatureC ?? TABLE_TEMPERATURE_C;
   checkKirchhoffTemperature(celsius);

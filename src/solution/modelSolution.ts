@@ -6,6 +6,7 @@
  *
  * @module
  */
+import { estimateArgument } from '../quantity/argumentChecks.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 
 /**
@@ -28,6 +29,8 @@ import { makeEstimate, type Estimate } from '../quantity/estimate.js';
  * ```
  */
 export function solutionEnthalpyFromModel(lattice: Estimate, hydration: Estimate): Estimate {
+  lattice = estimateArgument(lattice, 'lattice');
+  hydration = estimateArgument(hydration, 'hydration');
   const value = lattice.value + hydration.value;
   const u = Math.hypot(lattice.u, hydration.u);
   const halfWidth = Math.hypot((lattice.high - lattice.low) / 2, (hydration.high - hydration.low) / 2);

@@ -1,3 +1,4 @@
+import { estimateArgument } from '../quantity/argumentChecks.js';
 import { probabilityPositive, type Estimate } from '../quantity/estimate.js';
 
 /** What a formulator reads: does the salt cool the pack, heat it, or can we not tell? */
@@ -23,6 +24,7 @@ export type Verdict = 'endothermic' | 'exothermic' | 'undetermined';
  * ```
  */
 export function solutionVerdict(e: Estimate): { verdict: Verdict; probabilityEndothermic: number } {
+  e = estimateArgument(e);
   const verdict: Verdict = e.low > 0 ? 'endothermic' : e.high < 0 ? 'exothermic' : 'undetermined';
   return { verdict, probabilityEndothermic: probabilityPositive(e) };
 }
