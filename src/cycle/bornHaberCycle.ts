@@ -189,14 +189,14 @@ export function bornHaberCycle(salt: Salt | string, options: BornHaberOptions = 
     value = exactSum([{ coefficient: 1, value: pathSum(path) }, { coefficient: -1, value: formationKnown.value }]);
     u = quadrature(pathU(path), formationKnown.u);
     quantity = 'lattice enthalpy';
-    latticeStep = { kind: 'lattice', label: `lattice enthalpy of ${s.formula} (solved; the step is −ΔH_L)`, equation: `${gasIons} → ${crystal}`, value: -value, u, source: 'solved', fromMemory: false, count: 1, solved: true };
+    latticeStep = { kind: 'lattice', label: `lattice enthalpy of ${s.formula} (solved; the step is −ΔH_L)`, equation: `${gasIons} → ${crystal}`, value: 0 - value, u, source: 'solved', fromMemory: false, count: 1, solved: true };
     formationStep = { kind: 'formation', label: `enthalpy of formation of ${s.formula}`, equation: `elements → ${crystal}`, value: formationKnown.value, u: formationKnown.u, source: knownSource(formationKnown), fromMemory: memoryOfTabulated, count: 1, solved: false };
   } else {
     if (!latticeKnown) {
       throw new IonheatError('MISSING_DATA', `solving the cycle of ${s.formula} for the ${solve === 'formation' ? 'formation enthalpy' : 'electron affinity'} needs a lattice enthalpy; give one (latticeEnthalpy, or --lattice on the command line)`, { text: s.formula, field: 'latticeEnthalpy' });
     }
     if (latticeKnown.basis === 'model' || latticeKnown.basis === 'anchored') basis = latticeKnown.basis;
-    latticeStep = { kind: 'lattice', label: `lattice enthalpy of ${s.formula} (the step is −ΔH_L)`, equation: `${gasIons} → ${crystal}`, value: -latticeKnown.value, u: latticeKnown.u, source: knownSource(latticeKnown), fromMemory: false, count: 1, solved: false };
+    latticeStep = { kind: 'lattice', label: `lattice enthalpy of ${s.formula} (the step is −ΔH_L)`, equation: `${gasIons} → ${crystal}`, value: 0 - latticeKnown.value, u: latticeKnown.u, source: knownSource(latticeKnown), fromMemory: false, count: 1, solved: false };
     if (latticeKnown.method) notes.push(`lattice enthalpy ${+latticeKnown.value.toFixed(1)} ± ${+latticeKnown.u.toFixed(1)} kJ/mol from ${latticeKnown.method}`);
     if (solve === 'formation') {
       value = exactSum([{ coefficient: 1, value: pathSum(path) }, { coefficient: -1, value: latticeKnown.value }]);

@@ -37,5 +37,6 @@ export function thermalElectronEnthalpy(charge: number, temperature: number = ST
   charge = numberArgument(charge, 'charge', 'the charge of the ion', { min: -12, max: 12, integer: true });
   numberArgument(temperature, 'temperature', 'the temperature in K', { min: 0, above: true, max: 100_000 });
   if (charge === 0) return 0;
-  return (charge * 2.5 * GAS_CONSTANT * temperature) / 1000;
+  const h = (charge * 2.5 * GAS_CONSTANT * temperature) / 1000;
+  return h === 0 ? 0 : h; // a denormal temperature can underflow to −0
 }

@@ -207,9 +207,10 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
   if (fill === null || typeof fill !== 'object') throw invalid('fill', 'a pack fill is an object with solids, waterG and optionally startC and containerJPerK');
   if (!Array.isArray(fill.solids) || fill.solids.length === 0 || fill.solids.length > 100) throw invalid('solids', 'a pack fill needs from one to 100 solids (solids: [{ formula, massG }])');
   const waterG = checkPositive(fill.waterG, 'waterG', 'the water', 'g');
-  const startC = fill.startC ?? DEFAULT_START_C;
+  const startGiven = fill.startC ?? DEFAULT_START_C;
+  const startC = startGiven === 0 ? 0 : startGiven; // −0 reported as 0
   if (typeof startC !== 'number' || !Number.isFinite(startC) || startC < 0 || startC >= 100) {
-    throw invalid('startC', `the start temperature (startC) must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${String(startC)} °C`);
+    throw invalid('startC', `the start temperature (startC) must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${typeof startC === 'number' ? String(startC) : typeof startC} °C`);
   }
   const containerJPerK = fill.containerJPerK ?? 0;
   if (typeof containerJPerK !== 'number' || !Number.isFinite(containerJPerK) || containerJPerK < 0 || containerJPerK > FILL_RANGE.max) {
@@ -236,7 +237,8 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
   const sources = new Set<string>(water.sources);
   const seen = new Map<string, string>();
 
-  const solids = fill.solids.map((solid, i): PreparedSolid => {
+  // Array.from, not map: a hole in a sparse list is seen (as undefined) instead of skipped.
+  const solids = Array.from(fill.solids, (solid, i): PreparedSolid => {
     const field = `solids[${i}]`;
     if (solid === null || typeof solid !== 'object') throw invalid(field, `${field} must be an object { formula, massG }`);
     if (typeof solid.formula !== 'string' || solid.formula.trim() === '') throw invalid(`${field}.formula`, `${field}.formula must be a salt formula`);

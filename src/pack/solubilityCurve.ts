@@ -181,5 +181,5 @@ export function solubilityAt(curve: SolubilityCurve, t: number): SolubilityAt {
   const q = pts[k + 1]!;
   const value = Math.max(0, p.value + ((q.value - p.value) * (t - p.t)) / (q.t - p.t));
   const near = t - p.t <= q.t - t ? p : q;
-  return { value, phase: near.phase, phaseWater: near.phaseWater, extrapolated: t < pts[0]!.t || t > pts[n - 1]!.t };
+  return { value: value === 0 ? 0 : value, phase: near.phase, phaseWater: near.phaseWater === 0 ? 0 : near.phaseWater, extrapolated: t < pts[0]!.t || t > pts[n - 1]!.t };
 }

@@ -46,5 +46,6 @@ export function roundToUncertainty(value: number, u: number): { value: number; u
     exponent = lastDigitExponent(roundedU);
     roundedU = roundToExponent(u, exponent);
   }
-  return { value: roundToExponent(value, exponent), u: roundedU, exponent };
+  const rounded = roundToExponent(value, exponent);
+  return { value: rounded === 0 ? 0 : rounded, u: roundedU, exponent };
 }

@@ -293,6 +293,7 @@ export function dissolve(formula: string | Salt, options: DissolveOptions = {}, 
   const hide = options.excludeMeasured === true;
   const celsius = options.temperatureC ?? TABLE_TEMPERATURE_C;
   checkKirchhoffTemperature(celsius);
+  if (Object.is(celsius, -0)) return dissolve(salt, { ...options, temperatureC: 0 }, dataset);
   const notes: string[] = [];
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
 

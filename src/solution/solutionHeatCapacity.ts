@@ -4,7 +4,7 @@
  *
  * @module
  */
-import { estimateArgument, numberArgument } from '../quantity/argumentChecks.js';
+import { describeValue, estimateArgument, numberArgument } from '../quantity/argumentChecks.js';
 import { saltArgument } from '../chem/saltArgument.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
@@ -106,7 +106,7 @@ export function checkKirchhoffTemperature(temperatureC: number): void {
   if (typeof temperatureC !== 'number' || !Number.isFinite(temperatureC) || temperatureC < KIRCHHOFF_RANGE_C.min || temperatureC > KIRCHHOFF_RANGE_C.max) {
     throw new IonheatError(
       'INVALID_ARGUMENT',
-      `the temperature ${String(temperatureC)} °C is outside ${KIRCHHOFF_RANGE_C.min}–${KIRCHHOFF_RANGE_C.max} °C, the range over which ionheat corrects enthalpies of solution for temperature`,
+      `the temperature ${describeValue(temperatureC)} °C is outside ${KIRCHHOFF_RANGE_C.min}–${KIRCHHOFF_RANGE_C.max} °C, the range over which ionheat corrects enthalpies of solution for temperature`,
       { field: 'temperature' },
     );
   }
