@@ -30,9 +30,18 @@ function canonical(name: TableName, formula: string, i: number, dataset: Dataset
   }
 }
 
+/** The memo key of each table's index (written out, so that a look-up builds no string). */
+const INDEX_KEYS: Readonly<Record<SaltTable, string>> = {
+  'compound-formation.json': 'chem.saltRecords.compound-formation.json',
+  'solution-enthalpies.json': 'chem.saltRecords.solution-enthalpies.json',
+  'crystals.json': 'chem.saltRecords.crystals.json',
+  'solubility.json': 'chem.saltRecords.solubility.json',
+  'heat-capacities.json': 'chem.saltRecords.heat-capacities.json',
+};
+
 /** Records of a formula-keyed table grouped by canonical formula, built once per dataset. */
 export function saltRecordIndex<N extends SaltTable>(name: N, dataset: Dataset): ReadonlyMap<string, readonly TableRecord<N>[]> {
-  return dataset.memo(`chem.saltRecords.${name}`, () => {
+  return dataset.memo(INDEX_KEYS[name], () => {
     const index = new Map<string, TableRecord<N>[]>();
     dataset.records(name).forEach((record, i) => {
       const key = canonical(name, (record as { formula: string }).formula, i, dataset);

@@ -96,7 +96,8 @@ export class Dataset {
    * for the dataset's life (indexes, calibrations). `key` names the builder.
    */
   memo<T>(key: string, build: () => T): T {
-    if (this.#memo.has(key)) return this.#memo.get(key) as T;
+    const found = this.#memo.get(key);
+    if (found !== undefined || this.#memo.has(key)) return found as T;
     const value = build();
     this.#memo.set(key, value);
     return value;

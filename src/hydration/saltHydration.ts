@@ -5,8 +5,9 @@
  *
  * @module
  */
+import { IonheatError } from '../error.js';
 import { saltArgument } from '../chem/saltArgument.js';
-import { optionsArgument } from '../quantity/argumentChecks.js';
+import { describeValue, optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
@@ -21,6 +22,57 @@ export interface SaltHydrationOptions {
   scale?: HydrationScale;
   /** Let Born estimates stand in for ions without tabulated values (default true). */
   born?: boolean;
+}
+
+/** One ion's term on one scale, tabulated or (where allowed) a Born estimate; undefined when neither exists. */
+function ionTerm(ion: string, charge: number, scale: HydrationScale, born: boolean, dataset: Dataset): HydrationTerm | undefined {
+  let term = tabulatedHydrationTerm(ion, scale, dataset);
+  if (!term && born) {
+    const estimate = bornHydrationEnthalpy(ion, {}, dataset);
+    const proton = protonHydration(dataset);
+    if (estimate && (scale === 'absolute' || proton)) {
+      // The Born value is absolute; on the conventional scale subtract z·ΔhydH°abs(H⁺).
+      const shift = scale === 'conventional' ? -charge * proton!.value : 0;
+      term = { ion, charge, value: estimate.value + shift, u: estimate.u, sources: estimate.sources, fromMemory: false, kind: 'born', notes: estimate.notes };
+    }
+  }
+  return term;
+}
+
+/**
+ * Each ion's term per scale (with and without Born estimates), built on
+ * first use and kept per dataset: per-ion data, shared by every salt of the
+ * ion. The terms kept are never handed out (see {@link saltHydrationTerms}).
+ */
+function ionTerms(dataset: Dataset): Record<HydrationScale, { born: Map<string, HydrationTerm | null>; tabulated: Map<string, HydrationTerm | null> }> {
+  return dataset.memo('hydration.ionTerms', () => ({ absolute: { born: new Map(), tabulated: new Map() }, conventional: { born: new Map(), tabulated: new Map() } }));
+}
+
+/** The options as a caller passes them: an object whose `scale`, when given, is absolute or conventional. */
+function hydrationOptions(options: SaltHydrationOptions | undefined): SaltHydrationOptions {
+  const o = optionsArgument(options);
+  if (o.scale !== undefined && o.scale !== 'absolute' && o.scale !== 'conventional') throw new IonheatError('INVALID_ARGUMENT', `scale must be absolute or conventional, got ${describeValue(o.scale)}`, { field: 'scale' });
+  return o;
+}
+
+/** The kept terms of a salt's hydration sum (shared: not to be changed or handed out), or undefined when an ion has no value. */
+function keptTerms(salt: Salt, options: SaltHydrationOptions, dataset: Dataset): { term: HydrationTerm; count: number }[] | undefined {
+  if (salt.kind !== 'ionic') return undefined;
+  const scale = options.scale ?? 'absolute';
+  const born = options.born !== false;
+  const byScale = ionTerms(dataset)[scale];
+  const cache = born ? byScale.born : byScale.tabulated;
+  const out: { term: HydrationTerm; count: number }[] = [];
+  for (const { ion, count, charge } of salt.ions) {
+    let term = cache.get(ion);
+    if (term === undefined) {
+      term = ionTerm(ion, charge, scale, born, dataset) ?? null;
+      cache.set(ion, term);
+    }
+    if (!term) return undefined;
+    out.push({ term, count });
+  }
+  return out;
 }
 
 /**
@@ -45,25 +97,8 @@ export interface SaltHydrationOptions {
  */
 export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {}, dataset: Dataset = builtinDataset()): { term: HydrationTerm; count: number }[] | undefined {
   salt = saltArgument(salt, dataset);
-  options = optionsArgument(options);
-  if (salt.kind !== 'ionic') return undefined;
-  const scale = options.scale ?? 'absolute';
-  const out: { term: HydrationTerm; count: number }[] = [];
-  for (const { ion, count, charge } of salt.ions) {
-    let term = tabulatedHydrationTerm(ion, scale, dataset);
-    if (!term && options.born !== false) {
-      const born = bornHydrationEnthalpy(ion, {}, dataset);
-      const proton = protonHydration(dataset);
-      if (born && (scale === 'absolute' || proton)) {
-        // The Born value is absolute; on the conventional scale subtract z·ΔhydH°abs(H⁺).
-        const shift = scale === 'conventional' ? -charge * proton!.value : 0;
-        term = { ion, charge, value: born.value + shift, u: born.u, sources: born.sources, fromMemory: false, kind: 'born', notes: born.notes };
-      }
-    }
-    if (!term) return undefined;
-    out.push({ term, count });
-  }
-  return out;
+  options = hydrationOptions(options);
+  return keptTerms(salt, options, dataset)?.map(({ term, count }) => ({ term: { ...term, sources: [...term.sources], notes: [...term.notes] }, count }));
 }
 
 /**
@@ -89,23 +124,34 @@ export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {
  * ```
  */
 export function saltHydrationEnthalpy(salt: Salt, options: SaltHydrationOptions = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
-  options = optionsArgument(options);
-  const terms = saltHydrationTerms(salt, options, dataset);
+  salt = saltArgument(salt, dataset);
+  options = hydrationOptions(options);
+  const terms = keptTerms(salt, options, dataset);
   if (!terms) return undefined;
   const scale = options.scale ?? 'absolute';
-  const born = terms.filter((t) => t.term.kind === 'born');
-  const memory = terms.filter((t) => t.term.fromMemory).map((t) => t.term.ion);
+  // Plain loops: this runs for every salt dissolve is asked about.
+  const sum: { coefficient: number; value: number }[] = [];
+  const us: { coefficient: number; u: number }[] = [];
+  const sources: string[] = [];
+  const notes: string[] = [];
+  const memory: string[] = [];
+  for (const { term, count } of terms) {
+    sum.push({ coefficient: count, value: term.value });
+    us.push({ coefficient: count, u: term.u });
+    for (const source of term.sources) sources.push(source);
+    if (term.kind === 'born') notes.push(`${term.ion}: ${term.notes[0] ?? 'Born estimate'}`);
+    if (term.fromMemory && !memory.includes(term.ion)) memory.push(term.ion);
+  }
+  const born = notes.length > 0;
+  if (memory.length > 0) notes.push(`entered from memory, not checked against the source: ${memory.join(', ')}`);
   return makeEstimate({
     quantity: 'hydration enthalpy of the salt',
-    value: exactSum(terms.map((t) => ({ coefficient: t.count, value: t.term.value }))),
-    u: linearUncertainty(terms.map((t) => ({ coefficient: t.count, u: t.term.u }))),
+    value: exactSum(sum),
+    u: linearUncertainty(us),
     unit: 'kJ/mol',
-    basis: born.length > 0 ? 'model' : scale === 'absolute' ? 'measured' : 'cycle',
-    method: `${scale === 'absolute' ? 'marcus' : 'formation-enthalpies'}${born.length > 0 ? '+born-lps' : ''}`,
-    sources: terms.flatMap((t) => t.term.sources),
-    notes: [
-      ...born.map((t) => `${t.term.ion}: ${t.term.notes[0] ?? 'Born estimate'}`),
-      ...(memory.length > 0 ? [`entered from memory, not checked against the source: ${[...new Set(memory)].join(', ')}`] : []),
-    ],
+    basis: born ? 'model' : scale === 'absolute' ? 'measured' : 'cycle',
+    method: born ? (scale === 'absolute' ? 'marcus+born-lps' : 'formation-enthalpies+born-lps') : scale === 'absolute' ? 'marcus' : 'formation-enthalpies',
+    sources,
+    notes,
   });
 }

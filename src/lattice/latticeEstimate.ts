@@ -13,11 +13,13 @@ import { describeValue, numberArgument, optionsArgument } from '../quantity/argu
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
+import { saltRecords } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
-import { IonheatError, isIonheatError } from '../error.js';
+import { IonheatError, isIonheatError, type ErrorCode } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
-import { calibrationChargeType, calibrationGroups, calibrationStats, saltCationCore, saltIonKind } from './latticeCalibration.js';
-import { latticeModelPoint, latticeModels, type LatticeModel, type LatticeModelOptions, type ModelPoint } from './latticeModel.js';
+import { calibrationChargeType, calibrationGroups, calibrationStats, saltCationCore, saltIonKind, type CalibrationStats } from './latticeCalibration.js';
+import { latticeModels, PointFailure, prepareLatticeSalt, tryLatticeModelPoint, type LatticeModel, type LatticeModelOptions, type ModelPoint } from './latticeModel.js';
+import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 export { cycleLatticeEnthalpy, type CycleLatticeOptions } from '../cycle/cycleLatticeEnthalpy.js';
 export type { LatticeModel, LatticeModelOptions } from './latticeModel.js';
@@ -178,12 +180,8 @@ function cachedPoint(s: Salt, model: LatticeModel, options: LatticeModelOptions,
   const key = `${model}|${s.formula}|${options.structure ?? ''}|${options.latticeParameter ?? ''}|${options.coordination ?? ''}`;
   let hit = cache.get(key);
   if (hit === undefined) {
-    try {
-      hit = latticeModelPoint(s, model, options, dataset);
-    } catch (e) {
-      if (!isIonheatError(e)) throw e;
-      hit = e;
-    }
+    const point = tryLatticeModelPoint(s, model, options, dataset, []);
+    hit = point instanceof PointFailure ? point.error() : point;
     if (cache.size >= CACHE_LIMIT) cache.clear();
     cache.set(key, hit);
   }
@@ -203,6 +201,14 @@ function canonicalFormula(text: string, dataset: Dataset): string {
   return f;
 }
 
+/** The calibrated value and standard uncertainty of a method from its model point: see {@link latticeEstimate}. */
+function calibrated(est: number, corrected: boolean, stats: CalibrationStats): { value: number; u: number } {
+  const prediction = Math.sqrt(1 + 1 / stats.n);
+  const value = corrected ? est * (1 + stats.bias) : est;
+  const u = corrected ? Math.abs(est) * stats.scatter * prediction : Math.abs(est) * Math.hypot(stats.bias, stats.scatter * prediction);
+  return { value, u };
+}
+
 function computeEstimate(s: Salt, method: LatticeMethod, options: LatticeEstimateOptions, dataset: Dataset): Estimate {
   const { model, corrected } = readMethod(method);
   const point = cachedPoint(s, model, options, dataset);
@@ -212,14 +218,12 @@ function computeEstimate(s: Salt, method: LatticeMethod, options: LatticeEstimat
   if (!stats) {
     throw new IonheatError('MISSING_DATA', `the ${model} estimator has fewer than three salts with a closed cycle to calibrate its interval in the ${dataset.label} tables`, { text: s.formula, field: 'calibration' });
   }
-  const prediction = Math.sqrt(1 + 1 / stats.n);
   const est = point.value;
-  const value = corrected ? est * (1 + stats.bias) : est;
-  const u = corrected ? Math.abs(est) * stats.scatter * prediction : Math.abs(est) * Math.hypot(stats.bias, stats.scatter * prediction);
-  const pct = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(100 * x).toFixed(1)} %`;
+  const { value, u } = calibrated(est, corrected, stats);
+  const pct = (x: number) => `${x >= 0 ? '+' : '−'}${fixedDecimal(Math.abs(100 * x), 1)} %`;
   const notes = [
-    `${corrected ? 'bias-corrected; ' : ''}95 % interval from ${stats.n} salts (${stats.group}) with closed cycles, the salt itself left out: bias ${pct(stats.bias)}, scatter ${(100 * stats.scatter).toFixed(1)} %`,
-    `lattice energy U = ${+point.energy.toFixed(1)} kJ/mol before the enthalpy correction to 298.15 K`,
+    `${corrected ? 'bias-corrected; ' : ''}95 % interval from ${stats.n} salts (${stats.group}) with closed cycles, the salt itself left out: bias ${pct(stats.bias)}, scatter ${fixedDecimal(100 * stats.scatter, 1)} %`,
+    `lattice energy U = ${+fixedDecimal(point.energy, 1)} kJ/mol before the enthalpy correction to 298.15 K`,
     ...point.notes,
   ];
   return makeEstimate({
@@ -276,4 +280,99 @@ export function latticeEstimates(
     skipped.push({ method, reason: hit.message });
   }
   return { estimates, skipped };
+}
+
+/**
+ * A calibrated lattice enthalpy without its notes: the numbers and sources
+ * that estimates built on it (the `model` and `anchored` bases of the
+ * enthalpy of solution) take from it. The same numbers as
+ * {@link latticeEstimate} with default options gives.
+ */
+export interface LatticeValue {
+  method: LatticeMethod;
+  /** kJ/mol, positive for crystal → gaseous ions. */
+  value: number;
+  u: number;
+  low: number;
+  high: number;
+  /** Source keys, in no particular order and possibly repeated (a result built on them sorts them). */
+  sources: readonly string[];
+}
+
+/** Every method's lattice values for one salt, and why {@link latticeEstimates} would fail for it. */
+export interface SaltLatticeValues {
+  /** The methods that apply, in the order of {@link latticeMethods}. */
+  values: LatticeValue[];
+  /**
+   * The code of the first failure of a method that is neither
+   * `NOT_APPLICABLE` nor `MISSING_DATA` (latticeEstimates would throw it),
+   * else undefined.
+   */
+  fatal: ErrorCode | undefined;
+  /** The plain value of each estimator, Kapustinskii's with every radius at coordination 6 (see the anchored basis). */
+  plainAtCn6: Map<LatticeModel, number>;
+}
+
+/** Each method with the index of its estimator in `latticeModels` and whether it is the corrected variant. */
+const METHOD_PARTS: readonly { method: LatticeMethod; model: number; corrected: boolean }[] = latticeMethods.map((method) => {
+  const corrected = method.endsWith(CORRECTED);
+  return { method, model: latticeModels.indexOf((corrected ? method.slice(0, -CORRECTED.length) : method) as LatticeModel), corrected };
+});
+
+/** The interval of a method as makeEstimate checks it; false where makeEstimate would refuse the numbers. */
+function valid(value: number, u: number, low: number, high: number): boolean {
+  return Number.isFinite(value) && Number.isFinite(u) && u >= 0 && Number.isFinite(low) && Number.isFinite(high) && low <= value && value <= high;
+}
+
+/**
+ * The lattice values of a salt by every method with default options, and
+ * the plain values with Kapustinskii's radii at coordination 6, computed
+ * afresh on every call and without notes or errors: the fast path for
+ * estimators that build on many salts' lattice enthalpies. Each value is
+ * the one {@link latticeEstimate} gives (its value, u and interval; its
+ * sources unsorted).
+ */
+export function saltLatticeValues(s: Salt, dataset: Dataset = builtinDataset()): SaltLatticeValues {
+  const values: LatticeValue[] = [];
+  const plainAtCn6 = new Map<LatticeModel, number>();
+  let fatal: ErrorCode | undefined;
+  if (s.kind !== 'ionic' || s.water > 0) return { values, fatal: 'NOT_APPLICABLE', plainAtCn6 };
+  const groups = calibrationGroups(calibrationChargeType(s), saltIonKind(s, dataset), saltCationCore(s, dataset));
+  const exclude = [s.formula];
+  // Without a structure type, Kapustinskii's default radii are those at coordination 6 already.
+  const structured = saltRecords('crystals.json', s, dataset)[0]?.structure !== undefined;
+  const points: (ModelPoint | PointFailure)[] = [];
+  const stats: (CalibrationStats | undefined)[] = [];
+  const prepared = prepareLatticeSalt(s, dataset);
+  for (const model of latticeModels) {
+    const point = tryLatticeModelPoint(s, model, {}, dataset, undefined, prepared);
+    const st = point instanceof PointFailure ? undefined : calibrationStats(model, groups, exclude, dataset);
+    points.push(point);
+    stats.push(st);
+    // The plain value at coordination 6 (Kapustinskii) or with default options (the others).
+    const at6 = model === 'kapustinskii' && structured ? tryLatticeModelPoint(s, model, { coordination: 6 }, dataset, undefined, prepared) : point;
+    if (!(at6 instanceof PointFailure) && st) {
+      const { value, u } = calibrated(at6.value, false, st);
+      if (valid(value, u, value - st.t * u, value + st.t * u)) plainAtCn6.set(model, value === 0 ? 0 : value);
+    }
+  }
+  for (const { method, model: i, corrected } of METHOD_PARTS) {
+    const point = points[i]!;
+    const st = stats[i];
+    let code: ErrorCode | undefined;
+    if (point instanceof PointFailure) code = point.code;
+    else if (!st) code = 'MISSING_DATA';
+    else {
+      const { value, u } = calibrated(point.value, corrected, st);
+      const low = value - st.t * u;
+      const high = value + st.t * u;
+      if (valid(value, u, low, high)) {
+        values.push({ method, value: value === 0 ? 0 : value, u, low, high, sources: [...point.sources, 'jenkins2005'] });
+        continue;
+      }
+      code = 'INVALID_ARGUMENT';
+    }
+    if (fatal === undefined && code !== 'NOT_APPLICABLE' && code !== 'MISSING_DATA') fatal = code;
+  }
+  return { values, fatal, plainAtCn6 };
 }

@@ -8,7 +8,7 @@ import type { Dataset } from '../data/dataset.js';
 import type { Salt } from '../chem/salt.js';
 import { chargeType } from '../chem/salt.js';
 import { saltRecords } from '../chem/saltRecords.js';
-import { IonheatError } from '../error.js';
+import { IonheatError, isIonheatError, type ErrorCode } from '../error.js';
 import { bornLande } from './bornLande.js';
 import { bornMayer } from './bornMayer.js';
 import { formulaUnitVolume } from './formulaUnitVolume.js';
@@ -19,6 +19,7 @@ import { latticeEnthalpyCorrection } from './latticeEnthalpyCorrection.js';
 import { latticeIons, type LatticeIon } from './latticeIons.js';
 import { saltStructure, shortestDistance, type SaltStructure } from './latticeStructure.js';
 import { vbtLatticeEnergy } from './vbtLatticeEnergy.js';
+import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 /** The estimators. */
 export type LatticeModel = 'kapustinskii' | 'born-lande' | 'born-mayer' | 'vbt';
@@ -53,20 +54,36 @@ interface SaltIons {
   anions: { ion: LatticeIon; count: number }[];
 }
 
-function applicable(salt: Salt): void {
-  if (salt.kind !== 'ionic') throw new IonheatError('NOT_APPLICABLE', `${salt.formula} is a non-electrolyte: it forms a molecular crystal, not an ionic lattice`, { text: salt.formula });
-  if (salt.water > 0) {
-    throw new IonheatError('NOT_APPLICABLE', `${salt.formula} is a hydrate; lattice enthalpies are estimated for the anhydrous salt (${salt.anhydrous})`, { text: salt.formula });
-  }
+/**
+ * An estimator that cannot be applied to a salt: the error code, and the
+ * error for people, built only when it is asked for (so that callers that
+ * try every estimator on many salts pay for neither a message nor a stack).
+ */
+export class PointFailure {
+  constructor(
+    readonly code: ErrorCode,
+    readonly error: () => IonheatError,
+  ) {}
 }
 
-function ionsOf(salt: Salt, dataset: Dataset): SaltIons {
+/** Notes of a model point: a list to fill, or undefined when the caller wants numbers and sources only. */
+type Notes = string[] | undefined;
+
+function applicable(salt: Salt): PointFailure | undefined {
+  if (salt.kind !== 'ionic') return new PointFailure('NOT_APPLICABLE', () => new IonheatError('NOT_APPLICABLE', `${salt.formula} is a non-electrolyte: it forms a molecular crystal, not an ionic lattice`, { text: salt.formula }));
+  if (salt.water > 0) {
+    return new PointFailure('NOT_APPLICABLE', () => new IonheatError('NOT_APPLICABLE', `${salt.formula} is a hydrate; lattice enthalpies are estimated for the anhydrous salt (${salt.anhydrous})`, { text: salt.formula }));
+  }
+  return undefined;
+}
+
+function ionsOf(salt: Salt, dataset: Dataset): SaltIons | PointFailure {
   const index = latticeIons(dataset);
   const cations: SaltIons['cations'] = [];
   const anions: SaltIons['anions'] = [];
   for (const { ion, count } of salt.ions) {
     const li = index.get(ion);
-    if (!li) throw new IonheatError('UNKNOWN_ION', `the ion ${ion} of ${salt.formula} is not in the ${dataset.label} ion table`, { text: salt.formula });
+    if (!li) return new PointFailure('UNKNOWN_ION', () => new IonheatError('UNKNOWN_ION', `the ion ${ion} of ${salt.formula} is not in the ${dataset.label} ion table`, { text: salt.formula }));
     (li.charge > 0 ? cations : anions).push({ ion: li, count });
   }
   return { cations, anions };
@@ -79,68 +96,110 @@ function correction(salt: SaltIons): number {
   return latticeEnthalpyCorrection(list);
 }
 
-function radiusOf(ion: LatticeIon, cn: number, salt: Salt, dataset: Dataset, notes: string[], sources: string[]): ChosenRadius {
+function radiusOf(ion: LatticeIon, cn: number, salt: Salt, dataset: Dataset, notes: Notes, sources: string[]): ChosenRadius | PointFailure {
   const r = ionRadius(ion, cn);
   if (!r) {
-    throw new IonheatError(
+    return new PointFailure(
       'MISSING_DATA',
-      `no radius for ${ion.text} (neither a Shannon radius in shannon-radii.json nor a thermochemical radius in thermochemical-radii.json of the ${dataset.label} tables), needed for ${salt.formula}`,
-      { text: salt.formula, field: ion.id },
+      () =>
+        new IonheatError(
+          'MISSING_DATA',
+          `no radius for ${ion.text} (neither a Shannon radius in shannon-radii.json nor a thermochemical radius in thermochemical-radii.json of the ${dataset.label} tables), needed for ${salt.formula}`,
+          { text: salt.formula, field: ion.id },
+        ),
     );
   }
   sources.push(r.source);
-  if (r.substituted) notes.push(`${ion.text}: Shannon radius at CN ${r.cn} (none tabulated at CN ${cn})`);
-  if (r.fromMemory) notes.push(`${ion.text} radius ${r.value} Å entered from memory, not checked against the source`);
+  if (r.substituted) notes?.push(`${ion.text}: Shannon radius at CN ${r.cn} (none tabulated at CN ${cn})`);
+  if (r.fromMemory) notes?.push(`${ion.text} radius ${r.value} Å entered from memory, not checked against the source`);
   return r;
 }
 
 /** Coordination numbers for the radii: the caller's, else the structure's, else 6. */
-function coordination(options: LatticeModelOptions, structure: SaltStructure | undefined): { cation: number; anion: number } {
+function coordination(options: LatticeModelOptions, structure: SaltStructure | undefined): { cation: number; anion: number } | PointFailure {
   if (options.coordination !== undefined) {
     const cn = options.coordination;
-    if (!(Number.isInteger(cn) && cn >= 2 && cn <= 14)) throw new IonheatError('INVALID_ARGUMENT', `a coordination number is a whole number from 2 to 14, got ${cn}`, { field: 'coordination' });
+    if (!(Number.isInteger(cn) && cn >= 2 && cn <= 14)) return new PointFailure('INVALID_ARGUMENT', () => new IonheatError('INVALID_ARGUMENT', `a coordination number is a whole number from 2 to 14, got ${cn}`, { field: 'coordination' }));
     return { cation: cn, anion: cn };
   }
   if (structure) return { cation: structure.madelung.cationCoordination, anion: structure.madelung.anionCoordination };
   return { cation: 6, anion: 6 };
 }
 
-function meanRadius(list: SaltIons['cations'], cn: number, salt: Salt, dataset: Dataset, notes: string[], sources: string[]): number {
+function meanRadius(list: SaltIons['cations'], cn: number, salt: Salt, dataset: Dataset, notes: Notes, sources: string[]): number | PointFailure {
   let sum = 0;
   let n = 0;
   for (const { ion, count } of list) {
-    sum += count * radiusOf(ion, cn, salt, dataset, notes, sources).value;
+    const r = radiusOf(ion, cn, salt, dataset, notes, sources);
+    if (r instanceof PointFailure) return r;
+    sum += count * r.value;
     n += count;
   }
   return sum / n;
 }
 
-function kapustinskiiPoint(salt: Salt, ions: SaltIons, options: LatticeModelOptions, dataset: Dataset): ModelPoint {
-  const structure = saltStructure(salt, options, dataset);
+/** The structure of a salt (see {@link saltStructure}), its errors as failures. */
+function structureOf(salt: Salt, options: LatticeModelOptions, dataset: Dataset): SaltStructure | undefined | PointFailure {
+  try {
+    return saltStructure(salt, options, dataset);
+  } catch (e) {
+    if (!isIonheatError(e)) throw e;
+    return new PointFailure(e.code, () => e);
+  }
+}
+
+/**
+ * What every estimator reads of a salt, gathered once: its ions, its
+ * structure with default structure options, and the energy → enthalpy
+ * correction.
+ */
+export interface PreparedSalt {
+  ions: SaltIons;
+  structure: SaltStructure | undefined | PointFailure;
+  correction: number;
+}
+
+/** The structure for these options: the prepared one unless the options name a structure or a lattice parameter. */
+function structureFor(salt: Salt, prepared: PreparedSalt, options: LatticeModelOptions, dataset: Dataset): SaltStructure | undefined | PointFailure {
+  return options.structure === undefined && options.latticeParameter === undefined ? prepared.structure : structureOf(salt, options, dataset);
+}
+
+function kapustinskiiPoint(salt: Salt, prepared: PreparedSalt, options: LatticeModelOptions, dataset: Dataset, notes: Notes): ModelPoint | PointFailure {
+  const ions = prepared.ions;
+  const structure = structureFor(salt, prepared, options, dataset);
+  if (structure instanceof PointFailure) return structure;
   const cn = coordination(options, structure);
-  const notes: string[] = [];
+  if (cn instanceof PointFailure) return cn;
   const sources = ['kapustinskii1956'];
-  const d = meanRadius(ions.cations, cn.cation, salt, dataset, notes, sources) + meanRadius(ions.anions, cn.anion, salt, dataset, notes, sources);
+  const rc = meanRadius(ions.cations, cn.cation, salt, dataset, notes, sources);
+  if (rc instanceof PointFailure) return rc;
+  const ra = meanRadius(ions.anions, cn.anion, salt, dataset, notes, sources);
+  if (ra instanceof PointFailure) return ra;
+  const d = rc + ra;
   let chargeFactor = 0;
   for (const { ion, count } of ions.cations) chargeFactor += count * ion.charge * ion.charge;
   for (const { ion, count } of ions.anions) chargeFactor += count * ion.charge * ion.charge;
   if (ions.cations.length > 1 || ions.anions.length > 1) {
-    notes.push('several kinds of ion: Σnz² and the count-weighted mean cation–anion distance stand in for ν|z₊z₋| and r₊ + r₋ (Glasser 1995)');
+    notes?.push('several kinds of ion: Σnz² and the count-weighted mean cation–anion distance stand in for ν|z₊z₋| and r₊ + r₋ (Glasser 1995)');
     if (dataset.source('glasser1995')) sources.push('glasser1995');
   }
   const energy = kapustinskii(chargeFactor, d);
-  return { value: energy + correction(ions), energy, sources, notes };
+  return { value: energy + prepared.correction, energy, sources, notes: notes ?? [] };
 }
 
-function bornExponent(ions: SaltIons, salt: Salt, dataset: Dataset, sources: string[]): number {
+function bornExponent(ions: SaltIons, salt: Salt, dataset: Dataset, sources: string[]): number | PointFailure {
   let sum = 0;
   let n = 0;
   for (const { ion, count } of [...ions.cations, ...ions.anions]) {
     if (!ion.bornExponent) {
-      throw new IonheatError('MISSING_DATA', `no Born exponent for ${ion.text} (its noble-gas core ${ion.bornCore ?? 'is not given'} has no record in born-exponents.json of the ${dataset.label} tables), needed for ${salt.formula}`, {
-        text: salt.formula,
-        field: ion.id,
-      });
+      return new PointFailure(
+        'MISSING_DATA',
+        () =>
+          new IonheatError('MISSING_DATA', `no Born exponent for ${ion.text} (its noble-gas core ${ion.bornCore ?? 'is not given'} has no record in born-exponents.json of the ${dataset.label} tables), needed for ${salt.formula}`, {
+            text: salt.formula,
+            field: ion.id,
+          }),
+      );
     }
     sources.push(ion.bornExponent.source);
     sum += count * ion.bornExponent.value;
@@ -150,18 +209,26 @@ function bornExponent(ions: SaltIons, salt: Salt, dataset: Dataset, sources: str
 }
 
 /** Madelung constant × charge factor, and r₀, for Born–Landé and Born–Mayer. */
-function madelungTerms(salt: Salt, ions: SaltIons, options: LatticeModelOptions, dataset: Dataset, notes: string[], sources: string[]): { a: number; zz: number; r0: number } {
-  const structure = saltStructure(salt, options, dataset);
+function madelungTerms(salt: Salt, prepared: PreparedSalt, options: LatticeModelOptions, dataset: Dataset, notes: Notes, sources: string[]): { a: number; zz: number; r0: number } | PointFailure {
+  const ions = prepared.ions;
+  const structure = structureFor(salt, prepared, options, dataset);
+  if (structure instanceof PointFailure) return structure;
   if (!structure && (ions.cations.length > 1 || ions.anions.length > 1)) {
-    throw new IonheatError('NOT_APPLICABLE', `${salt.formula} has several kinds of ion; a Madelung constant is tabulated for such a lattice only for the perovskite type (structure option)`, { text: salt.formula, field: 'structure' });
+    return new PointFailure(
+      'NOT_APPLICABLE',
+      () => new IonheatError('NOT_APPLICABLE', `${salt.formula} has several kinds of ion; a Madelung constant is tabulated for such a lattice only for the perovskite type (structure option)`, { text: salt.formula, field: 'structure' }),
+    );
   }
   if (!structure) {
-    throw new IonheatError('MISSING_DATA', `no structure type for ${salt.formula} in crystals.json of the ${dataset.label} tables; give one (structure option, e.g. rock-salt)`, { text: salt.formula, field: 'structure' });
+    return new PointFailure(
+      'MISSING_DATA',
+      () => new IonheatError('MISSING_DATA', `no structure type for ${salt.formula} in crystals.json of the ${dataset.label} tables; give one (structure option, e.g. rock-salt)`, { text: salt.formula, field: 'structure' }),
+    );
   }
   const m = structure.madelung;
   sources.push(m.source);
   if (structure.crystalSource && structure.origin === 'table') sources.push(structure.crystalSource);
-  if (m.fromMemory) notes.push(`Madelung constant of ${m.structure} entered from memory`);
+  if (m.fromMemory) notes?.push(`Madelung constant of ${m.structure} entered from memory`);
   let zz: number;
   let cationForR0: LatticeIon;
   const anion = ions.anions[0]!.ion;
@@ -171,7 +238,10 @@ function madelungTerms(salt: Salt, ions: SaltIons, options: LatticeModelOptions,
     const [a1, a2] = [ions.cations[0]!.ion, ions.cations[1]!.ion];
     const b = a1.charge === 2 * z && a2.charge === z ? a1 : a2.charge === 2 * z && a1.charge === z ? a2 : undefined;
     if (!b) {
-      throw new IonheatError('NOT_APPLICABLE', `the tabulated perovskite Madelung constant holds for the charge pattern A(+z) B(+2z) X(−z); ${salt.formula} does not follow it`, { text: salt.formula, field: 'structure' });
+      return new PointFailure(
+        'NOT_APPLICABLE',
+        () => new IonheatError('NOT_APPLICABLE', `the tabulated perovskite Madelung constant holds for the charge pattern A(+z) B(+2z) X(−z); ${salt.formula} does not follow it`, { text: salt.formula, field: 'structure' }),
+      );
     }
     zz = z * z;
     cationForR0 = b;
@@ -184,68 +254,85 @@ function madelungTerms(salt: Salt, ions: SaltIons, options: LatticeModelOptions,
   if (fromA !== undefined) {
     r0 = fromA;
     if (structure.latticeParameterSource && structure.latticeParameterSource !== 'option') sources.push(structure.latticeParameterSource);
-    notes.push(`r₀ = ${+r0.toFixed(4)} Å from the lattice parameter a = ${structure.latticeParameter} Å`);
+    notes?.push(`r₀ = ${+fixedDecimal(r0, 4)} Å from the lattice parameter a = ${structure.latticeParameter} Å`);
   } else {
     const cn = coordination(options, structure);
-    r0 = radiusOf(cationForR0, cn.cation, salt, dataset, notes, sources).value + radiusOf(anion, cn.anion, salt, dataset, notes, sources).value;
-    notes.push(`r₀ = ${+r0.toFixed(4)} Å as a sum of radii at CN ${cn.cation}/${cn.anion}`);
+    if (cn instanceof PointFailure) return cn;
+    const rc = radiusOf(cationForR0, cn.cation, salt, dataset, notes, sources);
+    if (rc instanceof PointFailure) return rc;
+    const ra = radiusOf(anion, cn.anion, salt, dataset, notes, sources);
+    if (ra instanceof PointFailure) return ra;
+    r0 = rc.value + ra.value;
+    notes?.push(`r₀ = ${+fixedDecimal(r0, 4)} Å as a sum of radii at CN ${cn.cation}/${cn.anion}`);
   }
   return { a: m.value, zz, r0 };
 }
 
-function bornPoint(model: 'born-lande' | 'born-mayer', salt: Salt, ions: SaltIons, options: LatticeModelOptions, dataset: Dataset): ModelPoint {
-  const notes: string[] = [];
+function bornPoint(model: 'born-lande' | 'born-mayer', salt: Salt, prepared: PreparedSalt, options: LatticeModelOptions, dataset: Dataset, notes: Notes): ModelPoint | PointFailure {
+  const ions = prepared.ions;
   const sources: string[] = [model === 'born-lande' ? 'born1918' : 'born1932'];
-  const { a, zz, r0 } = madelungTerms(salt, ions, options, dataset, notes, sources);
+  const terms = madelungTerms(salt, prepared, options, dataset, notes, sources);
+  if (terms instanceof PointFailure) return terms;
+  const { a, zz, r0 } = terms;
   let energy: number;
   if (model === 'born-lande') {
     const n = bornExponent(ions, salt, dataset, sources);
+    if (n instanceof PointFailure) return n;
     energy = bornLande(a, zz, r0, n);
   } else {
     energy = bornMayer(a, zz, r0);
   }
-  return { value: energy + correction(ions), energy, sources, notes };
+  return { value: energy + prepared.correction, energy, sources, notes: notes ?? [] };
 }
 
-function vbtPoint(salt: Salt, ions: SaltIons, dataset: Dataset): ModelPoint {
-  const notes: string[] = [];
+function vbtPoint(salt: Salt, prepared: PreparedSalt, dataset: Dataset, notes: Notes): ModelPoint | PointFailure {
+  const ions = prepared.ions;
   const sources: string[] = [];
   const crystal = saltRecords('crystals.json', salt, dataset)[0];
   let volume: number;
   if (crystal?.density !== undefined) {
     volume = formulaUnitVolume(salt.molarMass, crystal.density);
     sources.push(crystal.source);
-    if (crystal.fromMemory) notes.push(`density of ${salt.formula} entered from memory`);
+    if (crystal.fromMemory) notes?.push(`density of ${salt.formula} entered from memory`);
   } else {
     volume = 0;
     for (const { ion, count } of [...ions.cations, ...ions.anions]) {
       if (!ion.volume) {
-        throw new IonheatError('MISSING_DATA', `no density of ${salt.formula} in crystals.json and no volume of ${ion.text} in ion-volumes.json of the ${dataset.label} tables, needed for the formula-unit volume`, {
-          text: salt.formula,
-          field: ion.id,
-        });
+        return new PointFailure(
+          'MISSING_DATA',
+          () =>
+            new IonheatError('MISSING_DATA', `no density of ${salt.formula} in crystals.json and no volume of ${ion.text} in ion-volumes.json of the ${dataset.label} tables, needed for the formula-unit volume`, {
+              text: salt.formula,
+              field: ion.id,
+            }),
+        );
       }
       volume += count * ion.volume.value;
       sources.push(ion.volume.source);
     }
-    notes.push(`formula-unit volume ${+volume.toFixed(5)} nm³ as a sum of ion volumes (no density tabulated)`);
+    notes?.push(`formula-unit volume ${+fixedDecimal(volume, 5)} nm³ as a sum of ion volumes (no density tabulated)`);
   }
   let ionicStrength = 0;
   for (const { ion, count } of [...ions.cations, ...ions.anions]) ionicStrength += (count * ion.charge * ion.charge) / 2;
   const type = chargeType(salt);
   const coefficients = dataset.memo('lattice.volumeCoefficients', () => new Map(dataset.records('volume-coefficients.json').map((r) => [r.chargeType, r])));
   const rec = (type !== undefined ? coefficients.get(type as never) : undefined) ?? coefficients.get('general');
-  if (!rec) throw new IonheatError('MISSING_DATA', `no volume-based coefficients for charge type ${type ?? 'of a mixed salt'} nor general ones in volume-coefficients.json of the ${dataset.label} tables`, { text: salt.formula });
-  if (rec.chargeType === 'general' && type !== 'general') notes.push(`general α, β (no fit for charge type ${type ?? 'of a mixed salt'})`);
+  if (!rec) {
+    return new PointFailure(
+      'MISSING_DATA',
+      () => new IonheatError('MISSING_DATA', `no volume-based coefficients for charge type ${type ?? 'of a mixed salt'} nor general ones in volume-coefficients.json of the ${dataset.label} tables`, { text: salt.formula }),
+    );
+  }
+  if (rec.chargeType === 'general' && type !== 'general') notes?.push(`general α, β (no fit for charge type ${type ?? 'of a mixed salt'})`);
   sources.push(rec.source);
-  if (rec.fromMemory) notes.push(`volume-based coefficients (${rec.chargeType}) entered from memory`);
+  if (rec.fromMemory) notes?.push(`volume-based coefficients (${rec.chargeType}) entered from memory`);
   let energy = vbtLatticeEnergy(ionicStrength, volume, rec.alpha, rec.beta);
   if (energy > GLASSER_THRESHOLD) {
     energy = glasserLatticeEnergy(ionicStrength, volume);
-    notes.push(`lattice energy above ${GLASSER_THRESHOLD} kJ/mol: Glasser's form U = A·I·(2I/V)^(1/3) used`);
+    notes?.push(`lattice energy above ${GLASSER_THRESHOLD} kJ/mol: Glasser's form U = A·I·(2I/V)^(1/3) used`);
     sources.push(dataset.source('glasser1995') ? 'glasser1995' : 'glasser2000');
   }
-  return { value: energy + correction(ions), energy, sources, notes };
+  return { value: energy + prepared.correction, energy, sources, notes: notes ?? [] };
 }
 
 /**
@@ -256,16 +343,48 @@ function vbtPoint(salt: Salt, ions: SaltIons, dataset: Dataset): ModelPoint {
  *   structure or Born exponent missing), `INVALID_ARGUMENT` (bad options)
  */
 export function latticeModelPoint(salt: Salt, model: LatticeModel, options: LatticeModelOptions, dataset: Dataset): ModelPoint {
-  applicable(salt);
-  const ions = ionsOf(salt, dataset);
-  if (ions.cations.length === 0 || ions.anions.length === 0) throw new IonheatError('NOT_APPLICABLE', `${salt.formula} needs both cations and anions for a lattice`, { text: salt.formula });
+  const point = tryLatticeModelPoint(salt, model, options, dataset, []);
+  if (point instanceof PointFailure) throw point.error();
+  return point;
+}
+
+/**
+ * {@link latticeModelPoint} that returns its failure instead of throwing
+ * it, and writes its notes into `notes` (none at all when `notes` is
+ * undefined: the point's `notes` is then empty). The numbers and sources
+ * are the same either way.
+ */
+export function tryLatticeModelPoint(
+  salt: Salt,
+  model: LatticeModel,
+  options: LatticeModelOptions,
+  dataset: Dataset,
+  notes: string[] | undefined,
+  prepared: PreparedSalt | PointFailure = prepareLatticeSalt(salt, dataset),
+): ModelPoint | PointFailure {
+  if (prepared instanceof PointFailure) return prepared;
   switch (model) {
     case 'kapustinskii':
-      return kapustinskiiPoint(salt, ions, options, dataset);
+      return kapustinskiiPoint(salt, prepared, options, dataset, notes);
     case 'born-lande':
     case 'born-mayer':
-      return bornPoint(model, salt, ions, options, dataset);
+      return bornPoint(model, salt, prepared, options, dataset, notes);
     case 'vbt':
-      return vbtPoint(salt, ions, dataset);
+      return vbtPoint(salt, prepared, dataset, notes);
   }
+}
+
+/**
+ * What {@link tryLatticeModelPoint} reads of a salt for every estimator,
+ * gathered once (pass it to each call for the same salt); the failure that
+ * stops every estimator (a non-electrolyte, a hydrate, an ion the table
+ * lacks) otherwise.
+ */
+export function prepareLatticeSalt(salt: Salt, dataset: Dataset): PreparedSalt | PointFailure {
+  const notApplicable = applicable(salt);
+  if (notApplicable) return notApplicable;
+  const ions = ionsOf(salt, dataset);
+  if (ions instanceof PointFailure) return ions;
+  if (ions.cations.length === 0 || ions.anions.length === 0) return new PointFailure('NOT_APPLICABLE', () => new IonheatError('NOT_APPLICABLE', `${salt.formula} needs both cations and anions for a lattice`, { text: salt.formula }));
+  return { ions, structure: structureOf(salt, {}, dataset), correction: correction(ions) };
 }

@@ -16,8 +16,11 @@ import { solveFillTemperature, type FillSolution } from './solveFillTemperature.
 export interface UncertainInput {
   /** What it is, in words. */
   label: string;
-  /** Standard uncertainty, in the unit of the shift. */
+  /** Standard uncertainty, in the unit of the shift (for an interval wider than ±1.96·u, the one it implies). */
   u: number;
+  /** Distance from the value up to the top / down to the bottom of the input's own 95 % interval; ±1.96·u when absent. */
+  up?: number;
+  down?: number;
   /** The perturbation that moves this input by `shift`. */
   perturb(shift: number): Perturbation;
 }
@@ -59,12 +62,12 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
   const n = fill.solids.length;
   const shiftAt = (i: number, shift: number): number[] => Array.from({ length: n }, (_, k) => (k === i ? shift : 0));
   fill.solids.forEach((s, i) => {
-    inputs.push({ label: `enthalpy of solution of ${s.salt.formula}`, u: s.enthalpy.u, perturb: (shift) => ({ enthalpyShift: shiftAt(i, shift) }) });
+    inputs.push({ label: `enthalpy of solution of ${s.salt.formula}`, ...ownInterval(s.enthalpy), perturb: (shift) => ({ enthalpyShift: shiftAt(i, shift) }) });
     const state = solution.state.solids[i]!;
     if (state.converts && state.fraction < 1) {
       const phase = s.phases.get(state.undissolvedPhase);
-      const u = phase?.enthalpy?.u ?? 0;
-      inputs.push({ label: `enthalpy of solution of ${state.undissolvedPhase}`, u, perturb: (shift) => ({ phaseShift: shiftAt(i, shift) }) });
+      const spread = phase?.enthalpy ? ownInterval(phase.enthalpy) : { u: 0 };
+      inputs.push({ label: `enthalpy of solution of ${state.undissolvedPhase}`, ...spread, perturb: (shift) => ({ phaseShift: shiftAt(i, shift) }) });
     }
   });
   if (fill.heatCapacityOverride) {
@@ -74,6 +77,19 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
     inputs.push({ label: 'heat capacity from the parts', u: heatCapacityRelativeU(fill, solution), perturb: (shift) => ({ heatCapacityRelative: shift }) });
   }
   return inputs.filter((input) => input.u > 0);
+}
+
+/**
+ * An enthalpy's spread as its own 95 % interval gives it: the distances up
+ * and down to the interval's ends (which a Student-t factor or an anchor
+ * spread may have made wider than ±1.96·u, or lopsided), and the standard
+ * uncertainty a normal distribution of that width would have,
+ * u = (high − low)/(2·1.96), never less than the estimate's own u.
+ */
+function ownInterval(e: { value: number; u: number; low: number; high: number }): { u: number; up: number; down: number } {
+  const up = Math.max(e.high - e.value, 0);
+  const down = Math.max(e.value - e.low, 0);
+  return { u: Math.max(e.u, (up + down) / (2 * COVERAGE_95)), up, down };
 }
 
 /**
@@ -99,14 +115,15 @@ export function heatCapacityRelativeU(fill: PreparedFill, solution: FillSolution
  * The 95 % interval of the final temperature.
  *
  * `bounds` (the default): each uncertain input in turn is moved to the ends
- * of its own 95 % interval (±1.96·u) and the fill re-solved; the upward and
+ * of its own 95 % interval (an enthalpy to its `low` and `high`, which may be
+ * wider than ±1.96·u; the heat capacity by ±1.96·u) and the fill re-solved; the upward and
  * the downward shifts of the final temperature are each combined in
  * quadrature (first-order propagation, GUM, with separate sensitivities on
  * each side, so a solubility limit or the freezing clamp shows as a lopsided
  * interval). u is the root sum of squares of the central differences.
  *
- * `monte-carlo`: every input drawn together from its normal distribution
- * (seeded, default seed 1, 2000 draws), the fill solved for each draw, and
+ * `monte-carlo`: every input drawn together from a normal distribution as
+ * wide as its own 95 % interval (seeded, default seed 1, 2000 draws), the fill solved for each draw, and
  * the 2.5th and 97.5th percentiles taken; u is the spread of the draws.
  *
  * Inputs are treated as independent, which overstates the spread where two
@@ -166,8 +183,10 @@ export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolut
   let floor = solution.clamp && solution.clamp.kind !== 'boiling' ? solution.clamp.temperature : -Infinity;
   let ceiling = solution.clamp?.kind === 'boiling' ? solution.clamp.temperature : Infinity;
   for (const input of inputs) {
-    const plusSolution = solveFillTemperature(fill, input.perturb(COVERAGE_95 * input.u));
-    const minusSolution = solveFillTemperature(fill, input.perturb(-COVERAGE_95 * input.u));
+    const upShift = input.up ?? COVERAGE_95 * input.u;
+    const downShift = input.down ?? COVERAGE_95 * input.u;
+    const plusSolution = solveFillTemperature(fill, input.perturb(upShift));
+    const minusSolution = solveFillTemperature(fill, input.perturb(-downShift));
     for (const s of [plusSolution, minusSolution]) {
       if (s.clamp?.kind === 'boiling') ceiling = Math.min(ceiling, s.clamp.temperature);
       else if (s.clamp) floor = floor === -Infinity ? s.clamp.temperature : Math.min(floor, s.clamp.temperature);
@@ -176,6 +195,7 @@ export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolut
     const minus = minusSolution.temperature;
     up += Math.max(0, plus - t, minus - t) ** 2;
     down += Math.max(0, t - plus, t - minus) ** 2;
+    // sensitivity (plus − minus)/(up + down) times the input's u, (up + down)/(2·1.96)
     central += ((plus - minus) / (2 * COVERAGE_95)) ** 2;
   }
   let low = Math.min(t, Math.max(floor, t - Math.sqrt(down)));

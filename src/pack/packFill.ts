@@ -14,6 +14,8 @@ import { molarMass } from '../chem/molarMass.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { quadrature } from '../quantity/propagate.js';
+import { KIRCHHOFF_RANGE_C } from '../solution/solutionHeatCapacity.js';
+import { widenEstimate } from '../solution/widenEstimate.js';
 import { aqueousHeatCapacity, waterSpecificHeat } from './solidHeatCapacity.js';
 import type { SolubilityCurve } from './solubilityCurve.js';
 import { packSaltData, type PackSaltData } from './packSaltData.js';
@@ -159,15 +161,11 @@ function kirchhoff(h25: Estimate, solid: Salt, solidCp: Estimate, startC: number
   const dCp = aq.value + solid.water * water.value - solidCp.value; // J/(mol·K)
   const uCp = quadrature(aq.u, solidCp.u, solid.water * (dataset.uncertaintyOf('heat-capacities.json', water) ?? 0));
   const dT = startC - 25;
-  return makeEstimate({
-    ...h25,
-    value: h25.value + (dCp * dT) / 1000,
-    u: quadrature(h25.u, (uCp * Math.abs(dT)) / 1000),
-    low: undefined,
-    high: undefined,
-    sources: [...h25.sources, ...aq.sources, water.source],
-    notes: [...h25.notes, `corrected from 25 °C to ${startC} °C with ΔsolCp° = ${dCp.toFixed(1)} J/(mol·K) at infinite dilution (Kirchhoff)`],
-  });
+  const notes = [`corrected from 25 °C to ${startC} °C with ΔsolCp° = ${dCp.toFixed(1)} J/(mol·K) at infinite dilution (Kirchhoff)`];
+  if (startC < KIRCHHOFF_RANGE_C.min || startC > KIRCHHOFF_RANGE_C.max) notes.push(`the Kirchhoff correction is extrapolated to ${startC} °C, outside the ${KIRCHHOFF_RANGE_C.min}–${KIRCHHOFF_RANGE_C.max} °C over which ΔsolCp° may be taken as constant`);
+  // widenEstimate keeps an interval wider than ±1.96·u at least as wide.
+  const corrected = widenEstimate(h25, (uCp * Math.abs(dT)) / 1000, (dCp * dT) / 1000, notes);
+  return makeEstimate({ ...corrected, sources: [...h25.sources, ...aq.sources, water.source] });
 }
 
 /** Formula texts kept per dataset once read (up to this many, so that odd inputs cannot grow the cache without bound). */

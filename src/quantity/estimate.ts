@@ -123,9 +123,24 @@ export function makeEstimate(input: EstimateInput): Estimate {
     unit: input.unit,
     basis: input.basis,
     method: input.method,
-    sources: [...new Set(input.sources ?? [])].sort(),
-    notes: [...(input.notes ?? [])],
+    sources: sortedUnique(input.sources),
+    notes: input.notes ? input.notes.slice() : [],
   };
+}
+
+/** The distinct strings of a list in the default sort order (UTF-16 code units), as `[...new Set(list)].sort()` gives them. */
+function sortedUnique(list: readonly string[] | undefined): string[] {
+  const out: string[] = [];
+  if (!list) return out;
+  // Insertion into a sorted list: the lists are a handful of source keys.
+  for (const x of list) {
+    let i = out.length;
+    while (i > 0 && out[i - 1]! > x) i--;
+    if (i > 0 && out[i - 1] === x) continue;
+    for (let j = out.length; j > i; j--) out[j] = out[j - 1]!;
+    out[i] = x;
+  }
+  return out;
 }
 
 /**

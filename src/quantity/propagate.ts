@@ -23,5 +23,8 @@ export function quadrature(...us: readonly number[]): number {
  * ```
  */
 export function linearUncertainty(terms: readonly { coefficient: number; u: number }[]): number {
+  // The same Math.hypot as quadrature, without building an argument list for the usual two or three terms.
+  if (terms.length === 2) return Math.hypot(terms[0]!.coefficient * terms[0]!.u, terms[1]!.coefficient * terms[1]!.u);
+  if (terms.length === 3) return Math.hypot(terms[0]!.coefficient * terms[0]!.u, terms[1]!.coefficient * terms[1]!.u, terms[2]!.coefficient * terms[2]!.u);
   return quadrature(...terms.map((t) => t.coefficient * t.u));
 }

@@ -13,11 +13,11 @@ import { saltRecordIndex, saltRecords, WATER } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
 import { isIonheatError } from '../error.js';
 import type { Estimate } from '../quantity/estimate.js';
-import type { LatticeModel } from '../lattice/latticeModel.js';
+import { latticeModels, type LatticeModel } from '../lattice/latticeModel.js';
 import { bornRadius } from '../hydration/bornHydration.js';
 import { measuredSolutionEnthalpy } from './measuredSolution.js';
 import { solutionEnthalpyFromCycle } from './cycleSolution.js';
-import { anchorLattice } from './saltLattice.js';
+import { saltLattice } from './saltLattice.js';
 
 /** One anchor: a salt M_aX_b with a known enthalpy of solution. */
 export interface AnchorSalt {
@@ -44,6 +44,34 @@ export interface Neighbour {
   distance: number;
 }
 
+/** An anchor with its plain lattice enthalpies by estimator as an array, in the order of `latticeModels` (NaN where the estimator does not apply), for the anchor search. */
+export interface IndexedAnchor {
+  anchor: AnchorSalt;
+  lattice: Float64Array;
+}
+
+/** A neighbour with its position among the pool's ions of its sign. */
+export interface PooledNeighbour extends Neighbour {
+  index: number;
+}
+
+/**
+ * The pool as arrays, for the anchor search: the cations and anions that
+ * occur in it numbered, the anchor of every cation–anion pair by number, and
+ * every ion's neighbours with their numbers, so that finding the anchors near
+ * a target walks arrays instead of looking names up.
+ */
+export interface AnchorGrid {
+  cationIndex: ReadonlyMap<string, number>;
+  anionIndex: ReadonlyMap<string, number>;
+  /** `byCation[n][y]`: the anchor of pool cation n with pool anion y. */
+  byCation: readonly (readonly (IndexedAnchor | undefined)[])[];
+  /** `byAnion[x][n]`: the anchor of pool cation n with pool anion x. */
+  byAnion: readonly (readonly (IndexedAnchor | undefined)[])[];
+  /** {@link AnchorIndex.neighbours} with the neighbours' numbers. */
+  neighbours: ReadonlyMap<string, readonly PooledNeighbour[]>;
+}
+
 export interface AnchorIndex {
   /** Every anchor, in formula order. */
   anchors: readonly AnchorSalt[];
@@ -51,6 +79,8 @@ export interface AnchorIndex {
   byIons: ReadonlyMap<string, ReadonlyMap<string, AnchorSalt>>;
   /** For every ion of the table, the other ions of its sign that occur in the pool, nearest first. */
   neighbours: ReadonlyMap<string, readonly Neighbour[]>;
+  /** The same pool as arrays, for the search. */
+  grid: AnchorGrid;
 }
 
 /**
@@ -114,6 +144,23 @@ function byName(a: string, b: string): number {
   return a < b ? -1 : a > b ? 1 : 0;
 }
 
+function gridOf(anchors: readonly AnchorSalt[], inPool: { cation: Set<string>; anion: Set<string> }, neighbours: ReadonlyMap<string, readonly Neighbour[]>): AnchorGrid {
+  const cationIndex = new Map([...inPool.cation].map((ion, i) => [ion, i]));
+  const anionIndex = new Map([...inPool.anion].map((ion, i) => [ion, i]));
+  const byCation: (IndexedAnchor | undefined)[][] = [...inPool.cation].map(() => new Array<IndexedAnchor | undefined>(anionIndex.size).fill(undefined));
+  const byAnion: (IndexedAnchor | undefined)[][] = [...inPool.anion].map(() => new Array<IndexedAnchor | undefined>(cationIndex.size).fill(undefined));
+  for (const a of anchors) {
+    const n = cationIndex.get(a.cation)!;
+    const x = anionIndex.get(a.anion)!;
+    const entry: IndexedAnchor = { anchor: a, lattice: Float64Array.from(latticeModels, (m) => a.lattice.get(m) ?? Number.NaN) };
+    byCation[n]![x] = entry;
+    byAnion[x]![n] = entry;
+  }
+  const pooled = new Map<string, PooledNeighbour[]>();
+  for (const [ion, list] of neighbours) pooled.set(ion, list.map((nb) => ({ ...nb, index: (cationIndex.get(nb.ion) ?? anionIndex.get(nb.ion))! })));
+  return { cationIndex, anionIndex, byCation, byAnion, neighbours: pooled };
+}
+
 /** The anchor index of a dataset, built on first use. */
 export function anchorIndex(dataset: Dataset): AnchorIndex {
   return dataset.memo('solution.anchorIndex', () => {
@@ -133,7 +180,7 @@ export function anchorIndex(dataset: Dataset): AnchorIndex {
       if (!ions) continue;
       const known: Estimate | undefined = measuredSolutionEnthalpy(salt, dataset) ?? solutionEnthalpyFromCycle(salt, dataset);
       if (!known) continue;
-      const lattice = anchorLattice(salt, dataset);
+      const lattice = saltLattice(salt, dataset).anchor;
       if (lattice.size === 0) continue;
       anchors.push({
         formula: salt.formula,
@@ -168,6 +215,6 @@ export function anchorIndex(dataset: Dataset): AnchorIndex {
       list.sort((a, b) => a.distance - b.distance || byName(a.ion, b.ion));
       neighbours.set(ion.id, list);
     }
-    return { anchors, byIons, neighbours };
+    return { anchors, byIons, neighbours, grid: gridOf(anchors, inPool, neighbours) };
   });
 }

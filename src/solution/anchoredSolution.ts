@@ -14,8 +14,9 @@ import { saltRecords } from '../chem/saltRecords.js';
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { latticeModels, type LatticeModel } from '../lattice/latticeModel.js';
-import { anchorIndex, binaryIons, cationCore, type AnchorSalt } from './anchorIndex.js';
-import { anchorLattice, saltLattice } from './saltLattice.js';
+import { anchorIndex, binaryIons, cationCore, type AnchorSalt, type IndexedAnchor } from './anchorIndex.js';
+import { saltLattice, type SaltLattice } from './saltLattice.js';
+import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 /** Nearest cations N and nearest anions Y tried per target: at most this many of each, so at most its square of anchor sets. */
 export const ANCHOR_NEIGHBOURS = 6;
@@ -78,101 +79,173 @@ interface Target {
   lattice: ReadonlyMap<LatticeModel, number>;
 }
 
-/** The nearest anchors on each side of a target for one estimator: NX with N near M, MY with Y near X. */
+/**
+ * The nearest anchors on each side of a target: NX with N near M, MY with Y
+ * near X, in neighbour order, as many as the estimators asked for need
+ * (each takes the first {@link ANCHOR_NEIGHBOURS} of each side for which it
+ * has lattice enthalpies).
+ */
 interface Sides {
-  ns: { distance: number; nx: AnchorSalt; row: ReadonlyMap<string, AnchorSalt> }[];
-  ys: { ion: string; distance: number; my: AnchorSalt }[];
+  ns: { distance: number; nx: IndexedAnchor; row: readonly (IndexedAnchor | undefined)[] }[];
+  ys: { index: number; distance: number; my: IndexedAnchor }[];
 }
 
-function sidesOf(target: Target, model: LatticeModel, dataset: Dataset): Sides {
-  const { byIons, neighbours } = anchorIndex(dataset);
+/** True when every estimator of `models` has found `ANCHOR_NEIGHBOURS` on a side. */
+function enough(found: number[], models: readonly number[]): boolean {
+  for (const m of models) if (found[m]! < ANCHOR_NEIGHBOURS) return false;
+  return true;
+}
+
+function sidesOf(target: Target, models: readonly number[], dataset: Dataset): Sides {
+  const { cationIndex, anionIndex, byCation, byAnion, neighbours } = anchorIndex(dataset).grid;
   const ns: Sides['ns'] = [];
-  for (const n of neighbours.get(target.cation) ?? []) {
-    const row = byIons.get(n.ion);
-    const nx = row?.get(target.anion);
-    if (!nx || !nx.lattice.has(model) || nx.formula === target.formula) continue;
-    ns.push({ distance: n.distance, nx, row: row! });
-    if (ns.length === ANCHOR_NEIGHBOURS) break;
+  const found = [0, 0, 0, 0];
+  // The anchors N_X of every pool cation N with the target's anion X.
+  const x = anionIndex.get(target.anion);
+  const withX = x === undefined ? undefined : byAnion[x]!;
+  for (const n of (withX && neighbours.get(target.cation)) || []) {
+    const nx = withX![n.index];
+    if (!nx || nx.anchor.formula === target.formula) continue;
+    let useful = false;
+    for (const m of models) {
+      if (Number.isNaN(nx.lattice[m]!) || found[m]! >= ANCHOR_NEIGHBOURS) continue;
+      found[m]!++;
+      useful = true;
+    }
+    if (useful) ns.push({ distance: n.distance, nx, row: byCation[n.index]! });
+    if (enough(found, models)) break;
   }
   const ys: Sides['ys'] = [];
-  const own = byIons.get(target.cation);
-  if (own) {
+  const m = cationIndex.get(target.cation);
+  if (m !== undefined) {
+    const own = byCation[m]!;
+    found.fill(0);
     for (const y of neighbours.get(target.anion) ?? []) {
-      const my = own.get(y.ion);
-      if (!my || !my.lattice.has(model) || my.formula === target.formula) continue;
-      ys.push({ ion: y.ion, distance: y.distance, my });
-      if (ys.length === ANCHOR_NEIGHBOURS) break;
+      const my = own[y.index];
+      if (!my || my.anchor.formula === target.formula) continue;
+      let useful = false;
+      for (const m of models) {
+        if (Number.isNaN(my.lattice[m]!) || found[m]! >= ANCHOR_NEIGHBOURS) continue;
+        found[m]!++;
+        useful = true;
+      }
+      if (useful) ys.push({ index: y.index, distance: y.distance, my });
+      if (enough(found, models)) break;
     }
   }
   return { ns, ys };
 }
 
+type Combination = Omit<AnchorCombination, 'sets'> & { count: number; top: AnchorSet };
+
+/** Slots per anchor set in the scratch of {@link combine}: state (undefined unseen, 1 no NY, 2 seen), γ, u, structure mismatches, weight (NaN until needed). */
+const PART = 5;
+
 /**
- * Every usable anchor set for a target and one estimator, combined: the
- * nearest {@link ANCHOR_NEIGHBOURS} cations N (with NX known) and anions Y
- * (with MY known), each pair (N, Y) with NY known. For MX = M_pX_q,
- * MY = M_aY_b, NX = N_cX_d, NY = N_eY_f the coefficients α = p/a,
- * β = q/d, γ = −α·b/f make the ions of α·MY + β·NX + γ·NY those of MX,
- * so the hydration enthalpies cancel exactly for any charge types.
- * `keep` collects the sets themselves (for inspection); without it nothing
- * is allocated per set.
+ * Every usable anchor set for a target and each estimator asked for,
+ * combined: the nearest {@link ANCHOR_NEIGHBOURS} cations N (with NX known)
+ * and anions Y (with MY known), each pair (N, Y) with NY known. For
+ * MX = M_pX_q, MY = M_aY_b, NX = N_cX_d, NY = N_eY_f the coefficients
+ * α = p/a, β = q/d, γ = −α·b/f make the ions of α·MY + β·NX + γ·NY those of
+ * MX, so the hydration enthalpies cancel exactly for any charge types.
+ * What does not depend on the estimator (coefficients, the anchors' data
+ * uncertainty, the weight) is worked out once per set and shared by the
+ * estimators. `keep` collects the sets themselves (for inspection, one
+ * estimator); without it nothing is allocated per set.
  */
-function combine(target: Target, model: LatticeModel, dataset: Dataset, keep?: AnchorSet[]): (Omit<AnchorCombination, 'sets'> & { count: number; top: AnchorSet }) | undefined {
-  const lt = target.lattice.get(model);
-  if (lt === undefined) return undefined;
-  const { ns, ys } = sidesOf(target, model, dataset);
-  const sameStructure = SAME_STRUCTURE_ONLY.has(model);
-  let count = 0;
-  let w = 0;
-  let wv = 0;
-  let wv2 = 0;
-  let wu = 0;
-  let ww = 0;
-  let top: AnchorSet | undefined;
-  for (const n of ns) {
-    const nx = n.nx;
-    const lnx = nx.lattice.get(model)!;
-    const beta = target.anionCount / nx.anionCount;
-    for (const y of ys) {
-      const ny = n.row.get(y.ion);
-      if (!ny || ny.formula === target.formula) continue;
-      const lny = ny.lattice.get(model);
-      if (lny === undefined) continue;
-      const my = y.my;
-      const alpha = target.cationCount / my.cationCount;
-      const gamma = (-alpha * my.anionCount) / ny.anionCount;
-      const bracket = lt - alpha * my.lattice.get(model)! - beta * lnx - gamma * lny;
-      const value = alpha * my.value + beta * nx.value + gamma * ny.value + bracket;
-      const u = Math.hypot(alpha * my.u, beta * nx.u, gamma * ny.u);
-      let mismatches = 0;
-      if (target.structure !== undefined) {
-        if (my.structure !== undefined && my.structure !== target.structure) mismatches++;
-        if (nx.structure !== undefined && nx.structure !== target.structure) mismatches++;
-        if (ny.structure !== undefined && ny.structure !== target.structure) mismatches++;
+function combine(target: Target, models: readonly number[], dataset: Dataset, keep?: AnchorSet[]): (Combination | undefined)[] {
+  const out: (Combination | undefined)[] = [];
+  const lts = models.map((m) => target.lattice.get(latticeModels[m]!));
+  const wanted = models.filter((_, i) => lts[i] !== undefined);
+  if (wanted.length === 0) return out;
+  const { ns, ys } = sidesOf(target, wanted, dataset);
+  // Filled as sets are met (a plain array: a typed array costs more to allocate than the few sets it would hold).
+  const parts: number[] = new Array<number>(ns.length * ys.length * PART);
+  for (let k = 0; k < models.length; k++) {
+    const m = models[k]!;
+    const lt = lts[k];
+    if (lt === undefined) continue;
+    const sameStructure = SAME_STRUCTURE_ONLY.has(latticeModels[m]!);
+    let count = 0;
+    let w = 0;
+    let wv = 0;
+    let wv2 = 0;
+    let wu = 0;
+    let ww = 0;
+    let top: AnchorSet | undefined;
+    let takenN = 0;
+    for (let i = 0; i < ns.length && takenN < ANCHOR_NEIGHBOURS; i++) {
+      const n = ns[i]!;
+      const nx = n.nx;
+      const lnx = nx.lattice[m]!;
+      if (Number.isNaN(lnx)) continue;
+      takenN++;
+      const beta = target.anionCount / nx.anchor.anionCount;
+      let takenY = 0;
+      for (let j = 0; j < ys.length && takenY < ANCHOR_NEIGHBOURS; j++) {
+        const y = ys[j]!;
+        const my = y.my;
+        const lmy = my.lattice[m]!;
+        if (Number.isNaN(lmy)) continue;
+        takenY++;
+        const at = (i * ys.length + j) * PART;
+        if (parts[at] === undefined) {
+          const ny = n.row[y.index];
+          if (!ny || ny.anchor.formula === target.formula) parts[at] = 1;
+          else {
+            const alpha = target.cationCount / my.anchor.cationCount;
+            const gamma = (-alpha * my.anchor.anionCount) / ny.anchor.anionCount;
+            let mismatches = 0;
+            if (target.structure !== undefined) {
+              if (my.anchor.structure !== undefined && my.anchor.structure !== target.structure) mismatches++;
+              if (nx.anchor.structure !== undefined && nx.anchor.structure !== target.structure) mismatches++;
+              if (ny.anchor.structure !== undefined && ny.anchor.structure !== target.structure) mismatches++;
+            }
+            parts[at] = 2;
+            parts[at + 1] = gamma;
+            parts[at + 2] = Math.hypot(alpha * my.anchor.u, beta * nx.anchor.u, gamma * ny.anchor.u);
+            parts[at + 3] = mismatches;
+            parts[at + 4] = Number.NaN;
+          }
+        }
+        if (parts[at] === 1) continue;
+        const ny = n.row[y.index]!;
+        const lny = ny.lattice[m]!;
+        if (Number.isNaN(lny)) continue;
+        const mismatches = parts[at + 3]!;
+        if (sameStructure && (mismatches > 0 || target.structure === undefined)) continue;
+        const alpha = target.cationCount / my.anchor.cationCount;
+        const gamma = parts[at + 1]!;
+        const u = parts[at + 2]!;
+        const bracket = lt - alpha * lmy - beta * lnx - gamma * lny;
+        const value = alpha * my.anchor.value + beta * nx.anchor.value + gamma * ny.anchor.value + bracket;
+        let weight = parts[at + 4]!;
+        if (Number.isNaN(weight)) parts[at + 4] = weight = Math.exp(-(n.distance + y.distance + STRUCTURE_PENALTY * mismatches));
+        count++;
+        w += weight;
+        wv += weight * value;
+        wv2 += weight * value * value;
+        wu += weight * u;
+        ww += weight * weight;
+        if (!top || weight > top.weight) top = { my: my.anchor, nx: nx.anchor, ny: ny.anchor, alpha, beta, gamma, value, u, weight };
+        keep?.push({ my: my.anchor, nx: nx.anchor, ny: ny.anchor, alpha, beta, gamma, value, u, weight });
       }
-      if (sameStructure && (mismatches > 0 || target.structure === undefined)) continue;
-      const weight = Math.exp(-(n.distance + y.distance + STRUCTURE_PENALTY * mismatches));
-      count++;
-      w += weight;
-      wv += weight * value;
-      wv2 += weight * value * value;
-      wu += weight * u;
-      ww += weight * weight;
-      if (!top || weight > top.weight) top = { my, nx, ny, alpha, beta, gamma, value, u, weight };
-      keep?.push({ my, nx, ny, alpha, beta, gamma, value, u, weight });
     }
+    if (count === 0 || !top) continue;
+    const value = wv / w;
+    out[k] = { count, top, value, dataU: wu / w, spread: Math.sqrt(Math.max(0, wv2 / w - value * value)), effectiveSets: (w * w) / ww, lattice: lt };
   }
-  if (count === 0 || !top) return undefined;
-  const value = wv / w;
-  return { count, top, value, dataU: wu / w, spread: Math.sqrt(Math.max(0, wv2 / w - value * value)), effectiveSets: (w * w) / ww, lattice: lt };
+  return out;
 }
 
-function targetOf(salt: Salt, dataset: Dataset): Target | undefined {
+/** Index of every estimator in `latticeModels`, for {@link combine}. */
+const ALL_MODELS: readonly number[] = latticeModels.map((_, i) => i);
+
+function targetOf(salt: Salt, lattice: () => SaltLattice, dataset: Dataset): Target | undefined {
   if (salt.water > 0) return undefined;
   const ions = binaryIons(salt);
   if (!ions) return undefined;
-  const lattice = anchorLattice(salt, dataset);
-  return { formula: salt.formula, ...ions, structure: saltRecords('crystals.json', salt, dataset)[0]?.structure, lattice };
+  return { formula: salt.formula, ...ions, structure: saltRecords('crystals.json', salt, dataset)[0]?.structure, lattice: lattice().anchor };
 }
 
 /** One calibration salt: the floor it needs, relative to its lattice enthalpy. */
@@ -218,11 +291,11 @@ function floorGroups(dataset: Dataset): ReadonlyMap<LatticeModel, FloorCalibrati
   return dataset.memo('solution.anchorFloors', () => {
     const out = new Map<LatticeModel, FloorCalibration>();
     const charges = new Map(dataset.records('ions.json').map((i) => [i.id, i.charge]));
-    for (const model of latticeModels) {
-      const rows: { a: AnchorSalt; type: string; core: string; c: NonNullable<ReturnType<typeof combine>> }[] = [];
+    for (const [mi, model] of latticeModels.entries()) {
+      const rows: { a: AnchorSalt; type: string; core: string; c: Combination }[] = [];
       for (const a of anchorIndex(dataset).anchors) {
         if (!a.lattice.has(model)) continue;
-        const c = combine({ formula: a.formula, cation: a.cation, anion: a.anion, cationCount: a.cationCount, anionCount: a.anionCount, structure: a.structure, lattice: a.lattice }, model, dataset);
+        const [c] = combine({ formula: a.formula, cation: a.cation, anion: a.anion, cationCount: a.cationCount, anionCount: a.anionCount, structure: a.structure, lattice: a.lattice }, [mi], dataset);
         if (c) rows.push({ a, type: `${charges.get(a.cation)}:${-(charges.get(a.anion) ?? 0)}`, core: cationCore(a.cation, dataset), c });
       }
       // The typical relative spread, from salts with at least three effective sets.
@@ -334,13 +407,20 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
 export function anchoredSolutionEnthalpies(salt: Salt, options: { excludeMeasured?: boolean } = {}, dataset: Dataset = builtinDataset()): Estimate[] {
   salt = saltArgument(salt, dataset);
   options = optionsArgument(options);
-  const target = targetOf(salt, dataset);
+  let lattice: SaltLattice | undefined;
+  return anchoredEstimates(salt, () => (lattice ??= saltLattice(salt, dataset)), options, dataset);
+}
+
+/** {@link anchoredSolutionEnthalpies} with the salt's lattice values given (computed on first call of `lattice`), for callers that have them already. */
+export function anchoredEstimates(salt: Salt, lattice: () => SaltLattice, options: { excludeMeasured?: boolean }, dataset: Dataset): Estimate[] {
+  const target = targetOf(salt, lattice, dataset);
   if (!target) return [];
   const type = chargeType(salt) ?? 'other';
   const group: FloorGroupKey = { chargeType: type, cationCore: cationCore(target.cation, dataset) };
   const out: Estimate[] = [];
-  for (const model of latticeModels) {
-    const c = combine(target, model, dataset);
+  const combinations = combine(target, ALL_MODELS, dataset);
+  for (const [mi, model] of latticeModels.entries()) {
+    const c = combinations[mi];
     if (!c) continue;
     const floor = anchoredFloor(model, group, options.excludeMeasured ? { excludeFormula: salt.formula } : {}, dataset);
     const f = floor.relative * Math.abs(c.lattice);
@@ -355,10 +435,10 @@ export function anchoredSolutionEnthalpies(salt: Salt, options: { excludeMeasure
         unit: 'kJ/mol',
         basis: 'anchored',
         method: `anchored-${model}`,
-        sources: [...top.my.sources, ...top.nx.sources, ...top.ny.sources, ...(saltLattice(salt, dataset).get(model)?.sources ?? [])],
+        sources: [...top.my.sources, ...top.nx.sources, ...top.ny.sources, ...(lattice().byMethod.get(model)?.sources ?? [])],
         notes: [
-          `${c.count} anchor set${c.count === 1 ? '' : 's'} with ${model} lattice differences; the closest: ${top.my.formula} + ${top.nx.formula} − ${top.ny.formula}${top.alpha !== 1 || top.beta !== 1 || top.gamma !== -1 ? ` (coefficients ${+top.alpha.toFixed(3)}, ${+top.beta.toFixed(3)}, ${+top.gamma.toFixed(3)})` : ''}`,
-          `u = √(anchors ${c.dataU.toFixed(1)}² + spread ${spread.toFixed(1)}² + floor ${f.toFixed(1)}²) kJ/mol: the sets' own spread ${c.spread.toFixed(1)} (${c.effectiveSets.toFixed(1)} effective sets) mixed with the typical spread of ${type} salts; floor ${(100 * floor.relative).toFixed(2)} % of the lattice enthalpy, calibrated on ${floor.salts} salts (${floor.group})`,
+          `${c.count} anchor set${c.count === 1 ? '' : 's'} with ${model} lattice differences; the closest: ${top.my.formula} + ${top.nx.formula} − ${top.ny.formula}${top.alpha !== 1 || top.beta !== 1 || top.gamma !== -1 ? ` (coefficients ${+fixedDecimal(top.alpha, 3)}, ${+fixedDecimal(top.beta, 3)}, ${+fixedDecimal(top.gamma, 3)})` : ''}`,
+          `u = √(anchors ${fixedDecimal(c.dataU, 1)}² + spread ${fixedDecimal(spread, 1)}² + floor ${fixedDecimal(f, 1)}²) kJ/mol: the sets' own spread ${fixedDecimal(c.spread, 1)} (${fixedDecimal(c.effectiveSets, 1)} effective sets) mixed with the typical spread of ${type} salts; floor ${fixedDecimal(100 * floor.relative, 2)} % of the lattice enthalpy, calibrated on ${floor.salts} salts (${floor.group})`,
         ],
       }),
     );
@@ -368,10 +448,10 @@ export function anchoredSolutionEnthalpies(salt: Salt, options: { excludeMeasure
 
 /** The anchor sets behind an anchored estimate, for inspection. */
 export function anchorSets(salt: Salt, model: LatticeModel, dataset: Dataset = builtinDataset()): AnchorCombination | undefined {
-  const target = targetOf(salt, dataset);
+  const target = targetOf(salt, () => saltLattice(salt, dataset), dataset);
   if (!target) return undefined;
   const sets: AnchorSet[] = [];
-  const c = combine(target, model, dataset, sets);
+  const [c] = combine(target, [latticeModels.indexOf(model)], dataset, sets);
   return c ? { sets, value: c.value, dataU: c.dataU, spread: c.spread, effectiveSets: c.effectiveSets, lattice: c.lattice } : undefined;
 }
 

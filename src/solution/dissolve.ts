@@ -21,9 +21,9 @@ import { hydrateFromParent, hydrateRuleScatter, saltFormIndex } from './hydrateR
 import { heatPerGramOfFill, heatPerGramOfSalt, saturatedFill, type SaturatedFill } from './heatPerGram.js';
 import { checkKirchhoffTemperature, kirchhoffCorrection, solutionHeatCapacity, TABLE_TEMPERATURE_C, typicalSolutionHeatCapacity } from './solutionHeatCapacity.js';
 import { solutionVerdict, type Verdict } from './verdict.js';
-import { anchoredSolutionEnthalpies } from './anchoredSolution.js';
-import { solutionEnthalpyFromModel } from './modelSolution.js';
-import { saltLattice } from './saltLattice.js';
+import { anchoredEstimates } from './anchoredSolution.js';
+import { hydrationText, modelEstimate } from './modelSolution.js';
+import { saltLattice, type SaltLattice } from './saltLattice.js';
 
 export interface DissolveOptions {
   /**
@@ -68,23 +68,31 @@ export interface DissolveResult {
 /** Within one basis, methods in order of preference (lower first); others after. */
 const METHOD_RANK: Readonly<Record<string, number>> = { table: 0, 'formation-enthalpies': 1 };
 
+/** Position of each basis in {@link basisOrder}. */
+const BASIS_RANK: Readonly<Record<string, number>> = Object.fromEntries(basisOrder.map((b, i) => [b, i]));
+
 function rank(a: Estimate, b: Estimate): number {
-  return basisOrder.indexOf(a.basis) - basisOrder.indexOf(b.basis) || (METHOD_RANK[a.method] ?? 9) - (METHOD_RANK[b.method] ?? 9) || a.u - b.u || (a.method < b.method ? -1 : a.method > b.method ? 1 : 0);
+  return BASIS_RANK[a.basis]! - BASIS_RANK[b.basis]! || (METHOD_RANK[a.method] ?? 9) - (METHOD_RANK[b.method] ?? 9) || a.u - b.u || (a.method < b.method ? -1 : a.method > b.method ? 1 : 0);
 }
 
 function waterFormation(dataset: Dataset): number | undefined {
   return dataset.memo('solution.waterFormation', () => saltRecords('compound-formation.json', { formula: WATER }, dataset).find((r) => r.phase === 'l')?.value);
 }
 
-/** Parsed salts of the table formulas, built once per dataset. */
-function tableSalt(formula: string, dataset: Dataset): Salt {
-  const cache = dataset.memo('solution.tableSalts', () => new Map<string, Salt>());
-  let salt = cache.get(formula);
-  if (!salt) {
-    salt = parseSalt(formula, dataset);
-    cache.set(formula, salt);
-  }
-  return salt;
+/**
+ * Where the profiles of salts are kept: per dataset for {@link dissolve}, or
+ * nowhere ({@link dissolveUncached}: every call computes its salt afresh
+ * from the dataset's indexes).
+ */
+type ProfileStore = Map<string, SaltProfile> | undefined;
+
+function profileStore(dataset: Dataset): Map<string, SaltProfile> {
+  return dataset.memo('solution.profiles', () => new Map<string, SaltProfile>());
+}
+
+/** The anhydrous salt of a hydrate, parsed; kept with the hydrate's profile where profiles are kept. */
+function anhydrousSalt(salt: Salt, dataset: Dataset, store: ProfileStore): Salt {
+  return store?.get(salt.anhydrous)?.salt ?? parseSalt(salt.anhydrous, dataset);
 }
 
 /**
@@ -99,8 +107,7 @@ function ruleEstimate(salt: Salt, hide: boolean, dataset: Dataset): Estimate | u
   for (const form of forms) {
     if (form.formula === salt.formula) continue;
     if (chosen && Math.abs(form.water - salt.water) >= Math.abs(chosen.water - salt.water)) continue;
-    const parent = profileOf(tableSalt(form.formula, dataset), dataset);
-    const estimate = parent.measured ?? parent.cycle;
+    const estimate = measuredSolutionEnthalpy(form.salt, dataset) ?? solutionEnthalpyFromCycle(form.salt, dataset);
     if (estimate) chosen = { formula: form.formula, water: form.water, estimate };
   }
   if (!chosen) return undefined;
@@ -114,6 +121,9 @@ function ruleEstimate(salt: Salt, hide: boolean, dataset: Dataset): Estimate | u
  * estimates kept here are frozen and shared by every result.
  */
 interface SaltProfile {
+  salt: Salt;
+  /** Whether the profile is kept (its estimates frozen, as results share them). */
+  kept: boolean;
   measured: Estimate | undefined;
   cycle: Estimate | undefined;
   /** The difference rule from the nearest other form, with all pairs / without the salt's own pairs. */
@@ -129,19 +139,24 @@ interface SaltProfile {
   ranked: { open?: { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined }; hidden?: { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined } };
   /** The error to throw when nothing can be estimated, kept so that repeated calls do not rebuild it. */
   failure: { open?: IonheatError; hidden?: IonheatError };
+  /** The salt's lattice values, once computed. */
+  lattice?: SaltLattice;
 }
 
-function profileOf(salt: Salt, dataset: Dataset): SaltProfile {
-  const cache = dataset.memo('solution.profiles', () => new Map<string, SaltProfile>());
-  let profile = cache.get(salt.formula);
+function profileOf(salt: Salt, dataset: Dataset, store: ProfileStore): SaltProfile {
+  let profile = store?.get(salt.formula);
   if (!profile) {
     const ionic = salt.kind === 'ionic';
+    const kept = store !== undefined;
+    const keep = kept ? frozen : <E extends Estimate | undefined>(e: E): E => e;
     profile = {
-      measured: frozen(measuredSolutionEnthalpy(salt, dataset)),
-      cycle: frozen(solutionEnthalpyFromCycle(salt, dataset)),
+      salt,
+      kept,
+      measured: keep(measuredSolutionEnthalpy(salt, dataset)),
+      cycle: keep(solutionEnthalpyFromCycle(salt, dataset)),
       rule: {},
-      hydration: ionic ? { absolute: frozen(saltHydrationEnthalpy(salt, { scale: 'absolute' }, dataset)), conventional: frozen(saltHydrationEnthalpy(salt, { scale: 'conventional' }, dataset)) } : undefined,
-      heatCapacity: frozen(solutionHeatCapacity(salt, dataset)),
+      hydration: ionic ? { absolute: keep(saltHydrationEnthalpy(salt, { scale: 'absolute' }, dataset)), conventional: keep(saltHydrationEnthalpy(salt, { scale: 'conventional' }, dataset)) } : undefined,
+      heatCapacity: keep(solutionHeatCapacity(salt, dataset)),
       fill: saturatedFill(salt, dataset),
       model: [],
       modelled: {},
@@ -149,10 +164,18 @@ function profileOf(salt: Salt, dataset: Dataset): SaltProfile {
       failure: {},
     };
     const hydration = modelHydration(profile.hydration);
-    if (hydration) for (const lattice of saltLattice(salt, dataset).values()) profile.model.push(frozen(solutionEnthalpyFromModel(lattice, hydration)));
-    cache.set(salt.formula, profile);
+    if (hydration) {
+      const text = hydrationText(hydration);
+      for (const lattice of latticeOf(profile, dataset).byMethod.values()) profile.model.push(keep(modelEstimate(lattice, hydration, text)));
+    }
+    store?.set(salt.formula, profile);
   }
   return profile;
+}
+
+/** The lattice values of the profile's salt, computed on first use (they are needed only for the model and anchored bases). */
+function latticeOf(profile: SaltProfile, dataset: Dataset): SaltLattice {
+  return (profile.lattice ??= saltLattice(profile.salt, dataset));
 }
 
 /**
@@ -168,28 +191,35 @@ function modelHydration(h: SaltProfile['hydration']): Estimate | undefined {
 }
 
 /** Anchored and model estimates of a salt, a hydrate's through its anhydrous salt and the difference rule; kept in the salt's profile. */
-function modelledEstimates(salt: Salt, hide: boolean, dataset: Dataset): Estimate[] {
-  const profile = profileOf(salt, dataset);
+function modelledEstimates(profile: SaltProfile, hide: boolean, dataset: Dataset, store: ProfileStore): Estimate[] {
   const key = hide ? 'hidden' : 'open';
   let found = profile.modelled[key];
-  if (!found) profile.modelled[key] = found = computeModelled(salt, hide, dataset).map(frozen);
+  if (!found) {
+    found = computeModelled(profile, hide, dataset, store);
+    if (profile.kept) found.forEach(frozen);
+    profile.modelled[key] = found;
+  }
   return found;
 }
 
-function computeModelled(salt: Salt, hide: boolean, dataset: Dataset): Estimate[] {
+function computeModelled(profile: SaltProfile, hide: boolean, dataset: Dataset, store: ProfileStore): Estimate[] {
+  const salt = profile.salt;
   if (salt.kind !== 'ionic' || ionsUnstableInWater(salt, dataset).length > 0) return [];
-  if (salt.water === 0) return [...anchoredSolutionEnthalpies(salt, { excludeMeasured: hide }, dataset), ...profileOf(salt, dataset).model];
+  if (salt.water === 0) return [...anchoredEstimates(salt, () => latticeOf(profile, dataset), { excludeMeasured: hide }, dataset), ...profile.model];
   const hw = waterFormation(dataset);
   if (hw === undefined) return [];
-  const anhydrous = tableSalt(salt.anhydrous, dataset);
+  const anhydrous = profileOf(anhydrousSalt(salt, dataset, store), dataset, store);
   const scatter = hydrateRuleScatter(hide ? { excludeFormula: salt.formula } : {}, dataset).perSqrtWater;
-  const rule = { parentFormula: anhydrous.formula, parentWater: 0, water: salt.water, waterFormation: hw, scatter };
-  return modelledEstimates(anhydrous, false, dataset).map((e) => hydrateFromParent(e, rule));
+  const rule = { parentFormula: anhydrous.salt.formula, parentWater: 0, water: salt.water, waterFormation: hw, scatter };
+  return modelledEstimates(anhydrous, false, dataset, store).map((e) => hydrateFromParent(e, rule));
 }
 
 function ruleOf(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Dataset): Estimate | undefined {
   const key = hide ? 'hidden' : 'open';
-  if (!(key in profile.rule)) profile.rule[key] = salt.kind === 'ionic' ? frozen(ruleEstimate(salt, hide, dataset)) : undefined;
+  if (!(key in profile.rule)) {
+    const rule = salt.kind === 'ionic' ? ruleEstimate(salt, hide, dataset) : undefined;
+    profile.rule[key] = profile.kept ? frozen(rule) : rule;
+  }
   return profile.rule[key];
 }
 
@@ -219,7 +249,7 @@ function perGramOf(best: Estimate, salt: Salt, profile: SaltProfile): DissolveRe
 }
 
 /** Every estimate at 25 °C, most trusted first, and the heats per gram of the first; kept in the profile. */
-function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Dataset): { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined } {
+function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Dataset, store: ProfileStore): { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined } {
   const key = hide ? 'hidden' : 'open';
   let found = profile.ranked[key];
   if (!found) {
@@ -228,14 +258,14 @@ function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
     if (profile.cycle && !hide) estimates.push(profile.cycle);
     const rule = ruleOf(salt, profile, hide, dataset);
     if (rule) estimates.push(rule);
-    for (const e of modelledEstimates(salt, hide, dataset)) estimates.push(e);
+    for (const e of modelledEstimates(profile, hide, dataset, store)) estimates.push(e);
     estimates.sort(rank);
     let perGram: DissolveResult['perGram'] | undefined;
     if (estimates[0]) {
       const p = perGramOf(estimates[0], salt, profile);
-      perGram = { salt: frozen(p.salt), ...(p.saturatedFill ? { saturatedFill: frozen(p.saturatedFill) } : {}) };
+      perGram = profile.kept ? { salt: frozen(p.salt), ...(p.saturatedFill ? { saturatedFill: frozen(p.saturatedFill) } : {}) } : p;
     }
-    profile.ranked[key] = found = { estimates: Object.freeze(estimates), perGram };
+    profile.ranked[key] = found = { estimates: profile.kept ? Object.freeze(estimates) : estimates, perGram };
   }
   return found;
 }
@@ -288,18 +318,36 @@ function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
  * ```
  */
 export function dissolve(formula: string | Salt, options: DissolveOptions = {}, dataset: Dataset = builtinDataset()): DissolveResult {
+  return dissolveWith(formula, options, dataset, profileStore(dataset));
+}
+
+/**
+ * {@link dissolve} without its per-salt results: nothing about the salt (or
+ * any other salt) is looked up from an earlier call or kept for a later one;
+ * only the dataset's indexes and calibrations are used (built on first use,
+ * as for `dissolve`). The result is deep-equal to `dissolve`'s. For the
+ * bench, which times the computation itself, and for tests that compare the
+ * two paths; not part of the public API.
+ *
+ * @internal
+ */
+export function dissolveUncached(formula: string | Salt, options: DissolveOptions = {}, dataset: Dataset = builtinDataset()): DissolveResult {
+  return dissolveWith(formula, options, dataset, undefined);
+}
+
+function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset: Dataset, store: ProfileStore): DissolveResult {
   const salt = saltArgument(formula, dataset, 'formula');
   options = optionsArgument(options);
   const hide = options.excludeMeasured === true;
   const celsius = options.temperatureC ?? TABLE_TEMPERATURE_C;
   checkKirchhoffTemperature(celsius);
-  if (Object.is(celsius, -0)) return dissolve(salt, { ...options, temperatureC: 0 }, dataset);
+  if (Object.is(celsius, -0)) return dissolveWith(salt, { ...options, temperatureC: 0 }, dataset, store);
   const notes: string[] = [];
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
 
-  const profile = profileOf(salt, dataset);
+  const profile = profileOf(salt, dataset, store);
   if (salt.kind !== 'ionic') notes.push('a molecular solute: no lattice model applies, so only measured values (or formation enthalpies) are used');
-  const at25 = ranked(salt, profile, hide, dataset);
+  const at25 = ranked(salt, profile, hide, dataset, store);
   const heatCapacity = profile.heatCapacity;
   let estimates: Estimate[];
   if (celsius === TABLE_TEMPERATURE_C) {
@@ -312,9 +360,12 @@ export function dissolve(formula: string | Salt, options: DissolveOptions = {}, 
   const best = estimates[0];
   if (!best) throw (profile.failure[hide ? 'hidden' : 'open'] ??= failure(salt, hide, dataset));
   const perGram = celsius === TABLE_TEMPERATURE_C && at25.perGram ? { ...at25.perGram } : perGramOf(best, salt, profile);
-  const hydration = profile.hydration
-    ? { ...(profile.hydration.absolute ? { absolute: profile.hydration.absolute } : {}), ...(profile.hydration.conventional ? { conventional: profile.hydration.conventional } : {}) }
-    : undefined;
+  let hydration: DissolveResult['hydration'];
+  if (profile.hydration) {
+    hydration = {};
+    if (profile.hydration.absolute) hydration.absolute = profile.hydration.absolute;
+    if (profile.hydration.conventional) hydration.conventional = profile.hydration.conventional;
+  }
   return {
     formula: salt.formula,
     salt,

@@ -14,10 +14,11 @@ import type { Salt } from '../chem/salt.js';
 import { saltRecords } from '../chem/saltRecords.js';
 import { molarMass } from '../chem/molarMass.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
+import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 /** Heat absorbed per gram, J/g, from kJ/mol: ×1000/M. Positive = the fill cools. */
 function scaled(e: Estimate, factor: number, quantity: string, notes: readonly string[] = []): Estimate {
-  return makeEstimate({ ...e, quantity, value: e.value * factor, u: e.u * factor, low: e.low * factor, high: e.high * factor, unit: 'J/g', notes: [...e.notes, ...notes] });
+  return makeEstimate({ quantity, value: e.value * factor, u: e.u * factor, unit: 'J/g', basis: e.basis, method: e.method, sources: e.sources, notes: notes.length > 0 ? [...e.notes, ...notes] : e.notes, low: e.low * factor, high: e.high * factor });
 }
 
 /**
@@ -130,7 +131,7 @@ export function saturatedFill(salt: Salt, dataset: Dataset = builtinDataset()): 
     solubility: s.value,
     source: s.source,
     notes: [
-      `fill = salt + ${(added / salt.molarMass).toFixed(3)} g water per g salt, saturated at 25 °C (solubility ${s.value.toFixed(2)} g ${salt.anhydrous} per 100 g water, ${s.how}${s.fromMemory ? ', from memory' : ''})`,
+      `fill = salt + ${fixedDecimal(added / salt.molarMass, 3)} g water per g salt, saturated at 25 °C (solubility ${fixedDecimal(s.value, 2)} g ${salt.anhydrous} per 100 g water, ${s.how}${s.fromMemory ? ', from memory' : ''})`,
       'uses the enthalpy of solution at infinite dilution; the heat of dissolving to saturation differs by the heat of dilution',
     ],
   };

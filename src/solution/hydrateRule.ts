@@ -15,6 +15,7 @@ import type { Salt } from '../chem/salt.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { widenEstimate } from './widenEstimate.js';
+import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 /**
  * θ_Hf(H₂O, s–s): the change in standard enthalpy of formation of a solid
@@ -60,10 +61,10 @@ export interface HydrateRuleInput {
   scatter: number;
 }
 
-/** Canonical formula → { anhydrous, water } of every formula the formation and solution tables hold. */
-export function saltFormIndex(dataset: Dataset): ReadonlyMap<string, readonly { formula: string; water: number }[]> {
+/** Anhydrous formula → every form (canonical formula, waters, the parsed salt) that the formation and solution tables hold, fewest waters first. */
+export function saltFormIndex(dataset: Dataset): ReadonlyMap<string, readonly { formula: string; water: number; salt: Salt }[]> {
   return dataset.memo('solution.saltForms', () => {
-    const byAnhydrous = new Map<string, { formula: string; water: number }[]>();
+    const byAnhydrous = new Map<string, { formula: string; water: number; salt: Salt }[]>();
     const seen = new Set<string>();
     for (const table of ['compound-formation.json', 'solution-enthalpies.json'] as const) {
       for (const formula of saltRecordIndex(table, dataset).keys()) {
@@ -77,7 +78,7 @@ export function saltFormIndex(dataset: Dataset): ReadonlyMap<string, readonly { 
           throw e;
         }
         const list = byAnhydrous.get(salt.anhydrous) ?? [];
-        list.push({ formula: salt.formula, water: salt.water });
+        list.push({ formula: salt.formula, water: salt.water, salt });
         byAnhydrous.set(salt.anhydrous, list);
       }
     }
@@ -197,7 +198,7 @@ export function hydrateFromParent(parent: Estimate, rule: HydrateRuleInput): Est
     method: parent.basis === 'measured' || parent.basis === 'cycle' ? 'difference-rule' : `${parent.method}+difference-rule`,
     sources: [...parent.sources, 'jenkinsGlasser2004'],
     notes: [
-      `hydrate's crystal enthalpy from ${parentFormula} (${parent.basis}) by the difference rule: ${dn > 0 ? '+' : ''}${dn} × θ = ${WATER_OF_CRYSTALLIZATION_ENTHALPY} kJ/mol per water of crystallization (Jenkins & Glasser 2004, from memory), scatter ${scatter.toFixed(1)} kJ/mol × √${Math.abs(dn)} from the tabulated hydrate pairs`,
+      `hydrate's crystal enthalpy from ${parentFormula} (${parent.basis}) by the difference rule: ${dn > 0 ? '+' : ''}${dn} × θ = ${WATER_OF_CRYSTALLIZATION_ENTHALPY} kJ/mol per water of crystallization (Jenkins & Glasser 2004, from memory), scatter ${fixedDecimal(scatter, 1)} kJ/mol × √${Math.abs(dn)} from the tabulated hydrate pairs`,
       ...parent.notes,
     ],
   });

@@ -8,6 +8,7 @@
  */
 import { estimateArgument } from '../quantity/argumentChecks.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
+import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 /**
  * ΔsolH° = ΔH_L(model) + Σν·ΔhydH°, kJ/mol, positive = endothermic.
@@ -31,6 +32,21 @@ import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 export function solutionEnthalpyFromModel(lattice: Estimate, hydration: Estimate): Estimate {
   lattice = estimateArgument(lattice, 'lattice');
   hydration = estimateArgument(hydration, 'hydration');
+  return modelEstimate(lattice, hydration, hydrationText(hydration));
+}
+
+/** The part of the note of {@link solutionEnthalpyFromModel} that the hydration sum fills in (the same for every lattice method). */
+export function hydrationText(hydration: Estimate): string {
+  return `plus hydration ${fixedDecimal(hydration.value, 1)} ± ${fixedDecimal(hydration.u, 1)} kJ/mol (${hydration.method}): a small difference of two large numbers`;
+}
+
+/**
+ * {@link solutionEnthalpyFromModel} from the numbers and sources of a
+ * lattice estimate, with the hydration part of the note already written
+ * ({@link hydrationText}): for callers that pair one hydration sum with
+ * every lattice method.
+ */
+export function modelEstimate(lattice: Pick<Estimate, 'value' | 'u' | 'low' | 'high' | 'method'> & { sources: readonly string[] }, hydration: Estimate, hydrationNote: string): Estimate {
   const value = lattice.value + hydration.value;
   const u = Math.hypot(lattice.u, hydration.u);
   const halfWidth = Math.hypot((lattice.high - lattice.low) / 2, (hydration.high - hydration.low) / 2);
@@ -45,7 +61,7 @@ export function solutionEnthalpyFromModel(lattice: Estimate, hydration: Estimate
     method: lattice.method,
     sources: [...lattice.sources, ...hydration.sources],
     notes: [
-      `lattice enthalpy ${lattice.value.toFixed(1)} ± ${lattice.u.toFixed(1)} kJ/mol (${lattice.method}) plus hydration ${hydration.value.toFixed(1)} ± ${hydration.u.toFixed(1)} kJ/mol (${hydration.method}): a small difference of two large numbers`,
+      `lattice enthalpy ${fixedDecimal(lattice.value, 1)} ± ${fixedDecimal(lattice.u, 1)} kJ/mol (${lattice.method}) ${hydrationNote}`,
       ...hydration.notes,
     ],
   });

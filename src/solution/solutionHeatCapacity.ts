@@ -16,6 +16,7 @@ import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { widenEstimate } from './widenEstimate.js';
 import { exactSum, type Term } from '../quantity/exactSum.js';
 import { linearUncertainty } from '../quantity/propagate.js';
+import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 /** The range of temperatures the Kirchhoff correction is offered for, °C. */
 export const KIRCHHOFF_RANGE_C = { min: 0, max: 40 } as const;
@@ -140,10 +141,10 @@ export function kirchhoffCorrection(e: Estimate, temperatureC: number, heatCapac
   if (heatCapacity) {
     const shift = (heatCapacity.value * dT) / 1000;
     const uShift = (heatCapacity.u * Math.abs(dT)) / 1000;
-    return widenEstimate(e, uShift, shift, [`at ${temperatureC} °C by Kirchhoff's law with ΔsolCp° = ${heatCapacity.value.toFixed(1)} J/(mol·K)`]);
+    return widenEstimate(e, uShift, shift, [`at ${temperatureC} °C by Kirchhoff's law with ΔsolCp° = ${fixedDecimal(heatCapacity.value, 1)} J/(mol·K)`]);
   }
   const uShift = (typical * Math.abs(dT)) / 1000;
   return widenEstimate(e, uShift, 0, [
-    `value at 25 °C: no heat capacity of solution for this salt, so the correction to ${temperatureC} °C is unknown; the interval is widened by a typical |ΔsolCp°| of ${typical.toFixed(0)} J/(mol·K)`,
+    `value at 25 °C: no heat capacity of solution for this salt, so the correction to ${temperatureC} °C is unknown; the interval is widened by a typical |ΔsolCp°| of ${fixedDecimal(typical, 0)} J/(mol·K)`,
   ]);
 }

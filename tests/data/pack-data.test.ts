@@ -152,10 +152,13 @@ describe.runIf(has('solubility.json'))('solubility.json', () => {
     for (const name of ['NH4NO3', 'NH4Cl', 'KNO3', 'KCl', 'NaCl', 'CO(NH2)2', 'CaCl2', 'MgSO4', 'Na2SO4', 'NaCH3COO', 'Na2S2O3', 'Na2CO3']) {
       expect(byFormula.has(name), name).toBe(true);
     }
+    // The source stops short of 40 °C where the salt decomposes in warm water:
+    // NH4HCO3 loses ammonia and carbon dioxide above about 36 °C (The Merck Index).
+    const decomposesBelow40 = new Set(['NH4HCO3']);
     for (const r of records) {
       const ts = r.points.map((p) => p.t);
       expect(Math.min(...ts), r.formula).toBeLessThanOrEqual(20);
-      expect(Math.max(...ts), r.formula).toBeGreaterThanOrEqual(40);
+      expect(Math.max(...ts), r.formula).toBeGreaterThanOrEqual(decomposesBelow40.has(r.formula) ? 30 : 40);
     }
   });
 

@@ -118,3 +118,7 @@ describe('solubility curves', () => {
     expect(badNumbers(ionheat.solubilityAt(bad, 25))).toEqual([]);
   });
 });
+
+describe('hydration', () => {
+  it('saltHydrationEnthalpy with an object for the scale is INVALID_ARGUMENT', () => expect(codeOf(() => ionheat.saltHydrationEnthalpy(parseSalt('KNO3'), { scale: {} as never }))).toBe('INVALID_ARGUMENT'));
+});

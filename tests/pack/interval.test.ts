@@ -1,6 +1,6 @@
 // The 95 % interval of the final temperature: bounds by default, seeded Monte Carlo on request.
 import { describe, expect, it } from 'vitest';
-import { packFinalTemperature } from '../../src/index.js';
+import { dissolve, molarMass, packFinalTemperature } from '../../src/index.js';
 import { DEFAULT_SEED } from '../../src/pack/finalTemperatureInterval.js';
 
 const fill = { solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 };
@@ -73,5 +73,24 @@ describe('a clamped fill has a lopsided interval that stays on the liquid side',
   it('keeps low at the eutectic', () => {
     expect(r.finalTemperature.low).toBe(r.finalTemperature.value);
     expect(r.finalTemperature.high).toBeGreaterThan(r.finalTemperature.value + 0.5);
+  });
+});
+
+describe('an enthalpy whose own interval is wider than ±1.96·u', () => {
+  // KHS has only the model basis; its interval carries a Student-t factor from
+  // the lattice calibration, so high − low > 2 × 1.96 × u. With the heat
+  // capacity given exactly (u = 0) the fill's interval comes from the
+  // enthalpy alone, and a fully dissolved fill is linear in it:
+  //   T = T₀ − n·ΔH·1000/C, so T(high) − T = n·(ΔH − ΔH_low)·1000/C and T − T(low) = n·(ΔH_high − ΔH)·1000/C.
+  const h = dissolve('KHS').best;
+  const C = 450; // J/K, given
+  const n = 2 / molarMass({ K: 1, H: 1, S: 1 });
+  const r = packFinalTemperature({ solids: [{ formula: 'KHS', massG: 2 }], waterG: 100, startC: 20 }, { heatCapacityJPerK: C, heatCapacityUJPerK: 0 });
+
+  it('is read at the ends of that interval, not at ±1.96·u', () => {
+    expect(h.high - h.low).toBeGreaterThan(2 * 1.959963984540054 * h.u * 1.01);
+    expect(r.dissolved[0]!.undissolvedMass).toBe(0);
+    expect(r.finalTemperature.high - r.finalTemperature.value).toBeCloseTo((n * (h.value - h.low) * 1000) / C, 6);
+    expect(r.finalTemperature.value - r.finalTemperature.low).toBeCloseTo((n * (h.high - h.value) * 1000) / C, 6);
   });
 });

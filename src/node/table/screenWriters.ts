@@ -5,12 +5,12 @@
  *
  * @module
  */
-import { stringify } from 'csv-stringify/sync';
 import type { Estimate } from '../../quantity/estimate.js';
 import { formatEstimate } from '../../quantity/formatEstimate.js';
 import type { ScreenRow, ScreenSettings, ScreenSummary } from '../../screen/screenRow.js';
 import { textTable } from '../cli/textTable.js';
 import { csvCell } from './csvCell.js';
+import { csvRecord } from './csvRecord.js';
 import { screenColumns } from './screenColumns.js';
 
 /** A writer that turns rows into text as they come. */
@@ -20,26 +20,17 @@ export interface StreamWriter {
   end(summary: ScreenSummary): string;
 }
 
-/** Records handed to csv-stringify at a time (one call per batch, not per row). */
-const CSV_BATCH = 64;
-
-/** CSV: a header of JSON field paths, one record per row, written by csv-stringify; text cells neutralised against formula injection ({@link csvCell}). */
+/** CSV: a header of JSON field paths, one record per row ({@link csvRecord}, RFC 4180 quoting); text cells neutralised against formula injection ({@link csvCell}). */
 export function csvWriter(settings: ScreenSettings, inputColumns?: readonly string[]): StreamWriter {
   const columns = screenColumns(settings, inputColumns);
-  let batch: string[][] = [];
-  const flush = (): string => {
-    if (batch.length === 0) return '';
-    const text = stringify(batch);
-    batch = [];
-    return text;
-  };
+  const cells: string[] = new Array<string>(columns.length);
   return {
-    start: () => stringify([columns.map((c) => c.header)]),
+    start: () => csvRecord(columns.map((c) => c.header)),
     row: (row) => {
-      batch.push(columns.map((c) => csvCell(c.get(row))));
-      return batch.length >= CSV_BATCH ? flush() : '';
+      for (let i = 0; i < columns.length; i++) cells[i] = csvCell(columns[i]!.get(row));
+      return csvRecord(cells);
     },
-    end: () => flush(),
+    end: () => '',
   };
 }
 
