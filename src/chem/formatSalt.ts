@@ -1,4 +1,4 @@
-import type { Salt, SaltIon } from './salt.js';
+import { checkSaltShape, type Salt, type SaltIon } from './salt.js';
 
 const SUBSCRIPT_DIGITS = '₀₁₂₃₄₅₆₇₈₉';
 
@@ -51,7 +51,8 @@ function subscriptDigits(formula: string): string {
  * ```
  */
 export function formatSalt(salt: Pick<Salt, 'ions' | 'water'>, options: { style?: 'plain' | 'unicode' } = {}): string {
+  checkSaltShape(salt);
   const anhydrous = formatIons(salt.ions);
   const plain = anhydrous + hydrateSuffix(salt.water);
-  return options.style === 'unicode' ? subscriptDigits(plain) : plain;
+  return options?.style === 'unicode' ? subscriptDigits(plain) : plain;
 }

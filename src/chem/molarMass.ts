@@ -1,5 +1,6 @@
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
+import { describeValue, numberArgument } from '../quantity/argumentChecks.js';
 import { IonheatError } from '../error.js';
 import { exactSum } from '../quantity/exactSum.js';
 
@@ -27,9 +28,13 @@ export function isKnownElement(symbol: string, dataset: Dataset = builtinDataset
  * ```
  */
 export function molarMass(composition: Readonly<Record<string, number>>, dataset: Dataset = builtinDataset()): number {
+  if (composition === null || typeof composition !== 'object' || Array.isArray(composition)) {
+    throw new IonheatError('INVALID_ARGUMENT', `a composition is an object of element symbols and counts, such as { Na: 1, Cl: 1 }; got ${describeValue(composition)}`, { field: 'composition' });
+  }
   const weights = atomicWeights(dataset);
   return exactSum(
     Object.entries(composition).map(([symbol, count]) => {
+      numberArgument(count, `composition.${symbol}`, `the count of ${symbol}`, { min: 0, max: 1_000_000 });
       const weight = weights.get(symbol);
       if (weight === undefined) throw new IonheatError('UNKNOWN_ELEMENT', `no atomic weight for element "${symbol}" in the ${dataset.label} tables`, { text: symbol });
       return { coefficient: count, value: weight };

@@ -5,6 +5,7 @@
  * @module
  */
 import { z } from 'zod';
+import { IonheatError } from '../error.js';
 
 export const saltIonSchema = z.strictObject({
   /** Ion id of the table, e.g. `Ca[2+]`. */
@@ -35,6 +36,25 @@ export const saltSchema = z.strictObject({
 });
 export type Salt = z.infer<typeof saltSchema>;
 
+/** What the structural functions read of a salt: its ions (formula, charge, count) and its water. Extra keys are allowed. */
+const saltShapeSchema = z.object({
+  ions: z.array(z.object({ formula: z.string(), charge: z.number().int().min(-12).max(12), count: z.number().int().positive().max(1_000_000) })),
+  water: z.number().nonnegative().max(1_000_000),
+});
+
+/**
+ * Checks that `salt` has the ions and water a {@link Salt} has, else an
+ * `INVALID_ARGUMENT` error naming the field.
+ * @internal
+ */
+export function checkSaltShape(salt: unknown, field = 'salt'): void {
+  const parsed = saltShapeSchema.safeParse(salt);
+  if (parsed.success) return;
+  const issue = parsed.error.issues[0]!;
+  const at = [field, ...issue.path].join('.');
+  throw new IonheatError('INVALID_ARGUMENT', `${field} must be a salt from parseSalt: ${at} ${issue.message.toLowerCase()}`, { field: at });
+}
+
 /**
  * The charge type |z₊|:|z₋| of a salt with one kind of cation and one kind of
  * anion: `1:1` (NaCl), `2:1` (CaCl2), `1:2` (Na2SO4). Undefined for a double
@@ -51,6 +71,7 @@ export type Salt = z.infer<typeof saltSchema>;
  * ```
  */
 export function chargeType(salt: Salt): string | undefined {
+  checkSaltShape(salt);
   const cations = salt.ions.filter((i) => i.charge > 0);
   const anions = salt.ions.filter((i) => i.charge < 0);
   if (cations.length !== 1 || anions.length !== 1) return undefined;
@@ -72,5 +93,6 @@ export function chargeType(salt: Salt): string | undefined {
  * ```
  */
 export function ionsPerFormulaUnit(salt: Salt): number {
+  checkSaltShape(salt);
   return salt.ions.reduce((n, i) => n + i.count, 0);
 }

@@ -3,6 +3,8 @@
  *
  * @module
  */
+import { saltArgument } from '../chem/saltArgument.js';
+import { describeValue, numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -57,6 +59,17 @@ export interface BornHaberCycle {
   steps: CycleStep[];
   /** The unknown: `lattice enthalpy` (positive), `enthalpy of formation`, or `electron affinity` (0 K, energy released, the tabulating convention). */
   result: Estimate;
+}
+
+/** A value the caller gives: { value, u } in kJ/mol (magnitude at most 1e6), optional source and method text. */
+function checkKnown(known: KnownValue | undefined, field: string): void {
+  if (known === undefined) return;
+  if (known === null || typeof known !== 'object') throw new IonheatError('INVALID_ARGUMENT', `${field} must be { value, u } in kJ/mol, got ${describeValue(known)}`, { field });
+  numberArgument(known.value, `${field}.value`, 'a known enthalpy in kJ/mol', { min: -1e6, max: 1e6 });
+  numberArgument(known.u, `${field}.u`, 'its standard uncertainty in kJ/mol', { min: 0, max: 1e6 });
+  for (const k of ['source', 'method'] as const) {
+    if (known[k] !== undefined && typeof known[k] !== 'string') throw new IonheatError('INVALID_ARGUMENT', `${field}.${k} must be text when given, got ${describeValue(known[k])}`, { field: `${field}.${k}` });
+  }
 }
 
 const ORDER: Readonly<Record<CycleStep['kind'], number>> = { 'ion-formation': 0, atomization: 1, ionization: 2, 'electron-attachment': 3, 'electron-enthalpy': 4, lattice: 5, formation: 6 };
@@ -122,10 +135,13 @@ function affinityUnknown(salt: Salt, dataset: Dataset): { ion: string; element: 
  * ```
  */
 export function bornHaberCycle(salt: Salt | string, options: BornHaberOptions = {}, dataset: Dataset = builtinDataset()): BornHaberCycle {
-  const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
+  const s = saltArgument(salt, dataset);
+  options = optionsArgument(options);
+  checkKnown(options.latticeEnthalpy, 'latticeEnthalpy');
+  checkKnown(options.formationEnthalpy, 'formationEnthalpy');
   const solve = options.solve ?? 'lattice';
   if (!['lattice', 'formation', 'electron-affinity'].includes(solve)) {
-    throw new IonheatError('INVALID_ARGUMENT', `a cycle is solved for lattice, formation or electron-affinity, not "${String(solve)}"`, { field: 'solve' });
+    throw new IonheatError('INVALID_ARGUMENT', `a cycle is solved for lattice, formation or electron-affinity, not ${describeValue(solve)}`, { field: 'solve' });
   }
   if (s.kind !== 'ionic') throw new IonheatError('NOT_APPLICABLE', `${s.formula} is a non-electrolyte: it has no ionic lattice and no Born–Haber cycle`, { text: s.formula });
   if (s.water > 0) throw new IonheatError('NOT_APPLICABLE', `${s.formula} is a hydrate; the Born–Haber cycle is built for the anhydrous salt (${s.anhydrous})`, { text: s.formula });
@@ -173,14 +189,14 @@ export function bornHaberCycle(salt: Salt | string, options: BornHaberOptions = 
     value = exactSum([{ coefficient: 1, value: pathSum(path) }, { coefficient: -1, value: formationKnown.value }]);
     u = quadrature(pathU(path), formationKnown.u);
     quantity = 'lattice enthalpy';
-    latticeStep = { kind: 'lattice', label: `lattice enthalpy of ${s.formula} (solved; the step is −ΔH_L)`, equation: `${gasIons} → ${crystal}`, value: -value, u, source: 'solved', fromMemory: false, count: 1, solved: true };
+    latticeStep = { kind: 'lattice', label: `lattice enthalpy of ${s.formula} (solved; the step is −ΔH_L)`, equation: `${gasIons} → ${crystal}`, value: 0 - value, u, source: 'solved', fromMemory: false, count: 1, solved: true };
     formationStep = { kind: 'formation', label: `enthalpy of formation of ${s.formula}`, equation: `elements → ${crystal}`, value: formationKnown.value, u: formationKnown.u, source: knownSource(formationKnown), fromMemory: memoryOfTabulated, count: 1, solved: false };
   } else {
     if (!latticeKnown) {
       throw new IonheatError('MISSING_DATA', `solving the cycle of ${s.formula} for the ${solve === 'formation' ? 'formation enthalpy' : 'electron affinity'} needs a lattice enthalpy; give one (latticeEnthalpy, or --lattice on the command line)`, { text: s.formula, field: 'latticeEnthalpy' });
     }
     if (latticeKnown.basis === 'model' || latticeKnown.basis === 'anchored') basis = latticeKnown.basis;
-    latticeStep = { kind: 'lattice', label: `lattice enthalpy of ${s.formula} (the step is −ΔH_L)`, equation: `${gasIons} → ${crystal}`, value: -latticeKnown.value, u: latticeKnown.u, source: knownSource(latticeKnown), fromMemory: false, count: 1, solved: false };
+    latticeStep = { kind: 'lattice', label: `lattice enthalpy of ${s.formula} (the step is −ΔH_L)`, equation: `${gasIons} → ${crystal}`, value: 0 - latticeKnown.value, u: latticeKnown.u, source: knownSource(latticeKnown), fromMemory: false, count: 1, solved: false };
     if (latticeKnown.method) notes.push(`lattice enthalpy ${+latticeKnown.value.toFixed(1)} ± ${+latticeKnown.u.toFixed(1)} kJ/mol from ${latticeKnown.method}`);
     if (solve === 'formation') {
       value = exactSum([{ coefficient: 1, value: pathSum(path) }, { coefficient: -1, value: latticeKnown.value }]);

@@ -3,6 +3,8 @@
  *
  * @module
  */
+import { saltArgument } from '../chem/saltArgument.js';
+import { optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -41,7 +43,8 @@ export interface CycleLatticeOptions {
  * ```
  */
 export function cycleLatticeEnthalpy(salt: Salt | string, dataset: Dataset = builtinDataset(), options: CycleLatticeOptions = {}): Estimate | undefined {
-  const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
+  const s = saltArgument(salt, dataset);
+  options = optionsArgument(options);
   if (s.kind !== 'ionic' || s.water > 0 || options.hideCrystal) return undefined;
   const cache = dataset.memo('cycle.latticeCache', () => new Map<string, Estimate | null>());
   let hit = cache.get(s.formula);

@@ -4,6 +4,7 @@
  *
  * @module
  */
+import { numberArgument } from '../quantity/argumentChecks.js';
 import { GAS_CONSTANT, STANDARD_TEMPERATURE } from '../quantity/constants.js';
 
 /**
@@ -33,5 +34,9 @@ import { GAS_CONSTANT, STANDARD_TEMPERATURE } from '../quantity/constants.js';
  * ```
  */
 export function thermalElectronEnthalpy(charge: number, temperature: number = STANDARD_TEMPERATURE): number {
-  return (charge * 2.5 * GAS_CONSTANT * temperature) / 1000;
+  charge = numberArgument(charge, 'charge', 'the charge of the ion', { min: -12, max: 12, integer: true });
+  numberArgument(temperature, 'temperature', 'the temperature in K', { min: 0, above: true, max: 100_000 });
+  if (charge === 0) return 0;
+  const h = (charge * 2.5 * GAS_CONSTANT * temperature) / 1000;
+  return h === 0 ? 0 : h; // a denormal temperature can underflow to −0
 }

@@ -6,6 +6,7 @@
  *
  * @module
  */
+import { optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { findIon } from '../chem/ionIndex.js';
@@ -264,6 +265,7 @@ export function bornCalibration(options: { excludeIon?: string } = {}, dataset: 
  * ```
  */
 export function bornHydrationEnthalpy(ion: string, options: { excludeIon?: string } = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
+  options = optionsArgument(options);
   const record = findIon(ion, dataset);
   const radius = bornRadius(ion, dataset);
   if (!record || !radius || record.charge === 0) return undefined;

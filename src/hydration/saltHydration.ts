@@ -5,6 +5,9 @@
  *
  * @module
  */
+import { IonheatError } from '../error.js';
+import { saltArgument } from '../chem/saltArgument.js';
+import { describeValue, optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
@@ -43,6 +46,13 @@ function ionTerm(ion: string, charge: number, scale: HydrationScale, born: boole
  */
 function ionTerms(dataset: Dataset): Record<HydrationScale, { born: Map<string, HydrationTerm | null>; tabulated: Map<string, HydrationTerm | null> }> {
   return dataset.memo('hydration.ionTerms', () => ({ absolute: { born: new Map(), tabulated: new Map() }, conventional: { born: new Map(), tabulated: new Map() } }));
+}
+
+/** The options as a caller passes them: an object whose `scale`, when given, is absolute or conventional. */
+function hydrationOptions(options: SaltHydrationOptions | undefined): SaltHydrationOptions {
+  const o = optionsArgument(options);
+  if (o.scale !== undefined && o.scale !== 'absolute' && o.scale !== 'conventional') throw new IonheatError('INVALID_ARGUMENT', `scale must be absolute or conventional, got ${describeValue(o.scale)}`, { field: 'scale' });
+  return o;
 }
 
 /** The kept terms of a salt's hydration sum (shared: not to be changed or handed out), or undefined when an ion has no value. */
@@ -86,6 +96,8 @@ function keptTerms(salt: Salt, options: SaltHydrationOptions, dataset: Dataset):
  * ```
  */
 export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {}, dataset: Dataset = builtinDataset()): { term: HydrationTerm; count: number }[] | undefined {
+  salt = saltArgument(salt, dataset);
+  options = hydrationOptions(options);
   return keptTerms(salt, options, dataset)?.map(({ term, count }) => ({ term: { ...term, sources: [...term.sources], notes: [...term.notes] }, count }));
 }
 
@@ -112,6 +124,8 @@ export function saltHydrationTerms(salt: Salt, options: SaltHydrationOptions = {
  * ```
  */
 export function saltHydrationEnthalpy(salt: Salt, options: SaltHydrationOptions = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
+  salt = saltArgument(salt, dataset);
+  options = hydrationOptions(options);
   const terms = keptTerms(salt, options, dataset);
   if (!terms) return undefined;
   const scale = options.scale ?? 'absolute';

@@ -3,6 +3,8 @@
  *
  * @module
  */
+import { saltArgument } from '../chem/saltArgument.js';
+import { optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -39,7 +41,8 @@ import { latticeEstimates, type LatticeEstimateOptions } from './latticeEstimate
  * ```
  */
 export function bestLatticeEstimate(salt: Salt | string, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate {
-  const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
+  const s = saltArgument(salt, dataset);
+  options = optionsArgument(options);
   const { estimates, skipped } = latticeEstimates(s, options, dataset);
   let best: Estimate | undefined;
   for (const e of estimates) {

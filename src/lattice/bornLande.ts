@@ -3,6 +3,7 @@
  *
  * @module
  */
+import { numberArgument } from '../quantity/argumentChecks.js';
 import { COULOMB_KJ_ANGSTROM } from '../quantity/constants.js';
 
 /**
@@ -27,5 +28,9 @@ import { COULOMB_KJ_ANGSTROM } from '../quantity/constants.js';
  * ```
  */
 export function bornLande(madelung: number, chargeProduct: number, r0: number, bornExponent: number): number {
+  numberArgument(madelung, 'madelung', 'the Madelung constant', { min: 0, above: true, max: 1000 });
+  numberArgument(chargeProduct, 'chargeProduct', 'the charge product |z₊·z₋|', { min: 0, above: true, max: 1000 });
+  numberArgument(r0, 'r0', 'the cation–anion distance in Å', { min: 0.01, max: 1000 });
+  numberArgument(bornExponent, 'bornExponent', 'the Born exponent', { min: 1, max: 100 });
   return ((COULOMB_KJ_ANGSTROM * madelung * chargeProduct) / r0) * (1 - 1 / bornExponent);
 }

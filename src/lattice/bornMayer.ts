@@ -3,6 +3,7 @@
  *
  * @module
  */
+import { numberArgument } from '../quantity/argumentChecks.js';
 import { COULOMB_KJ_ANGSTROM } from '../quantity/constants.js';
 
 /**
@@ -32,5 +33,9 @@ export const BORN_MAYER_RHO = 0.345;
  * ```
  */
 export function bornMayer(madelung: number, chargeProduct: number, r0: number, rho: number = BORN_MAYER_RHO): number {
+  numberArgument(madelung, 'madelung', 'the Madelung constant', { min: 0, above: true, max: 1000 });
+  numberArgument(chargeProduct, 'chargeProduct', 'the charge product |z₊·z₋|', { min: 0, above: true, max: 1000 });
+  numberArgument(r0, 'r0', 'the cation–anion distance in Å', { min: 0.01, max: 1000 });
+  numberArgument(rho, 'rho', 'the repulsion range ρ in Å', { min: 0, above: true, max: 100 });
   return ((COULOMB_KJ_ANGSTROM * madelung * chargeProduct) / r0) * (1 - rho / r0);
 }

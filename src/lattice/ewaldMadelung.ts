@@ -5,6 +5,7 @@
  * @module
  */
 import { IonheatError } from '../error.js';
+import { numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
 
 /** A vector in Cartesian (lattice vectors) or fractional (positions) coordinates. */
 export type Vec3 = readonly [number, number, number];
@@ -93,17 +94,35 @@ function check(cell: PointChargeCell): void {
   const bad = (why: string): never => {
     throw new IonheatError('INVALID_ARGUMENT', `Ewald summation: ${why}`, { field: 'cell' });
   };
-  if (!cell || !Array.isArray(cell.lattice) || cell.lattice.length !== 3) bad('the cell needs three lattice vectors');
-  for (const v of cell.lattice) if (!Array.isArray(v) || v.length !== 3 || !v.every(Number.isFinite)) bad('each lattice vector is three finite numbers');
+  const within = (x: unknown, limit: number): boolean => typeof x === 'number' && Number.isFinite(x) && Math.abs(x) <= limit;
+  if (!cell || typeof cell !== 'object' || !Array.isArray(cell.lattice) || cell.lattice.length !== 3) bad('the cell needs three lattice vectors');
+  for (const v of cell.lattice) {
+    if (!Array.isArray(v) || v.length !== 3 || !v.every((x) => within(x, 1e4))) bad('each lattice vector is three finite numbers of at most 10000 length units');
+    if (!(norm(v) >= 1e-4)) bad('a lattice vector is too short (below 0.0001 length units)');
+  }
   if (!Array.isArray(cell.sites) || cell.sites.length < 2) bad('the cell needs at least two sites');
   if (cell.sites.length > 500) bad('at most 500 sites per cell');
   for (const s of cell.sites) {
-    if (!Array.isArray(s.position) || s.position.length !== 3 || !s.position.every(Number.isFinite)) bad('each site position is three finite fractional coordinates');
-    if (!Number.isFinite(s.charge)) bad('each site charge is a finite number');
+    if (s === null || typeof s !== 'object') bad('each site is { position, charge }');
+    if (!Array.isArray(s.position) || s.position.length !== 3 || !s.position.every((x) => within(x, 100))) bad('each site position is three finite fractional coordinates (at most 100 in size)');
+    if (!within(s.charge, 100)) bad('each site charge is a finite number of at most 100 elementary charges');
   }
   const total = cell.sites.reduce((q, s) => q + s.charge, 0);
   if (Math.abs(total) > 1e-9) bad(`the cell is not neutral (total charge ${total})`);
+  const [a1, a2, a3] = cell.lattice;
+  if (!(Math.abs(dot(a1, cross(a2, a3))) >= 1e-3 * norm(a1) * norm(a2) * norm(a3))) bad('the lattice vectors are coplanar or nearly so (the cell volume is below 0.001 of the product of their lengths)');
+  // Two sites at the same place (up to a lattice translation) would put a zero distance into the sums.
+  for (let i = 0; i < cell.sites.length; i++) {
+    for (let j = i + 1; j < cell.sites.length; j++) {
+      const p = cell.sites[i]!.position;
+      const r = cell.sites[j]!.position;
+      if ([0, 1, 2].every((c) => Math.abs(p[c]! - r[c]! - Math.round(p[c]! - r[c]!)) < 1e-9)) bad(`sites ${i} and ${j} are at the same position`);
+    }
+  }
 }
+
+/** The most terms the two lattice sums may take together (about a second of work). */
+const MAX_TERMS = 2e8;
 
 /**
  * The Madelung constant of a periodic arrangement of point charges by
@@ -134,6 +153,10 @@ function check(cell: PointChargeCell): void {
  */
 export function ewaldMadelung(cell: PointChargeCell, options: EwaldOptions = {}): MadelungResult {
   check(cell);
+  options = optionsArgument(options);
+  if (options.tolerance !== undefined) numberArgument(options.tolerance, 'tolerance', 'the relative tolerance of the lattice sums', { min: 1e-15, max: 0.1 });
+  if (options.chargeProduct !== undefined) numberArgument(options.chargeProduct, 'chargeProduct', 'the charge product |z₊·z₋|', { min: 0, above: true, max: 10_000 });
+  if (options.formulaUnits !== undefined) numberArgument(options.formulaUnits, 'formulaUnits', 'the number of formula units in the cell', { min: 1, max: 10_000, integer: true });
   const [a1, a2, a3] = cell.lattice;
   const volume = Math.abs(dot(a1, cross(a2, a3)));
   if (!(volume > 0)) throw new IonheatError('INVALID_ARGUMENT', 'Ewald summation: the lattice vectors are coplanar (zero cell volume)', { field: 'cell' });
@@ -156,8 +179,11 @@ export function ewaldMadelung(cell: PointChargeCell, options: EwaldOptions = {})
   const rCut = x / alpha; // erfc(α·rCut) ≈ tolerance
   const kCut = 2 * alpha * x;
 
-  let real = 0;
   const nMax = spacing.map((d) => Math.ceil(rCut / d) + 1);
+  const hMax = cell.lattice.map((v) => Math.ceil((kCut * norm(v)) / (2 * Math.PI)) + 1);
+  const terms = n * n * nMax.reduce((p, m) => p * (2 * m + 1), 1) + n * hMax.reduce((p, m) => p * (2 * m + 1), 1);
+  if (!(terms <= MAX_TERMS)) throw new IonheatError('INVALID_ARGUMENT', `Ewald summation: the cell is too skewed or holds too many sites for the lattice sums (about ${terms.toPrecision(2)} terms; at most ${MAX_TERMS})`, { field: 'cell' });
+  let real = 0;
   for (let i = 0; i < n; i++) {
     for (let j = 0; j < n; j++) {
       const dx = cart[j]![0] - cart[i]![0];
@@ -182,7 +208,6 @@ export function ewaldMadelung(cell: PointChargeCell, options: EwaldOptions = {})
   real /= 2;
 
   let reciprocal = 0;
-  const hMax = cell.lattice.map((v) => Math.ceil((kCut * norm(v)) / (2 * Math.PI)) + 1);
   for (let h = -hMax[0]!; h <= hMax[0]!; h++) {
     for (let k = -hMax[1]!; k <= hMax[1]!; k++) {
       for (let l = -hMax[2]!; l <= hMax[2]!; l++) {

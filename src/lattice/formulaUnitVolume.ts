@@ -3,6 +3,7 @@
  *
  * @module
  */
+import { numberArgument } from '../quantity/argumentChecks.js';
 import { AVOGADRO } from '../quantity/constants.js';
 
 /** nm³ per cm³. */
@@ -25,5 +26,7 @@ const NM3_PER_CM3 = 1e21;
  * ```
  */
 export function formulaUnitVolume(molarMass: number, density: number): number {
+  numberArgument(molarMass, 'molarMass', 'the molar mass in g/mol', { min: 0.001, max: 1e6 });
+  numberArgument(density, 'density', 'the density in g/cm³', { min: 0.001, max: 100 });
   return (molarMass / (density * AVOGADRO)) * NM3_PER_CM3;
 }

@@ -3,6 +3,7 @@
  *
  * @module
  */
+import { numberArgument } from '../quantity/argumentChecks.js';
 
 /**
  * A = 121.39 kJ·mol⁻¹·nm, the constant of Glasser's generalised equation.
@@ -29,5 +30,7 @@ export const GLASSER_CONSTANT = 121.39;
  * ```
  */
 export function glasserLatticeEnergy(ionicStrength: number, volume: number): number {
+  numberArgument(ionicStrength, 'ionicStrength', 'the ionic strength factor I', { min: 0, above: true, max: 10_000 });
+  numberArgument(volume, 'volume', 'the formula-unit volume in nm³', { min: 1e-6, max: 1000 });
   return GLASSER_CONSTANT * ionicStrength * Math.cbrt((2 * ionicStrength) / volume);
 }

@@ -3,6 +3,7 @@
  *
  * @module
  */
+import { numberArgument } from '../quantity/argumentChecks.js';
 
 /**
  * Kapustinskii's constant K = 1.2025 × 10⁻⁴ J·m/mol, written in
@@ -41,5 +42,7 @@ export const KAPUSTINSKII_RHO = 0.345;
  * ```
  */
 export function kapustinskii(chargeFactor: number, distance: number): number {
+  numberArgument(chargeFactor, 'chargeFactor', 'the charge factor ν·|z₊·z₋|', { min: 0, above: true, max: 10_000 });
+  numberArgument(distance, 'distance', 'the cation–anion distance in Å', { min: 0.01, max: 1000 });
   return ((KAPUSTINSKII_CONSTANT * chargeFactor) / distance) * (1 - KAPUSTINSKII_RHO / distance);
 }

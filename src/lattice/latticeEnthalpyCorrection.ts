@@ -3,6 +3,8 @@
  *
  * @module
  */
+import { describeValue, numberArgument } from '../quantity/argumentChecks.js';
+import { IonheatError } from '../error.js';
 import { GAS_CONSTANT, STANDARD_TEMPERATURE } from '../quantity/constants.js';
 import type { IonShape } from './latticeIons.js';
 
@@ -30,7 +32,14 @@ const DEGREES: Readonly<Record<IonShape, number>> = { monatomic: 3, linear: 5, n
  * ```
  */
 export function latticeEnthalpyCorrection(ions: readonly { count: number; shape: IonShape }[], temperature: number = STANDARD_TEMPERATURE): number {
+  if (!Array.isArray(ions)) throw new IonheatError('INVALID_ARGUMENT', `the ions of latticeEnthalpyCorrection are a list of { count, shape }, got ${describeValue(ions)}`, { field: 'ions' });
+  numberArgument(temperature, 'temperature', 'the temperature in K', { min: 0, above: true, max: 100_000 });
   let degrees = 0;
-  for (const { count, shape } of ions) degrees += count * (DEGREES[shape] / 2 - 2);
+  ions.forEach((ion, i) => {
+    if (ion === null || typeof ion !== 'object') throw new IonheatError('INVALID_ARGUMENT', `ions[${i}] must be { count, shape }, got ${describeValue(ion)}`, { field: `ions[${i}]` });
+    const count = numberArgument(ion.count, `ions[${i}].count`, 'the count of an ion', { min: 1, max: 1_000_000, integer: true });
+    if (!Object.hasOwn(DEGREES, ion.shape)) throw new IonheatError('INVALID_ARGUMENT', `ions[${i}].shape must be monatomic, linear or nonlinear, got ${describeValue(ion.shape)}`, { field: `ions[${i}].shape` });
+    degrees += count * (DEGREES[ion.shape as IonShape] / 2 - 2);
+  });
   return (degrees * GAS_CONSTANT * temperature) / 1000;
 }

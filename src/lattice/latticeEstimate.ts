@@ -8,6 +8,8 @@
  *
  * @module
  */
+import { saltArgument } from '../chem/saltArgument.js';
+import { describeValue, numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -40,7 +42,23 @@ export interface LatticeEstimateOptions extends LatticeModelOptions {
 
 const CORRECTED = '-corrected';
 
+/**
+ * The options as a caller passes them, checked: an object whose `structure`
+ * and `excludeSalt` are text and whose `latticeParameter` (Å) and
+ * `coordination` are finite numbers, else `INVALID_ARGUMENT` naming the field.
+ */
+function latticeOptions(options: LatticeEstimateOptions | undefined): LatticeEstimateOptions {
+  const o = optionsArgument(options);
+  for (const k of ['structure', 'excludeSalt'] as const) {
+    if (o[k] !== undefined && typeof o[k] !== 'string') throw new IonheatError('INVALID_ARGUMENT', `${k} must be text when given, got ${describeValue(o[k])}`, { field: k });
+  }
+  if (o.latticeParameter !== undefined) numberArgument(o.latticeParameter, 'latticeParameter', 'the lattice parameter in Å', { min: 0, above: true, max: 1000 });
+  if (o.coordination !== undefined) numberArgument(o.coordination, 'coordination', 'the coordination number', { min: 2, max: 14, integer: true });
+  return o;
+}
+
 function readMethod(method: string): { model: LatticeModel; corrected: boolean } {
+  if (typeof method !== 'string') throw new IonheatError('INVALID_ARGUMENT', `a lattice method is a name (known: ${latticeMethods.join(', ')}), got ${describeValue(method)}`, { field: 'method' });
   const corrected = method.endsWith(CORRECTED);
   const model = (corrected ? method.slice(0, -CORRECTED.length) : method) as LatticeModel;
   if (!latticeModels.includes(model)) {
@@ -83,7 +101,7 @@ function readMethod(method: string): { model: LatticeModel; corrected: boolean }
  * ```
  */
 export function latticeEstimate(salt: Salt | string, method: LatticeMethod, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate {
-  const hit = lookup(typeof salt === 'string' ? parseSalt(salt, dataset) : salt, method, options, dataset);
+  const hit = lookup(saltArgument(salt, dataset), method, latticeOptions(options), dataset);
   if (hit instanceof Error) throw hit;
   return copy(hit);
 }
@@ -109,7 +127,7 @@ export function latticeEstimate(salt: Salt | string, method: LatticeMethod, opti
  * ```
  */
 export function tryLatticeEstimate(salt: Salt | string, method: LatticeMethod, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
-  const hit = lookup(typeof salt === 'string' ? parseSalt(salt, dataset) : salt, method, options, dataset);
+  const hit = lookup(saltArgument(salt, dataset), method, latticeOptions(options), dataset);
   if (hit instanceof Error) {
     if (hit.code === 'MISSING_DATA' || hit.code === 'NOT_APPLICABLE') return undefined;
     throw hit;
@@ -247,7 +265,8 @@ export function latticeEstimates(
   options: LatticeEstimateOptions = {},
   dataset: Dataset = builtinDataset(),
 ): { estimates: Estimate[]; skipped: { method: LatticeMethod; reason: string }[] } {
-  const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
+  const s = saltArgument(salt, dataset);
+  options = latticeOptions(options);
   const estimates: Estimate[] = [];
   const skipped: { method: LatticeMethod; reason: string }[] = [];
   for (const method of latticeMethods) {

@@ -4,6 +4,7 @@
  *
  * @module
  */
+import { numberArgument } from '../quantity/argumentChecks.js';
 
 /**
  * The lattice energy by the volume-based equation of Jenkins, Roobottom,
@@ -29,5 +30,9 @@
  * ```
  */
 export function vbtLatticeEnergy(ionicStrength: number, volume: number, alpha: number, beta: number): number {
+  numberArgument(ionicStrength, 'ionicStrength', 'the ionic strength factor I', { min: 0, above: true, max: 10_000 });
+  numberArgument(volume, 'volume', 'the formula-unit volume in nm³', { min: 1e-6, max: 1000 });
+  numberArgument(alpha, 'alpha', 'the coefficient α in kJ·nm/mol', { min: -1e6, max: 1e6 });
+  numberArgument(beta, 'beta', 'the coefficient β in kJ/mol', { min: -1e6, max: 1e6 });
   return 2 * ionicStrength * (alpha / Math.cbrt(volume) + beta);
 }

@@ -138,7 +138,7 @@ export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolut
   const listed = inputs.map((i) => i.label).join(', ');
   if (options.method === 'monte-carlo') {
     const samples = Math.max(20, Math.floor(options.samples ?? DEFAULT_SAMPLES));
-    const seed = options.seed ?? DEFAULT_SEED;
+    const seed = (options.seed ?? DEFAULT_SEED) || 0; // −0 reported as 0
     const draw = seededNormal(seed);
     const n = fill.solids.length;
     const results = new Float64Array(samples);

@@ -4,6 +4,7 @@
  *
  * @module
  */
+import { numberArgument } from '../quantity/argumentChecks.js';
 
 /**
  * Cryoscopic constant of water, K·kg/mol. Physical chemistry textbooks give
@@ -30,6 +31,9 @@ export const WATER_CRYOSCOPIC_CONSTANT = 1.86;
  * ```
  */
 export function freezingPointOfSolution(particleMoles: number, waterG: number): number | undefined {
-  if (!(waterG > 0)) return undefined;
-  return -(WATER_CRYOSCOPIC_CONSTANT * particleMoles * 1000) / waterG;
+  numberArgument(particleMoles, 'particleMoles', 'the moles of dissolved particles', { min: 0, max: 1e9 });
+  numberArgument(waterG, 'waterG', 'the grams of liquid water', { max: 1e12 });
+  if (!(waterG >= 1e-6)) return undefined;
+  const t = -(WATER_CRYOSCOPIC_CONSTANT * particleMoles * 1000) / waterG;
+  return t === 0 ? 0 : t;
 }

@@ -5,8 +5,11 @@
  *
  * @module
  */
+import { describeValue, numberArgument } from '../quantity/argumentChecks.js';
+import { saltArgument } from '../chem/saltArgument.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
+import { IonheatError } from '../error.js';
 import type { Salt } from '../chem/salt.js';
 import { saltHazards } from './saltHazards.js';
 
@@ -40,6 +43,19 @@ export interface CautionInput {
 }
 
 const c = (x: number): string => `${x.toFixed(1)} °C`;
+
+/** The fields {@link packCautions} reads, each checked, else `INVALID_ARGUMENT` naming it. */
+function checkCautionInput(input: CautionInput, dataset: Dataset): void {
+  if (input === null || typeof input !== 'object') throw new IonheatError('INVALID_ARGUMENT', `packCautions takes { startC, final, salts }, got ${describeValue(input)}`, { field: 'input' });
+  numberArgument(input.startC, 'startC', 'the start temperature in °C', { min: -273.15, max: 1000 });
+  const f = input.final;
+  if (f === null || typeof f !== 'object') throw new IonheatError('INVALID_ARGUMENT', `final must be { value, low, high } in °C, got ${describeValue(f)}`, { field: 'final' });
+  for (const k of ['value', 'low', 'high'] as const) numberArgument(f[k], `final.${k}`, 'a final temperature in °C', { min: -273.15, max: 1000 });
+  if (input.clamp !== undefined && !['freezing', 'eutectic', 'boiling'].includes(input.clamp)) throw new IonheatError('INVALID_ARGUMENT', `clamp is freezing, eutectic or boiling when given, got ${describeValue(input.clamp)}`, { field: 'clamp' });
+  if (!Array.isArray(input.salts)) throw new IonheatError('INVALID_ARGUMENT', `salts must be a list of salts from parseSalt, got ${describeValue(input.salts)}`, { field: 'salts' });
+  input.salts.forEach((s, i) => saltArgument(s, dataset, `salts[${i}]`));
+  if (input.secondsAboveBurnThreshold !== undefined) numberArgument(input.secondsAboveBurnThreshold, 'secondsAboveBurnThreshold', 'the seconds above the burn threshold', { min: 0, max: 1e9 });
+}
 
 /** The head of a citation, for a bracket after a caution. */
 function shortCitation(citation: string | undefined): string | undefined {
@@ -80,6 +96,7 @@ function shortCitation(citation: string | undefined): string | undefined {
  * ```
  */
 export function packCautions(input: CautionInput, dataset: Dataset = builtinDataset()): string[] {
+  checkCautionInput(input, dataset);
   const out: string[] = [];
   const { startC, final } = input;
   const hot = final.value > startC + NEUTRAL_BAND_K;

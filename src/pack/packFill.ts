@@ -138,9 +138,17 @@ function invalid(field: string, message: string): IonheatError {
   return new IonheatError('INVALID_ARGUMENT', message, { field });
 }
 
+/**
+ * The range a mass (g) or heat capacity (J/K) of a fill may take: from a
+ * microgram (or µJ/K) to a thousand tonnes (or GJ/K), so that every product
+ * and quotient of the heat balance stays a finite, meaningful number.
+ */
+const FILL_RANGE = { min: 1e-6, max: 1e9 };
+
 function checkPositive(value: unknown, field: string, what: string, unit: string): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw invalid(field, `${what} (${field}) must be a number of ${unit}, got ${String(value)}`);
+  if (typeof value !== 'number' || !Number.isFinite(value)) throw invalid(field, `${what} (${field}) must be a number of ${unit}, got ${typeof value === 'number' ? String(value) : typeof value}`);
   if (value <= 0) throw invalid(field, `${what} (${field}) must be greater than zero, got ${value} ${unit}`);
+  if (value < FILL_RANGE.min || value > FILL_RANGE.max) throw invalid(field, `${what} (${field}) must lie between ${FILL_RANGE.min} and ${FILL_RANGE.max} ${unit}, got ${value} ${unit}`);
   return value;
 }
 
@@ -193,22 +201,31 @@ function saltDataOf(salt: Salt, field: string, dataset: Dataset): PackSaltData {
  * @internal
  */
 export function preparePackFill(fill: PackFill, options: PackOptions = {}, dataset: Dataset = builtinDataset()): PreparedFill {
+  if (options === null || typeof options !== 'object') throw invalid('options', `the pack options are an object, got ${options === null ? 'null' : typeof options}`);
   if (fill === null || typeof fill !== 'object') throw invalid('fill', 'a pack fill is an object with solids, waterG and optionally startC and containerJPerK');
-  if (!Array.isArray(fill.solids) || fill.solids.length === 0) throw invalid('solids', 'a pack fill needs at least one solid (solids: [{ formula, massG }])');
+  if (!Array.isArray(fill.solids) || fill.solids.length === 0 || fill.solids.length > 100) throw invalid('solids', 'a pack fill needs from one to 100 solids (solids: [{ formula, massG }])');
   const waterG = checkPositive(fill.waterG, 'waterG', 'the water', 'g');
-  const startC = fill.startC ?? DEFAULT_START_C;
+  const startGiven = fill.startC ?? DEFAULT_START_C;
+  const startC = startGiven === 0 ? 0 : startGiven; // −0 reported as 0
   if (typeof startC !== 'number' || !Number.isFinite(startC) || startC < 0 || startC >= 100) {
-    throw invalid('startC', `the start temperature (startC) must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${String(startC)} °C`);
+    throw invalid('startC', `the start temperature (startC) must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${typeof startC === 'number' ? String(startC) : typeof startC} °C`);
   }
   const containerJPerK = fill.containerJPerK ?? 0;
-  if (typeof containerJPerK !== 'number' || !Number.isFinite(containerJPerK) || containerJPerK < 0) {
-    throw invalid('containerJPerK', `the container heat capacity (containerJPerK) must be zero or more J/K, got ${String(containerJPerK)}`);
+  if (typeof containerJPerK !== 'number' || !Number.isFinite(containerJPerK) || containerJPerK < 0 || containerJPerK > FILL_RANGE.max) {
+    throw invalid('containerJPerK', `the container heat capacity (containerJPerK) must be from 0 to ${FILL_RANGE.max} J/K, got ${typeof containerJPerK === 'number' ? String(containerJPerK) : typeof containerJPerK}`);
+  }
+  const interval: unknown = options.interval;
+  if (interval !== undefined) {
+    const iv = interval as { method?: unknown; samples?: unknown; seed?: unknown };
+    if (iv === null || typeof iv !== 'object' || (iv.method !== 'bounds' && iv.method !== 'monte-carlo')) throw invalid('interval', `the interval option is { method: 'bounds' } or { method: 'monte-carlo', samples, seed }, got ${iv === null || typeof iv !== 'object' ? String(iv) : `method ${String(iv.method as string)}`}`);
+    if (iv.samples !== undefined && !(typeof iv.samples === 'number' && iv.samples >= 1 && iv.samples <= 100_000)) throw invalid('interval.samples', `the number of Monte Carlo draws (interval.samples) must be from 1 to 100000, got ${typeof iv.samples === 'number' ? iv.samples : typeof iv.samples}`);
+    if (iv.seed !== undefined && !(typeof iv.seed === 'number' && Number.isFinite(iv.seed))) throw invalid('interval.seed', `the Monte Carlo seed (interval.seed) must be a finite number, got ${typeof iv.seed === 'number' ? iv.seed : typeof iv.seed}`);
   }
   let heatCapacityOverride: PreparedFill['heatCapacityOverride'];
   if (options.heatCapacityJPerK !== undefined) {
     const value = checkPositive(options.heatCapacityJPerK, 'heatCapacityJPerK', 'your heat capacity', 'J/K');
     const u = options.heatCapacityUJPerK ?? 0;
-    if (typeof u !== 'number' || !Number.isFinite(u) || u < 0) throw invalid('heatCapacityUJPerK', `the uncertainty of your heat capacity (heatCapacityUJPerK) must be zero or more J/K, got ${String(u)}`);
+    if (typeof u !== 'number' || !Number.isFinite(u) || u < 0 || u > value) throw invalid('heatCapacityUJPerK', `the uncertainty of your heat capacity (heatCapacityUJPerK) must be from 0 J/K up to the heat capacity itself, got ${typeof u === 'number' ? String(u) : typeof u}`);
     heatCapacityOverride = { value, u };
   }
 
@@ -218,7 +235,8 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
   const sources = new Set<string>(water.sources);
   const seen = new Map<string, string>();
 
-  const solids = fill.solids.map((solid, i): PreparedSolid => {
+  // Array.from, not map: a hole in a sparse list is seen (as undefined) instead of skipped.
+  const solids = Array.from(fill.solids, (solid, i): PreparedSolid => {
     const field = `solids[${i}]`;
     if (solid === null || typeof solid !== 'object') throw invalid(field, `${field} must be an object { formula, massG }`);
     if (typeof solid.formula !== 'string' || solid.formula.trim() === '') throw invalid(`${field}.formula`, `${field}.formula must be a salt formula`);

@@ -5,6 +5,7 @@
  *
  * @module
  */
+import { describeValue, optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { IonheatError } from '../error.js';
@@ -116,6 +117,9 @@ function refineMaximum(g: (r: number) => number, xs: readonly number[], k: numbe
   return goldenSectionMaximum(g, lo, hi, RATIO_TOLERANCE).x;
 }
 
+/** The largest salt-to-water mass ratio a curve may reach (a thousand grams of salt per gram of water). */
+const MAX_RATIO = 1000;
+
 /**
  * The final temperature against the ratio of solid to water, from zero to
  * `maxRatio`, with the designs a formulator asks for:
@@ -150,13 +154,14 @@ function refineMaximum(g: (r: number) => number, xs: readonly number[], k: numbe
  * ```
  */
 export function packRatioCurve(fill: PackFill, options: PackCurveOptions = {}, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackRatioCurve {
+  options = optionsArgument(options);
   const base = preparePackFill(fill, packOptions, dataset);
   const count = options.points ?? 200;
-  if (!Number.isInteger(count) || count < 2 || count > 100_000) throw new IonheatError('INVALID_ARGUMENT', `the number of curve points (points) must be a whole number from 2 to 100000, got ${count}`, { field: 'points' });
-  if (options.maxRatio !== undefined && !(Number.isFinite(options.maxRatio) && options.maxRatio > 0)) {
-    throw new IonheatError('INVALID_ARGUMENT', `the largest ratio (maxRatio) must be greater than zero, got ${options.maxRatio}`, { field: 'maxRatio' });
+  if (!Number.isInteger(count) || count < 2 || count > 100_000) throw new IonheatError('INVALID_ARGUMENT', `the number of curve points (points) must be a whole number from 2 to 100000, got ${describeValue(count)}`, { field: 'points' });
+  if (options.maxRatio !== undefined && !(typeof options.maxRatio === 'number' && options.maxRatio > 0 && options.maxRatio <= MAX_RATIO)) {
+    throw new IonheatError('INVALID_ARGUMENT', `the largest ratio (maxRatio) must be greater than zero and at most ${MAX_RATIO} g of salt per g of water, got ${describeValue(options.maxRatio)}`, { field: 'maxRatio' });
   }
-  if (options.targetC !== undefined && !Number.isFinite(options.targetC)) throw new IonheatError('INVALID_ARGUMENT', `the target temperature (targetC) must be a number of °C, got ${options.targetC}`, { field: 'targetC' });
+  if (options.targetC !== undefined && !(typeof options.targetC === 'number' && Number.isFinite(options.targetC))) throw new IonheatError('INVALID_ARGUMENT', `the target temperature (targetC) must be a number of °C, got ${describeValue(options.targetC)}`, { field: 'targetC' });
   const s = sweeper(base);
   const magnitude = (r: number) => Math.abs(s.change(r));
   const notes: string[] = [];

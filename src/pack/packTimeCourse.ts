@@ -5,6 +5,7 @@
  *
  * @module
  */
+import { describeValue, optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { IonheatError } from '../error.js';
@@ -117,7 +118,7 @@ function parameter(options: TimeCourseOptions, key: keyof typeof DEFAULTS, check
   const given = options[key];
   if (given === undefined) return { value: DEFAULTS[key], unit: UNITS[key], assumed: true };
   if (typeof given !== 'number' || !Number.isFinite(given) || !check(given)) {
-    throw new IonheatError('INVALID_ARGUMENT', `the time-course parameter ${key} ${rule}, got ${String(given)}`, { field: key });
+    throw new IonheatError('INVALID_ARGUMENT', `the time-course parameter ${key} ${rule}, got ${describeValue(given)}`, { field: key });
   }
   return { value: given, unit: UNITS[key], assumed: false };
 }
@@ -161,20 +162,21 @@ function parameter(options: TimeCourseOptions, key: keyof typeof DEFAULTS, check
  * ```
  */
 export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackTimeCourse {
+  options = optionsArgument(options);
   const parameters = {
     durationS: parameter(options, 'durationS', (v) => v > 0 && v <= 7 * 86400, 'must be a time from above 0 s to 7 days'),
-    dissolutionTimeConstantS: parameter(options, 'dissolutionTimeConstantS', (v) => v > 0, 'must be greater than 0 s'),
+    dissolutionTimeConstantS: parameter(options, 'dissolutionTimeConstantS', (v) => v > 0 && v <= 1e7, 'must be greater than 0 s and at most 10000000 s'),
     ambientC: parameter(options, 'ambientC', (v) => v > -60 && v < 100, 'must lie between −60 and 100 °C'),
-    ambientConductanceWPerK: parameter(options, 'ambientConductanceWPerK', (v) => v >= 0, 'must be zero or more W/K'),
+    ambientConductanceWPerK: parameter(options, 'ambientConductanceWPerK', (v) => v >= 0 && v <= 1e6, 'must be from 0 to 1000000 W/K'),
     skinC: parameter(options, 'skinC', (v) => v > 0 && v < 60, 'must lie between 0 and 60 °C'),
-    skinConductanceWPerK: parameter(options, 'skinConductanceWPerK', (v) => v >= 0, 'must be zero or more W/K'),
+    skinConductanceWPerK: parameter(options, 'skinConductanceWPerK', (v) => v >= 0 && v <= 1e6, 'must be from 0 to 1000000 W/K'),
   };
   const band = options.band;
-  if (band !== undefined && !(Number.isFinite(band.lowC) && Number.isFinite(band.highC) && band.lowC < band.highC)) {
-    throw new IonheatError('INVALID_ARGUMENT', `a target band needs a lower and a higher temperature (band.lowC < band.highC), got ${band.lowC} and ${band.highC}`, { field: 'band' });
+  if (band !== undefined && !(band !== null && typeof band === 'object' && typeof band.lowC === 'number' && typeof band.highC === 'number' && Number.isFinite(band.lowC) && Number.isFinite(band.highC) && band.lowC < band.highC)) {
+    throw new IonheatError('INVALID_ARGUMENT', `a target band needs a lower and a higher temperature in °C (band.lowC < band.highC), got ${band !== null && typeof band === 'object' ? `${describeValue(band.lowC)} and ${describeValue(band.highC)}` : describeValue(band)}`, { field: 'band' });
   }
   const samples = options.samples ?? 361;
-  if (!Number.isInteger(samples) || samples < 2 || samples > 100_000) throw new IonheatError('INVALID_ARGUMENT', `samples must be a whole number from 2 to 100000, got ${samples}`, { field: 'samples' });
+  if (!Number.isInteger(samples) || samples < 2 || samples > 100_000) throw new IonheatError('INVALID_ARGUMENT', `samples must be a whole number from 2 to 100000, got ${describeValue(samples)}`, { field: 'samples' });
 
   const prepared = preparePackFill(fill, packOptions, dataset);
   const adiabatic = solveFillTemperature(prepared);

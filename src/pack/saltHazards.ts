@@ -4,6 +4,7 @@
  *
  * @module
  */
+import { saltArgument } from '../chem/saltArgument.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { HazardRecord } from '../data/schemas.js';
@@ -58,7 +59,7 @@ function buildIndex(dataset: Dataset): HazardIndex {
  * ```
  */
 export function saltHazards(salt: string | Salt, dataset: Dataset = builtinDataset()): HazardRecord[] {
-  const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
+  const s = saltArgument(salt, dataset);
   const index = dataset.memo('pack.hazardIndex', () => buildIndex(dataset));
   const found: HazardRecord[] = [];
   const own = index.bySalt.get(s.anhydrous);

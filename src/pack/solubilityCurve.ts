@@ -5,6 +5,8 @@
  *
  * @module
  */
+import { describeValue, numberArgument } from '../quantity/argumentChecks.js';
+import { saltArgument } from '../chem/saltArgument.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -37,6 +39,22 @@ export interface SolubilityCurve {
   eutectic?: { temperature: number; massFraction: number; source: string; fromMemory: boolean };
   source: string;
   fromMemory: boolean;
+}
+
+/** The points of a curve a caller passes: at least two, temperatures rising, finite values. */
+function checkCurve(curve: SolubilityCurve): void {
+  const bad = (why: string): never => {
+    throw new IonheatError('INVALID_ARGUMENT', `curve must be a solubility curve from solubilityCurve: ${why}`, { field: 'curve' });
+  };
+  if (curve === null || typeof curve !== 'object' || !Array.isArray(curve.points) || curve.points.length < 2) bad('it needs a list of at least two points');
+  let last = -Infinity;
+  curve.points.forEach((p, i) => {
+    if (p === null || typeof p !== 'object') bad(`points[${i}] is not a point`);
+    if (typeof p.t !== 'number' || !(p.t > last) || !(Math.abs(p.t) <= 1000)) bad(`points[${i}].t must be a temperature in °C above the one before, got ${describeValue(p.t)}`);
+    if (typeof p.value !== 'number' || !(p.value >= 0 && p.value <= 1e6)) bad(`points[${i}].value must be grams per 100 g of water (0 to 1000000), got ${describeValue(p.value)}`);
+    if (typeof p.phase !== 'string' || typeof p.phaseWater !== 'number' || !Number.isFinite(p.phaseWater)) bad(`points[${i}] needs its solid phase and its water`);
+    last = p.t;
+  });
 }
 
 /** Solubility at one temperature. */
@@ -122,7 +140,7 @@ function buildCurves(dataset: Dataset): ReadonlyMap<string, SolubilityCurve> {
  * ```
  */
 export function solubilityCurve(salt: string | Salt, dataset: Dataset = builtinDataset()): SolubilityCurve | undefined {
-  const parsed = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
+  const parsed = saltArgument(salt, dataset);
   return dataset.memo('pack.solubilityCurves', () => buildCurves(dataset)).get(parsed.anhydrous);
 }
 
@@ -142,6 +160,8 @@ export function solubilityCurve(salt: string | Salt, dataset: Dataset = builtinD
  * ```
  */
 export function solubilityAt(curve: SolubilityCurve, t: number): SolubilityAt {
+  checkCurve(curve);
+  t = numberArgument(t, 't', 'the temperature in °C', { min: -273.15, max: 1000 });
   const pts = curve.points;
   const n = pts.length;
   let k: number;
@@ -161,5 +181,5 @@ export function solubilityAt(curve: SolubilityCurve, t: number): SolubilityAt {
   const q = pts[k + 1]!;
   const value = Math.max(0, p.value + ((q.value - p.value) * (t - p.t)) / (q.t - p.t));
   const near = t - p.t <= q.t - t ? p : q;
-  return { value, phase: near.phase, phaseWater: near.phaseWater, extrapolated: t < pts[0]!.t || t > pts[n - 1]!.t };
+  return { value: value === 0 ? 0 : value, phase: near.phase, phaseWater: near.phaseWater === 0 ? 0 : near.phaseWater, extrapolated: t < pts[0]!.t || t > pts[n - 1]!.t };
 }

@@ -10,6 +10,7 @@ import { z } from 'zod';
 import { IonheatError } from '../error.js';
 import { COVERAGE_95 } from './constants.js';
 import { roundToExponent, roundToUncertainty } from './rounding.js';
+import { estimateArgument } from './argumentChecks.js';
 
 /**
  * How much an estimate can be trusted, most trusted first:
@@ -58,7 +59,23 @@ export interface EstimateInput {
 }
 
 function requireFinite(x: number, what: string): void {
-  if (!Number.isFinite(x)) throw new IonheatError('INVALID_ARGUMENT', `${what} must be a finite number, got ${String(x)}`, { field: what });
+  if (typeof x !== 'number' || !Number.isFinite(x)) throw new IonheatError('INVALID_ARGUMENT', `${what} must be a finite number, got ${typeof x === 'number' ? String(x) : typeof x}`, { field: what });
+}
+
+function requireText(x: unknown, what: string): void {
+  if (typeof x !== 'string') throw new IonheatError('INVALID_ARGUMENT', `the ${what} of an estimate must be text, got ${x === null ? 'null' : typeof x}`, { field: what });
+}
+
+function requireTextList(x: unknown, what: string): void {
+  if (x === undefined) return;
+  if (!Array.isArray(x) || !x.every((s) => typeof s === 'string')) throw new IonheatError('INVALID_ARGUMENT', `the ${what} of an estimate must be a list of text`, { field: what });
+}
+
+/** Checks the shape of what {@link probabilityPositive} and {@link formatEstimate} read: an object with finite numbers, u ≥ 0. */
+function requireNumbers(e: unknown, keys: readonly string[]): void {
+  if (e === null || typeof e !== 'object') throw new IonheatError('INVALID_ARGUMENT', `an estimate must be an object with ${keys.join(', ')}, got ${e === null ? 'null' : typeof e}`, { field: 'estimate' });
+  for (const k of keys) requireFinite((e as Record<string, number>)[k]!, k);
+  if ((e as { u: number }).u < 0) throw new IonheatError('INVALID_ARGUMENT', `an uncertainty cannot be negative, got ${(e as { u: number }).u}`, { field: 'u' });
 }
 
 /**
@@ -79,6 +96,13 @@ function requireFinite(x: number, what: string): void {
  * ```
  */
 export function makeEstimate(input: EstimateInput): Estimate {
+  if (input === null || typeof input !== 'object') throw new IonheatError('INVALID_ARGUMENT', `makeEstimate takes an object { quantity, value, u, unit, basis, method }, got ${input === null ? 'null' : typeof input}`, { field: 'input' });
+  requireText(input.quantity, 'quantity');
+  requireText(input.unit, 'unit');
+  requireText(input.method, 'method');
+  if (!basisSchema.safeParse(input.basis).success) throw new IonheatError('INVALID_ARGUMENT', `the basis of an estimate is one of ${basisOrder.join(', ')}, got ${typeof input.basis === 'string' ? `"${input.basis}"` : typeof input.basis}`, { field: 'basis' });
+  requireTextList(input.sources, 'sources');
+  requireTextList(input.notes, 'notes');
   requireFinite(input.value, 'value');
   requireFinite(input.u, 'uncertainty');
   if (input.u < 0) throw new IonheatError('INVALID_ARGUMENT', `an uncertainty cannot be negative, got ${input.u}`, { field: 'uncertainty' });
@@ -89,12 +113,13 @@ export function makeEstimate(input: EstimateInput): Estimate {
   if (!(low <= input.value && input.value <= high)) {
     throw new IonheatError('INVALID_ARGUMENT', `the interval [${low}, ${high}] does not hold the value ${input.value}`, { field: 'interval' });
   }
+  const clean = (x: number): number => (x === 0 ? 0 : x); // no −0 in results
   return {
     quantity: input.quantity,
-    value: input.value === 0 ? 0 : input.value, // no −0 in results
-    u: input.u,
-    low,
-    high,
+    value: clean(input.value),
+    u: clean(input.u),
+    low: clean(low),
+    high: clean(high),
     unit: input.unit,
     basis: input.basis,
     method: input.method,
@@ -133,6 +158,7 @@ function sortedUnique(list: readonly string[] | undefined): string[] {
  * ```
  */
 export function roundEstimate(e: Estimate): Estimate {
+  e = estimateArgument(e);
   const { value, u, exponent } = roundToUncertainty(e.value, e.u);
   if (e.u === 0) return { ...e };
   const clean = (x: number): number => (x === 0 ? 0 : x);
@@ -155,8 +181,10 @@ export function roundEstimate(e: Estimate): Estimate {
  * ```
  */
 export function probabilityPositive(e: Pick<Estimate, 'value' | 'u'>): number {
-  if (e.u === 0) return e.value > 0 ? 1 : 0;
-  return normalCdf(e.value / e.u);
+  requireNumbers(e, ['value', 'u']);
+  const z = e.value / e.u;
+  if (e.u === 0 || !Number.isFinite(z)) return e.value > 0 ? 1 : 0;
+  return normalCdf(z);
 }
 
 /**
@@ -174,6 +202,7 @@ export function probabilityPositive(e: Pick<Estimate, 'value' | 'u'>): number {
  * ```
  */
 export function normalCdf(x: number): number {
+  requireFinite(x, 'x');
   const z = Math.abs(x) / Math.SQRT2;
   const t = 1 / (1 + 0.3275911 * z);
   const poly = t * (0.254829592 + t * (-0.284496736 + t * (1.421413741 + t * (-1.453152027 + t * 1.061405429))));

@@ -1,5 +1,15 @@
 import type { Estimate } from './estimate.js';
 import { roundToUncertainty } from './rounding.js';
+import { describeValue, numberArgument } from './argumentChecks.js';
+import { IonheatError } from '../error.js';
+
+/** The four numbers {@link formatEstimate} writes must be finite, u ≥ 0. */
+function requireEstimateNumbers(e: unknown): void {
+  if (e === null || typeof e !== 'object') throw new IonheatError('INVALID_ARGUMENT', `formatEstimate takes an estimate { value, u, low, high }, got ${describeValue(e)}`, { field: 'estimate' });
+  const n = e as Record<string, unknown>;
+  for (const k of ['value', 'low', 'high']) numberArgument(n[k], k, `the ${k} of the estimate`);
+  numberArgument(n.u, 'u', 'the standard uncertainty of the estimate', { min: 0 });
+}
 
 /** Text forms of an estimate's numbers, rounded together for display. */
 export interface FormattedEstimate {
@@ -39,7 +49,8 @@ function fixed(x: number, exponent: number, signed: boolean): string {
  * ```
  */
 export function formatEstimate(e: Pick<Estimate, 'value' | 'u' | 'low' | 'high'>, options: { signed?: boolean } = {}): FormattedEstimate {
-  const signed = options.signed === true;
+  requireEstimateNumbers(e);
+  const signed = options?.signed === true;
   if (!(e.u > 0)) {
     const plain = (x: number) => fixed(x, -Math.min(6, Math.max(0, 4 - Math.floor(Math.log10(Math.abs(x) || 1)))), signed);
     return { value: plain(e.value), u: '0', low: plain(e.low), high: plain(e.high) };

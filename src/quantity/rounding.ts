@@ -1,4 +1,5 @@
 import Decimal from 'decimal.js';
+import { numberArgument } from './argumentChecks.js';
 
 /** The decimal exponent of the last digit kept when `u` is given to two significant digits. */
 function lastDigitExponent(u: number): number {
@@ -35,6 +36,8 @@ export function roundToExponent(x: number, exponent: number): number {
  * ```
  */
 export function roundToUncertainty(value: number, u: number): { value: number; u: number; exponent: number } {
+  value = numberArgument(value, 'value', 'the value to round');
+  u = numberArgument(u, 'u', 'the standard uncertainty', { min: 0 });
   if (!(u > 0) || !Number.isFinite(u)) return { value, u, exponent: 0 };
   let exponent = lastDigitExponent(u);
   let roundedU = roundToExponent(u, exponent);
@@ -43,5 +46,6 @@ export function roundToUncertainty(value: number, u: number): { value: number; u
     exponent = lastDigitExponent(roundedU);
     roundedU = roundToExponent(u, exponent);
   }
-  return { value: roundToExponent(value, exponent), u: roundedU, exponent };
+  const rounded = roundToExponent(value, exponent);
+  return { value: rounded === 0 ? 0 : rounded, u: roundedU, exponent };
 }

@@ -3,6 +3,7 @@
  *
  * @module
  */
+import { drawChecked } from './chartInput.js';
 import type { BornHaberCycle } from '../cycle/bornHaberCycle.js';
 import type { CycleStep } from '../cycle/cycleStep.js';
 import { el, linearScale, niceTicks, num, svgDocument, text, theme, tickLabel } from './svg.js';
@@ -67,7 +68,11 @@ function arrow(x: number, y0: number, y1: number, colour: string, dashed: boolea
  * svg.includes('kJ/mol'); // true
  * ```
  */
-export function cycleDiagram(cycle: BornHaberCycle, options: CycleDiagramOptions = {}): string {
+export function cycleDiagram(cycle: BornHaberCycle, options?: CycleDiagramOptions): string {
+  return drawChecked(cycle, options, 'cycle', 'bornHaberCycle', draw);
+}
+
+function draw(cycle: BornHaberCycle, options: CycleDiagramOptions): string {
   const width = options.width ?? 960;
   const path = cycle.steps.filter((s) => s.kind !== 'formation' && s.kind !== 'lattice');
   const lattice = cycle.steps.find((s) => s.kind === 'lattice');

@@ -6,6 +6,7 @@
  *
  * @module
  */
+import { drawChecked } from './chartInput.js';
 import type { Basis, Estimate } from '../quantity/estimate.js';
 import { formatEstimate } from '../quantity/formatEstimate.js';
 import type { Direction, ObjectiveName, ScreenRow, Suitability } from '../screen/screenRow.js';
@@ -130,7 +131,11 @@ function textWidth(s: string, size: number): number {
  * svg.includes('kJ/mol'); // true
  * ```
  */
-export function intervalChart(result: ChartableScreen, options: IntervalChartOptions = {}): string {
+export function intervalChart(result: ChartableScreen, options?: IntervalChartOptions): string {
+  return drawChecked(result, options, 'result', 'screen', draw);
+}
+
+function draw(result: ChartableScreen, options: IntervalChartOptions): string {
   const { objective, direction } = result.settings;
   const maxRows = Math.max(1, Math.floor(options.maxRows ?? 100));
   const width = Math.max(640, options.width ?? 960);

@@ -5,6 +5,7 @@
  *
  * @module
  */
+import { drawChecked } from './chartInput.js';
 import type { PackRatioCurve } from '../pack/packRatioCurve.js';
 import { CONTACT_BURN_THRESHOLD_C } from '../pack/packCautions.js';
 import { el, linearScale, niceTicks, svgDocument, text, theme, tickLabel } from './svg.js';
@@ -35,7 +36,11 @@ const fmt = (x: number, digits = 1): string => tickLabel(Number(x.toFixed(digits
  * packCurveSvg(curve).includes('°C'); // true
  * ```
  */
-export function packCurveSvg(curve: PackRatioCurve, options: PackCurveChartOptions = {}): string {
+export function packCurveSvg(curve: PackRatioCurve, options?: PackCurveChartOptions): string {
+  return drawChecked(curve, options, 'curve', 'packRatioCurve', draw);
+}
+
+function draw(curve: PackRatioCurve, options: PackCurveChartOptions): string {
   const width = options.width ?? 820;
   const height = options.height ?? 500;
   const margin = { left: 74, right: 28, top: 74, bottom: 64 };

@@ -4,6 +4,7 @@
  *
  * @module
  */
+import { drawChecked } from './chartInput.js';
 import type { PackTimeCourse } from '../pack/packTimeCourse.js';
 import { CONTACT_BURN_THRESHOLD_C } from '../pack/packCautions.js';
 import { el, linearScale, niceTicks, svgDocument, text, theme, tickLabel } from './svg.js';
@@ -36,7 +37,11 @@ const fmt = (x: number, digits = 1): string => tickLabel(Number(x.toFixed(digits
  * timeCourseSvg(course).includes('40–50 °C'); // true
  * ```
  */
-export function timeCourseSvg(course: PackTimeCourse, options: TimeCourseChartOptions = {}): string {
+export function timeCourseSvg(course: PackTimeCourse, options?: TimeCourseChartOptions): string {
+  return drawChecked(course, options, 'course', 'packTimeCourse', draw);
+}
+
+function draw(course: PackTimeCourse, options: TimeCourseChartOptions): string {
   const width = options.width ?? 820;
   const height = options.height ?? 500;
   const margin = { left: 74, right: 28, top: 92, bottom: 64 };

@@ -7,6 +7,7 @@
  *
  * @module
  */
+import { optionsArgument } from '../quantity/argumentChecks.js';
 import { IonheatError } from '../error.js';
 import { specError } from './specTokenize.js';
 import { parseSpec, type SpecNode } from './specParse.js';
@@ -89,6 +90,7 @@ const typeName = (t: SpecType): string =>
  * ```
  */
 export function compileSpec(text: string, options: CompileSpecOptions = {}): CompiledSpec {
+  options = optionsArgument(options);
   const tree = parseSpec(text);
   const schema = options.schema === undefined ? screenSpecSchema() : options.schema;
   const fields = schema ? new SpecFields(schema) : undefined;

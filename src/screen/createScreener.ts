@@ -6,6 +6,7 @@
  *
  * @module
  */
+import { describeValue } from '../quantity/argumentChecks.js';
 import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { HazardClass, SourceEntry } from '../data/schemas.js';
@@ -103,9 +104,9 @@ function checkFill(fill: FillSpec | string): FillSpec {
   if (fill === null || typeof fill !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'fill: a standard fill is { saltMassG, waterMassG, startC } or text such as 40:80@22', { field: 'fill' });
   const { saltMassG, waterMassG, startC } = fill;
   const ok = (x: unknown): x is number => typeof x === 'number' && Number.isFinite(x);
-  if (!ok(saltMassG) || saltMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.saltMassG must be a positive number of grams, got ${String(saltMassG)}`, { field: 'fill.saltMassG' });
-  if (!ok(waterMassG) || waterMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.waterMassG must be a positive number of grams, got ${String(waterMassG)}`, { field: 'fill.waterMassG' });
-  if (!ok(startC) || startC < 0 || startC >= 100) throw new IonheatError('INVALID_ARGUMENT', `fill.startC must be a temperature from 0 °C up to (not including) 100 °C, where water is liquid; got ${String(startC)}`, { field: 'fill.startC' });
+  if (!ok(saltMassG) || saltMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.saltMassG must be a positive number of grams, got ${describeValue(saltMassG)}`, { field: 'fill.saltMassG' });
+  if (!ok(waterMassG) || waterMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.waterMassG must be a positive number of grams, got ${describeValue(waterMassG)}`, { field: 'fill.waterMassG' });
+  if (!ok(startC) || startC < 0 || startC >= 100) throw new IonheatError('INVALID_ARGUMENT', `fill.startC must be a temperature from 0 °C up to (not including) 100 °C, where water is liquid; got ${describeValue(startC)}`, { field: 'fill.startC' });
   return { saltMassG, waterMassG, startC };
 }
 
@@ -139,15 +140,20 @@ class BoundedMap<K, V> {
 }
 
 function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<string>; ions: Set<string>; hazards: Set<HazardClass> } {
+  if (filters === null || typeof filters !== 'object') throw new IonheatError('INVALID_ARGUMENT', `filters must be an object, got ${describeValue(filters)}`, { field: 'filters' });
+  for (const k of ['excludeSalts', 'excludeIons', 'excludeHazards'] as const) {
+    const v: unknown = filters[k];
+    if (v !== undefined && !(Array.isArray(v) && v.every((x) => typeof x === 'string'))) throw new IonheatError('INVALID_ARGUMENT', `${k} must be a list of text when given, got ${describeValue(v)}`, { field: k });
+  }
   const salts = new Set((filters.excludeSalts ?? []).map((f) => parseSalt(f, dataset).anhydrous));
   for (const id of filters.excludeIons ?? []) {
     if (!findIon(id, dataset)) throw new IonheatError('UNKNOWN_ION', `excludeIons: "${id}" is not an ion id of the ${dataset.label} ion table (ids look like NH4[+], NO3[-])`, { field: 'excludeIons', text: id });
   }
   for (const h of filters.excludeHazards ?? []) {
-    if (!hazardClassSchema.safeParse(h).success) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: "${String(h)}" is not a hazard class (known: ${hazardClassSchema.options.join(', ')})`, { field: 'excludeHazards' });
+    if (!hazardClassSchema.safeParse(h).success) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: ${describeValue(h)} is not a hazard class (known: ${hazardClassSchema.options.join(', ')})`, { field: 'excludeHazards' });
   }
   for (const [name, v] of [['minMolarMass', filters.minMolarMass], ['maxMolarMass', filters.maxMolarMass]] as const) {
-    if (v !== undefined && !(Number.isFinite(v) && v > 0)) throw new IonheatError('INVALID_ARGUMENT', `${name} is a molar mass in g/mol and must be a positive number, got ${String(v)}`, { field: name });
+    if (v !== undefined && !(Number.isFinite(v) && v > 0)) throw new IonheatError('INVALID_ARGUMENT', `${name} is a molar mass in g/mol and must be a positive number, got ${describeValue(v)}`, { field: name });
   }
   return { salts, ions: new Set(filters.excludeIons ?? []), hazards: new Set(filters.excludeHazards ?? []) };
 }
@@ -179,9 +185,9 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
   if (options === null || typeof options !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
   const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
   const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
-  if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: "${String(options.objective)}" is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
+  if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: ${describeValue(options.objective)} is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
   const directionParsed = directionSchema.safeParse(options.direction ?? 'cool');
-  if (!directionParsed.success) throw new IonheatError('INVALID_ARGUMENT', `direction: "${String(options.direction)}" is not cool or heat`, { field: 'direction' });
+  if (!directionParsed.success) throw new IonheatError('INVALID_ARGUMENT', `direction: ${describeValue(options.direction)} is not cool or heat`, { field: 'direction' });
   const objective = objectiveParsed.data;
   const direction = directionParsed.data;
   if (objective === 'fill-temperature' && fill === null) throw new IonheatError('INVALID_ARGUMENT', 'the objective fill-temperature needs a standard fill (salt grams, water grams and start temperature)', { field: 'objective' });

@@ -4,6 +4,7 @@
  *
  * @module
  */
+import { describeValue } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { HazardClass, IonKind, IonRecord } from '../data/schemas.js';
@@ -45,18 +46,18 @@ const NOT_A_SALT_CATION = 'H[+]';
 
 function checkCharges(list: readonly number[] | undefined, field: string): void {
   for (const c of list ?? []) {
-    if (!Number.isInteger(c) || c < 1 || c > 4) throw new IonheatError('INVALID_ARGUMENT', `${field}: a charge is a whole number from 1 to 4 (give anion charges as magnitudes), got ${String(c)}`, { field });
+    if (!Number.isInteger(c) || c < 1 || c > 4) throw new IonheatError('INVALID_ARGUMENT', `${field}: a charge is a whole number from 1 to 4 (give anion charges as magnitudes), got ${describeValue(c)}`, { field });
   }
 }
 
 function checkIons(list: readonly string[] | undefined, field: string, dataset: Dataset): void {
   for (const id of list ?? []) {
-    if (typeof id !== 'string' || !findIon(id, dataset)) throw new IonheatError('UNKNOWN_ION', `${field}: "${String(id)}" is not an ion id of the ${dataset.label} ion table (ids look like K[+], SO4[2-])`, { field, text: String(id) });
+    if (typeof id !== 'string' || !findIon(id, dataset)) throw new IonheatError('UNKNOWN_ION', `${field}: ${describeValue(id)} is not an ion id of the ${dataset.label} ion table (ids look like K[+], SO4[2-])`, { field, text: typeof id === 'string' ? id : undefined });
   }
 }
 
 function checkMass(x: number | undefined, field: string): void {
-  if (x !== undefined && !(Number.isFinite(x) && x > 0)) throw new IonheatError('INVALID_ARGUMENT', `${field} is a molar mass in g/mol and must be a positive number, got ${String(x)}`, { field });
+  if (x !== undefined && !(Number.isFinite(x) && x > 0)) throw new IonheatError('INVALID_ARGUMENT', `${field} is a molar mass in g/mol and must be a positive number, got ${describeValue(x)}`, { field });
 }
 
 function saltOf(cation: IonRecord, anion: IonRecord, dataset: Dataset): Salt {
@@ -101,6 +102,10 @@ function saltOf(cation: IonRecord, anion: IonRecord, dataset: Dataset): Salt {
  */
 export function enumerate(filters: EnumerateFilters = {}, dataset: Dataset = builtinDataset()): Salt[] {
   if (filters === null || typeof filters !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the filters of enumerate are an object', { field: 'filters' });
+  for (const k of ['cationCharges', 'anionCharges', 'cations', 'anions', 'excludeIons', 'cationKinds', 'anionKinds', 'excludeHazards'] as const) {
+    const v: unknown = filters[k];
+    if (v !== undefined && !Array.isArray(v)) throw new IonheatError('INVALID_ARGUMENT', `${k} must be a list when given, got ${describeValue(v)}`, { field: k });
+  }
   checkCharges(filters.cationCharges, 'cationCharges');
   checkCharges(filters.anionCharges, 'anionCharges');
   checkIons(filters.cations, 'cations', dataset);
@@ -109,10 +114,10 @@ export function enumerate(filters: EnumerateFilters = {}, dataset: Dataset = bui
   checkMass(filters.minMolarMass, 'minMolarMass');
   checkMass(filters.maxMolarMass, 'maxMolarMass');
   for (const k of [...(filters.cationKinds ?? []), ...(filters.anionKinds ?? [])]) {
-    if (k !== 'monatomic' && k !== 'polyatomic') throw new IonheatError('INVALID_ARGUMENT', `an ion kind for enumerate is "monatomic" or "polyatomic", got "${String(k)}"`, { field: 'kinds' });
+    if (k !== 'monatomic' && k !== 'polyatomic') throw new IonheatError('INVALID_ARGUMENT', `an ion kind for enumerate is "monatomic" or "polyatomic", got ${describeValue(k)}`, { field: 'kinds' });
   }
   for (const h of filters.excludeHazards ?? []) {
-    if (!hazardClassSchema.safeParse(h).success) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: "${String(h)}" is not a hazard class (known: ${hazardClassSchema.options.join(', ')})`, { field: 'excludeHazards' });
+    if (!hazardClassSchema.safeParse(h).success) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: ${describeValue(h)} is not a hazard class (known: ${hazardClassSchema.options.join(', ')})`, { field: 'excludeHazards' });
   }
   const excluded = new Set(filters.excludeIons ?? []);
   const allowed = (ion: IonRecord, ids: readonly string[] | undefined, charges: readonly number[] | undefined, kinds: readonly string[] | undefined): boolean =>

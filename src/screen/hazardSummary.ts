@@ -1,4 +1,5 @@
 import type { Dataset } from '../data/dataset.js';
+import { saltArgument } from '../chem/saltArgument.js';
 import { builtinDataset } from '../data/builtin.js';
 import { hazardClassSchema, type HazardClass } from '../data/schemas.js';
 import type { Salt } from '../chem/salt.js';
@@ -33,7 +34,7 @@ export interface HazardSummary {
  * ```
  */
 export function hazardSummary(salt: Salt, dataset: Dataset = builtinDataset()): HazardSummary {
-  const records = saltHazards(salt, dataset);
+  const records = saltHazards(saltArgument(salt, dataset), dataset);
   const order = hazardClassSchema.options;
   const classes = [...new Set(records.flatMap((r) => r.classes))].sort((a, b) => order.indexOf(a) - order.indexOf(b));
   return { classes, statements: [...new Set(records.map((r) => r.statement))] };

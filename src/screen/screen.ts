@@ -3,6 +3,8 @@
  *
  * @module
  */
+import { describeValue } from '../quantity/argumentChecks.js';
+import { IonheatError } from '../error.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { CandidateLike } from './candidate.js';
@@ -56,6 +58,9 @@ export interface ScreenResult {
  * ```
  */
 export function screen(candidates: Iterable<CandidateLike>, options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): ScreenResult {
+  if (candidates === null || typeof candidates !== 'object' || typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] !== 'function') {
+    throw new IonheatError('INVALID_ARGUMENT', `the candidates of a screen are a list of formulas or candidate objects, got ${describeValue(candidates)}`, { field: 'candidates' });
+  }
   const screener = createScreener(options, dataset);
   const rows: ScreenRow[] = [];
   for (const candidate of candidates) rows.push(screener.row(candidate));

@@ -3,6 +3,8 @@
  *
  * @module
  */
+import { describeValue } from '../quantity/argumentChecks.js';
+import { IonheatError } from '../error.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { CandidateLike } from './candidate.js';
@@ -36,6 +38,8 @@ export async function* screenStream(
   options: ScreenOptions = {},
   dataset: Dataset = builtinDataset(),
 ): AsyncGenerator<ScreenRow, ScreenSummary, undefined> {
+  const iterable = candidates !== null && typeof candidates === 'object' && (typeof (candidates as AsyncIterable<CandidateLike>)[Symbol.asyncIterator] === 'function' || typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] === 'function');
+  if (!iterable) throw new IonheatError('INVALID_ARGUMENT', `the candidates of a screen are a list or stream of formulas or candidate objects, got ${describeValue(candidates)}`, { field: 'candidates' });
   const screener = createScreener(options, dataset);
   for await (const candidate of candidates) yield screener.row(candidate);
   return screener.summary();

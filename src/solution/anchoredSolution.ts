@@ -5,6 +5,8 @@
  *
  * @module
  */
+import { saltArgument } from '../chem/saltArgument.js';
+import { optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { chargeType, type Salt } from '../chem/salt.js';
@@ -403,6 +405,8 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
  * ```
  */
 export function anchoredSolutionEnthalpies(salt: Salt, options: { excludeMeasured?: boolean } = {}, dataset: Dataset = builtinDataset()): Estimate[] {
+  salt = saltArgument(salt, dataset);
+  options = optionsArgument(options);
   let lattice: SaltLattice | undefined;
   return anchoredEstimates(salt, () => (lattice ??= saltLattice(salt, dataset)), options, dataset);
 }

@@ -1,4 +1,6 @@
 import type { Dataset } from '../data/dataset.js';
+import { saltArgument } from '../chem/saltArgument.js';
+import { optionsArgument } from '../quantity/argumentChecks.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
 import { saltRecords, WATER } from '../chem/saltRecords.js';
@@ -66,6 +68,8 @@ export function solutionCycleTerms(salt: Salt, dataset: Dataset = builtinDataset
  * ```
  */
 export function solutionEnthalpyFromCycle(salt: Salt, dataset: Dataset = builtinDataset(), options: { hideCrystal?: boolean } = {}): Estimate | undefined {
+  salt = saltArgument(salt, dataset);
+  options = optionsArgument(options);
   const terms = solutionCycleTerms(salt, dataset, options);
   if (!terms) return undefined;
   const memory = terms.filter((t) => t.fromMemory).map((t) => t.label);

@@ -4,6 +4,8 @@
  *
  * @module
  */
+import { saltArgument } from '../chem/saltArgument.js';
+import { optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -334,10 +336,12 @@ export function dissolveUncached(formula: string | Salt, options: DissolveOption
 }
 
 function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset: Dataset, store: ProfileStore): DissolveResult {
-  const salt = typeof formula === 'string' ? parseSalt(formula, dataset) : formula;
+  const salt = saltArgument(formula, dataset, 'formula');
+  options = optionsArgument(options);
   const hide = options.excludeMeasured === true;
   const celsius = options.temperatureC ?? TABLE_TEMPERATURE_C;
   checkKirchhoffTemperature(celsius);
+  if (Object.is(celsius, -0)) return dissolveWith(salt, { ...options, temperatureC: 0 }, dataset, store);
   const notes: string[] = [];
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
 

@@ -5,6 +5,9 @@
  *
  * @module
  */
+import { describeValue, estimateArgument, numberArgument } from '../quantity/argumentChecks.js';
+import { IonheatError } from '../error.js';
+import { saltArgument } from '../chem/saltArgument.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
@@ -34,6 +37,9 @@ function scaled(e: Estimate, factor: number, quantity: string, notes: readonly s
  * ```
  */
 export function heatPerGramOfSalt(e: Estimate, salt: Salt): Estimate {
+  e = estimateArgument(e);
+  if (salt === null || typeof salt !== 'object') throw new IonheatError('INVALID_ARGUMENT', `salt must be a salt from parseSalt, got ${describeValue(salt)}`, { field: 'salt' });
+  numberArgument(salt.molarMass, 'salt.molarMass', 'the molar mass in g/mol', { min: 1, max: 1e6 });
   return scaled(e, 1000 / salt.molarMass, 'heat of solution per gram of salt');
 }
 
@@ -110,6 +116,7 @@ export interface SaturatedFill {
  * ```
  */
 export function saturatedFill(salt: Salt, dataset: Dataset = builtinDataset()): SaturatedFill | undefined {
+  salt = saltArgument(salt, dataset);
   const s = solubilityAt25(salt, dataset);
   if (!s || !(s.value > 0)) return undefined;
   const mWater = molarMass({ H: 2, O: 1 }, dataset);
@@ -146,6 +153,11 @@ export function saturatedFill(salt: Salt, dataset: Dataset = builtinDataset()): 
  * ```
  */
 export function heatPerGramOfFill(e: Estimate, fill: SaturatedFill): Estimate {
+  e = estimateArgument(e);
+  if (fill === null || typeof fill !== 'object') throw new IonheatError('INVALID_ARGUMENT', `fill must be a saturated fill from saturatedFill, got ${describeValue(fill)}`, { field: 'fill' });
+  numberArgument(fill.massPerMole, 'fill.massPerMole', 'the grams of fill per mole of salt', { min: 1, max: 1e9 });
+  if (typeof fill.source !== 'string') throw new IonheatError('INVALID_ARGUMENT', `fill.source must be a source key, got ${describeValue(fill.source)}`, { field: 'fill.source' });
+  if (!Array.isArray(fill.notes) || !fill.notes.every((n) => typeof n === 'string')) throw new IonheatError('INVALID_ARGUMENT', 'fill.notes must be a list of text', { field: 'fill.notes' });
   const heat = scaled(e, 1000 / fill.massPerMole, 'heat of solution per gram of saturated fill', fill.notes);
   return { ...heat, sources: [...new Set([...heat.sources, fill.source])].sort() };
 }

@@ -6,12 +6,13 @@
  *
  * @module
  */
+import { describeValue, estimateArgument, numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import { saltRecordIndex, saltRecords, WATER } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
-import { isIonheatError } from '../error.js';
+import { IonheatError, isIonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { widenEstimate } from './widenEstimate.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
@@ -148,6 +149,7 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
  * ```
  */
 export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, dataset: Dataset = builtinDataset()): HydrateRuleScatter {
+  options = optionsArgument(options);
   const pairs = rulePairs(dataset).filter((p) => p.hydrate !== options.excludeFormula && p.parent !== options.excludeFormula);
   const rms = Math.sqrt(pairs.reduce((s, p) => s + p.miss ** 2 / p.waters, 0) / Math.max(1, pairs.length));
   return { perSqrtWater: rms, pairs: pairs.length };
@@ -178,6 +180,13 @@ export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, da
  * ```
  */
 export function hydrateFromParent(parent: Estimate, rule: HydrateRuleInput): Estimate {
+  parent = estimateArgument(parent, 'parent');
+  rule = optionsArgument(rule, 'rule');
+  if (typeof rule.parentFormula !== 'string') throw new IonheatError('INVALID_ARGUMENT', `rule.parentFormula must be a formula, got ${describeValue(rule.parentFormula)}`, { field: 'rule.parentFormula' });
+  numberArgument(rule.parentWater, 'rule.parentWater', 'the waters of crystallization of the parent', { min: 0, max: 1000 });
+  numberArgument(rule.water, 'rule.water', 'the waters of crystallization of the hydrate', { min: 0, max: 1000 });
+  numberArgument(rule.waterFormation, 'rule.waterFormation', 'ΔfH°(H₂O, l) in kJ/mol', { min: -1e4, max: 1e4 });
+  numberArgument(rule.scatter, 'rule.scatter', 'the scatter of the rule in kJ/mol', { min: 0, max: 1e4 });
   const { parentFormula, parentWater, water, waterFormation, scatter } = rule;
   const dn = water - parentWater;
   const shift = dn * (waterFormation - WATER_OF_CRYSTALLIZATION_ENTHALPY);

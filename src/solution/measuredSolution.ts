@@ -1,4 +1,5 @@
 import type { Dataset } from '../data/dataset.js';
+import { saltArgument } from '../chem/saltArgument.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
 import { saltRecords } from '../chem/saltRecords.js';
@@ -19,6 +20,7 @@ import { makeEstimate, type Estimate } from '../quantity/estimate.js';
  * ```
  */
 export function measuredSolutionEnthalpy(salt: Salt, dataset: Dataset = builtinDataset()): Estimate | undefined {
+  salt = saltArgument(salt, dataset);
   const record = saltRecords('solution-enthalpies.json', salt, dataset)[0];
   if (!record) return undefined;
   const u = dataset.uncertaintyOf('solution-enthalpies.json', record) ?? 0;

@@ -6,6 +6,7 @@
  *
  * @module
  */
+import { estimateArgument } from '../quantity/argumentChecks.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
@@ -29,6 +30,8 @@ import { fixedDecimal } from '../quantity/fixedDecimal.js';
  * ```
  */
 export function solutionEnthalpyFromModel(lattice: Estimate, hydration: Estimate): Estimate {
+  lattice = estimateArgument(lattice, 'lattice');
+  hydration = estimateArgument(hydration, 'hydration');
   return modelEstimate(lattice, hydration, hydrationText(hydration));
 }
 

@@ -4,6 +4,8 @@
  *
  * @module
  */
+import { describeValue, estimateArgument, numberArgument } from '../quantity/argumentChecks.js';
+import { saltArgument } from '../chem/saltArgument.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
@@ -42,6 +44,7 @@ function ionCpIndex(dataset: Dataset) {
  * ```
  */
 export function solutionHeatCapacity(salt: Salt, dataset: Dataset = builtinDataset()): Estimate | undefined {
+  salt = saltArgument(salt, dataset);
   if (salt.kind !== 'ionic') return undefined;
   const crystal = saltRecords('heat-capacities.json', salt, dataset).find((r) => r.phase === 'cr');
   if (!crystal) return undefined;
@@ -101,10 +104,10 @@ export function typicalSolutionHeatCapacity(dataset: Dataset = builtinDataset())
 
 /** Checks a temperature for the Kirchhoff correction. */
 export function checkKirchhoffTemperature(temperatureC: number): void {
-  if (!Number.isFinite(temperatureC) || temperatureC < KIRCHHOFF_RANGE_C.min || temperatureC > KIRCHHOFF_RANGE_C.max) {
+  if (typeof temperatureC !== 'number' || !Number.isFinite(temperatureC) || temperatureC < KIRCHHOFF_RANGE_C.min || temperatureC > KIRCHHOFF_RANGE_C.max) {
     throw new IonheatError(
       'INVALID_ARGUMENT',
-      `the temperature ${String(temperatureC)} °C is outside ${KIRCHHOFF_RANGE_C.min}–${KIRCHHOFF_RANGE_C.max} °C, the range over which ionheat corrects enthalpies of solution for temperature`,
+      `the temperature ${describeValue(temperatureC)} °C is outside ${KIRCHHOFF_RANGE_C.min}–${KIRCHHOFF_RANGE_C.max} °C, the range over which ionheat corrects enthalpies of solution for temperature`,
       { field: 'temperature' },
     );
   }
@@ -129,6 +132,9 @@ export function checkKirchhoffTemperature(temperatureC: number): void {
  * ```
  */
 export function kirchhoffCorrection(e: Estimate, temperatureC: number, heatCapacity: Estimate | undefined, typical: number): Estimate {
+  e = estimateArgument(e);
+  if (heatCapacity !== undefined) heatCapacity = estimateArgument(heatCapacity, 'heatCapacity');
+  numberArgument(typical, 'typical', 'the typical |ΔsolCp°| in J/(mol·K)', { min: 0, max: 1e6 });
   checkKirchhoffTemperature(temperatureC);
   const dT = temperatureC - TABLE_TEMPERATURE_C;
   if (dT === 0) return e;

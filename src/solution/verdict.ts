@@ -1,3 +1,4 @@
+import { estimateArgument } from '../quantity/argumentChecks.js';
 import { probabilityPositive, type Estimate } from '../quantity/estimate.js';
 import { COVERAGE_95 } from '../quantity/constants.js';
 
@@ -31,6 +32,7 @@ export type Verdict = 'endothermic' | 'exothermic' | 'undetermined';
  * ```
  */
 export function solutionVerdict(e: Estimate): { verdict: Verdict; probabilityEndothermic: number } {
+  e = estimateArgument(e);
   const verdict: Verdict = e.low > 0 ? 'endothermic' : e.high < 0 ? 'exothermic' : 'undetermined';
   const spread = (e.value >= 0 ? e.value - e.low : e.high - e.value) / COVERAGE_95;
   return { verdict, probabilityEndothermic: probabilityPositive({ value: e.value, u: spread > 0 ? spread : 0 }) };

@@ -1,0 +1,78 @@
+/**
+ * Checks of what a caller passes to the public functions: numbers that must
+ * be finite (and in a range), estimates, option objects. Each failure is an
+ * `INVALID_ARGUMENT` error that names the field and the value it got.
+ *
+ * @module
+ */
+import { IonheatError } from '../error.js';
+import { estimateSchema, type Estimate } from './estimate.js';
+
+/** A short, safe rendering of any value for an error message (symbols, cycles and long text included). */
+export function describeValue(value: unknown): string {
+  if (typeof value === 'string') return value.length > 40 ? `"${value.slice(0, 40)}…"` : `"${value}"`;
+  if (typeof value === 'number') return Object.is(value, -0) ? '-0' : String(value);
+  if (typeof value === 'bigint') return `${value}n`;
+  if (typeof value === 'symbol') return 'a symbol';
+  if (typeof value === 'function') return 'a function';
+  if (value === null || value === undefined) return String(value);
+  if (Array.isArray(value)) return 'a list';
+  return 'an object';
+}
+
+/** Range and kind of a number argument. */
+export interface NumberRule {
+  /** Smallest allowed value (inclusive unless `above`). */
+  min?: number;
+  /** Largest allowed value (inclusive unless `below`). */
+  max?: number;
+  /** The value must be greater than `min`. */
+  above?: boolean;
+  /** The value must be less than `max`. */
+  below?: boolean;
+  integer?: boolean;
+}
+
+/**
+ * `value` as a finite number within the rule's range, else an
+ * `INVALID_ARGUMENT` error naming `field` (and, in words, `what` it is).
+ * −0 is returned as 0.
+ */
+export function numberArgument(value: unknown, field: string, what: string, rule: NumberRule = {}): number {
+  const bad = (why: string): IonheatError => new IonheatError('INVALID_ARGUMENT', `${what} (${field}) ${why}, got ${describeValue(value)}`, { field });
+  if (typeof value !== 'number' || !Number.isFinite(value)) throw bad('must be a finite number');
+  if (rule.integer && !Number.isInteger(value)) throw bad('must be a whole number');
+  const { min, max } = rule;
+  if (min !== undefined && (rule.above ? !(value > min) : !(value >= min))) throw bad(`must be ${rule.above ? 'greater than' : 'at least'} ${min}${max !== undefined ? ` and ${rule.below ? 'less than' : 'at most'} ${max}` : ''}`);
+  if (max !== undefined && (rule.below ? !(value < max) : !(value <= max))) throw bad(`must be ${rule.below ? 'less than' : 'at most'} ${max}${min !== undefined ? ` and ${rule.above ? 'greater than' : 'at least'} ${min}` : ''}`);
+  return value === 0 ? 0 : value;
+}
+
+/** `value` when it is an object (not a list) or undefined (then `{}`), else an `INVALID_ARGUMENT` error naming `field`. */
+export function optionsArgument<T extends object>(value: T | undefined, field = 'options'): T {
+  if (value === undefined) return {} as T;
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) throw new IonheatError('INVALID_ARGUMENT', `${field} must be an object of named options, got ${describeValue(value)}`, { field });
+  return value;
+}
+
+/** The largest magnitude an estimate's numbers may have (far beyond any enthalpy, heat or temperature), so that sums and products stay finite. */
+export const ESTIMATE_LIMIT = 1e12;
+
+/**
+ * `value` when it is a complete {@link Estimate} (every field of the shape,
+ * finite numbers of magnitude at most 1e12, u ≥ 0, low ≤ value ≤ high),
+ * else an `INVALID_ARGUMENT` error naming `field`. Extra keys are dropped.
+ */
+export function estimateArgument(value: unknown, field = 'estimate'): Estimate {
+  const parsed = estimateSchema.safeParse(value);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0];
+    const at = issue && issue.path.length > 0 ? `${field}.${issue.path.join('.')}` : field;
+    throw new IonheatError('INVALID_ARGUMENT', `${field} must be an estimate as ionheat makes them (makeEstimate): ${at} ${issue ? issue.message.toLowerCase() : 'is malformed'}`, { field: at });
+  }
+  const e = parsed.data;
+  for (const k of ['value', 'u', 'low', 'high'] as const) numberArgument(e[k], `${field}.${k}`, `the ${k === 'u' ? 'uncertainty' : k} of ${field}`, { min: -ESTIMATE_LIMIT, max: ESTIMATE_LIMIT });
+  if (!(e.low <= e.value && e.value <= e.high)) throw new IonheatError('INVALID_ARGUMENT', `${field}: the interval [${e.low}, ${e.high}] does not hold the value ${e.value}`, { field: `${field}.low` });
+  const clean = (x: number): number => (x === 0 ? 0 : x);
+  return { ...e, value: clean(e.value), low: clean(e.low), high: clean(e.high), u: clean(e.u) };
+}
