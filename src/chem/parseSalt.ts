@@ -4,6 +4,7 @@
  *
  * @module
  */
+import { issueSalt } from './issuedSalts.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { IonRecord } from '../data/schemas.js';
@@ -200,7 +201,7 @@ function buildSalt(kind: Salt['kind'], ions: SaltIon[], water: number, index: Io
  */
 export function parseSalt(formula: string, dataset: Dataset = builtinDataset()): Salt {
   try {
-    return parseSaltUnchecked(formula, dataset);
+    return issueSalt(parseSaltUnchecked(formula, dataset));
   } catch (e) {
     if (isIonheatError(e)) throw e;
     // A defect, not a user error; still keep the promise of one error class.

@@ -4,6 +4,7 @@
  *
  * @module
  */
+import { isIssuedSalt } from './issuedSalts.js';
 import { z } from 'zod';
 import { IonheatError } from '../error.js';
 
@@ -48,6 +49,7 @@ const saltShapeSchema = z.object({
  * @internal
  */
 export function checkSaltShape(salt: unknown, field = 'salt'): void {
+  if (isIssuedSalt(salt)) return;
   const parsed = saltShapeSchema.safeParse(salt);
   if (parsed.success) return;
   const issue = parsed.error.issues[0]!;

@@ -10,6 +10,7 @@ import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { IonheatError } from '../error.js';
 import { describeValue } from '../quantity/argumentChecks.js';
+import { isIssuedSalt } from './issuedSalts.js';
 import { parseSalt } from './parseSalt.js';
 import type { Salt } from './salt.js';
 
@@ -23,6 +24,8 @@ const CACHE_LIMIT = 4096;
  * @throws IonheatError `INVALID_ARGUMENT` naming `field` when `value` is neither; the parser's errors for a bad formula
  */
 export function saltArgument(value: unknown, dataset: Dataset = builtinDataset(), field = 'salt'): Salt {
+  // A salt parseSalt made is frozen and can be trusted as it is.
+  if (isIssuedSalt(value)) return value;
   const formula = typeof value === 'string' ? value : value !== null && typeof value === 'object' && !Array.isArray(value) ? (value as { formula?: unknown }).formula : undefined;
   if (typeof formula !== 'string') {
     throw new IonheatError('INVALID_ARGUMENT', `${field} must be a formula (such as "KNO3") or a salt from parseSalt, got ${typeof value === 'object' && value !== null && !Array.isArray(value) ? 'an object without a formula' : describeValue(value)}`, { field });
@@ -33,6 +36,6 @@ export function saltArgument(value: unknown, dataset: Dataset = builtinDataset()
     salt = parseSalt(formula, dataset);
     if (cache.size < CACHE_LIMIT) cache.set(formula, salt);
   }
-  // A copy, so that a caller who changes a result cannot change the cache.
-  return { ...salt, ions: salt.ions.map((i) => ({ ...i })), composition: { ...salt.composition } };
+  // Frozen by parseSalt, so the cached salt can be handed out as it is.
+  return salt;
 }

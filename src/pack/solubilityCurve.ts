@@ -41,8 +41,12 @@ export interface SolubilityCurve {
   fromMemory: boolean;
 }
 
+/** Curves built here from the tables, frozen: trusted without a check (solubilityAt sits inside the fill solver's loop). */
+const builtCurves = new WeakSet<object>();
+
 /** The points of a curve a caller passes: at least two, temperatures rising, finite values. */
 function checkCurve(curve: SolubilityCurve): void {
+  if (typeof curve === 'object' && curve !== null && builtCurves.has(curve)) return;
   const bad = (why: string): never => {
     throw new IonheatError('INVALID_ARGUMENT', `curve must be a solubility curve from solubilityCurve: ${why}`, { field: 'curve' });
   };
@@ -119,7 +123,13 @@ function buildCurves(dataset: Dataset): ReadonlyMap<string, SolubilityCurve> {
         points.unshift({ t: rawEutectic.temperature, value: (100 * w) / (1 - w), phase: first.phase, phaseWater: first.phaseWater, eutectic: true });
       }
     }
-    curves.set(anhydrous.phase, { formula: anhydrous.phase, points, tableRange, ...(eutectic ? { eutectic } : {}), source: record.source, fromMemory: record.fromMemory });
+    const curve: SolubilityCurve = { formula: anhydrous.phase, points, tableRange, ...(eutectic ? { eutectic } : {}), source: record.source, fromMemory: record.fromMemory };
+    for (const p of points) Object.freeze(p);
+    Object.freeze(points);
+    Object.freeze(tableRange);
+    if (eutectic) Object.freeze(eutectic);
+    builtCurves.add(Object.freeze(curve));
+    curves.set(anhydrous.phase, curve);
   });
   return curves;
 }

@@ -39,13 +39,24 @@ export interface NumberRule {
  * −0 is returned as 0.
  */
 export function numberArgument(value: unknown, field: string, what: string, rule: NumberRule = {}): number {
+  // The common case first and without allocating: this runs inside solver loops.
+  if (typeof value === 'number' && Number.isFinite(value)) {
+    const { min, max } = rule;
+    const aboveMin = min === undefined || (rule.above ? value > min : value >= min);
+    const belowMax = max === undefined || (rule.below ? value < max : value <= max);
+    if (aboveMin && belowMax && (!rule.integer || Number.isInteger(value))) return value === 0 ? 0 : value;
+  }
+  throw numberError(value, field, what, rule);
+}
+
+/** The error {@link numberArgument} throws, naming the first rule `value` breaks. */
+function numberError(value: unknown, field: string, what: string, rule: NumberRule): IonheatError {
   const bad = (why: string): IonheatError => new IonheatError('INVALID_ARGUMENT', `${what} (${field}) ${why}, got ${describeValue(value)}`, { field });
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw bad('must be a finite number');
-  if (rule.integer && !Number.isInteger(value)) throw bad('must be a whole number');
+  if (typeof value !== 'number' || !Number.isFinite(value)) return bad('must be a finite number');
+  if (rule.integer && !Number.isInteger(value)) return bad('must be a whole number');
   const { min, max } = rule;
-  if (min !== undefined && (rule.above ? !(value > min) : !(value >= min))) throw bad(`must be ${rule.above ? 'greater than' : 'at least'} ${min}${max !== undefined ? ` and ${rule.below ? 'less than' : 'at most'} ${max}` : ''}`);
-  if (max !== undefined && (rule.below ? !(value < max) : !(value <= max))) throw bad(`must be ${rule.below ? 'less than' : 'at most'} ${max}${min !== undefined ? ` and ${rule.above ? 'greater than' : 'at least'} ${min}` : ''}`);
-  return value === 0 ? 0 : value;
+  if (min !== undefined && (rule.above ? !(value > min) : !(value >= min))) return bad(`must be ${rule.above ? 'greater than' : 'at least'} ${min}${max !== undefined ? ` and ${rule.below ? 'less than' : 'at most'} ${max}` : ''}`);
+  return bad(`must be ${rule.below ? 'less than' : 'at most'} ${max}${min !== undefined ? ` and ${rule.above ? 'greater than' : 'at least'} ${min}` : ''}`);
 }
 
 /** `value` when it is an object (not a list) or undefined (then `{}`), else an `INVALID_ARGUMENT` error naming `field`. */
