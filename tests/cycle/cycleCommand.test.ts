@@ -4,16 +4,9 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../src/node/cli/main.js';
-import type { CliIO } from '../../src/node/cli/io.js';
+import { runCliInMemory } from '../node/runCliInMemory.js';
 
-async function run(args: string[], cwd = process.cwd()) {
-  let out = '';
-  let err = '';
-  const io: CliIO = { stdout: (t) => void (out += t), stderr: (t) => void (err += t), stderrIsTTY: false, readStdin: async () => '', cwd };
-  const status = await runCli(args, io);
-  return { status, out, err };
-}
+const run = (args: string[], cwd = process.cwd()) => runCliInMemory(args, { cwd });
 
 describe('ionheat cycle', () => {
   it('--json prints { formula, steps, result: { quantity, value, low, high, unit } }', async () => {

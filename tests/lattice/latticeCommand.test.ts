@@ -1,16 +1,9 @@
 // `ionheat lattice`: the JSON contract outside scripts rely on, the text
 // report, and one-line errors with exit status 2 and no stack trace.
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../src/node/cli/main.js';
-import type { CliIO } from '../../src/node/cli/io.js';
+import { runCliInMemory } from '../node/runCliInMemory.js';
 
-async function run(args: string[]) {
-  let out = '';
-  let err = '';
-  const io: CliIO = { stdout: (t) => void (out += t), stderr: (t) => void (err += t), stderrIsTTY: false, readStdin: async () => '', cwd: process.cwd() };
-  const status = await runCli(args, io);
-  return { status, out, err };
-}
+const run = (args: string[]) => runCliInMemory(args);
 
 describe('ionheat lattice', () => {
   it('--json prints { formula, estimates: [{ method, value, low, high, unit }] } for every method by default', async () => {

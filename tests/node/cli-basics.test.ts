@@ -2,16 +2,9 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../src/node/cli/main.js';
-import type { CliIO } from '../../src/node/cli/io.js';
+import { runCliInMemory } from './runCliInMemory.js';
 
-export async function run(args: string[], stdin = '', cwd = process.cwd()) {
-  let out = '';
-  let err = '';
-  const io: CliIO = { stdout: (t) => void (out += t), stderr: (t) => void (err += t), stderrIsTTY: false, readStdin: async () => stdin, cwd };
-  const status = await runCli(args, io);
-  return { status, out, err };
-}
+export const run = (args: string[], stdin = '', cwd = process.cwd()) => runCliInMemory(args, { stdin, cwd });
 
 describe('ionheat command line basics', () => {
   it('lists the commands on help and exits 0', async () => {

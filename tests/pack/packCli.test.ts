@@ -3,16 +3,9 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../src/node/index.js';
-import type { CliIO } from '../../src/node/index.js';
+import { runCliInMemory } from '../node/runCliInMemory.js';
 
-async function run(args: string[], cwd = process.cwd()) {
-  let out = '';
-  let err = '';
-  const io: CliIO = { stdout: (t) => void (out += t), stderr: (t) => void (err += t), stderrIsTTY: false, readStdin: async () => '', cwd };
-  const status = await runCli(args, io);
-  return { status, out, err };
-}
+const run = (args: string[], cwd = process.cwd()) => runCliInMemory(args, { cwd });
 
 describe('pack --json contract', () => {
   it('prints one object with finalTemperature, dissolved, heat and cautions', async () => {

@@ -1,16 +1,9 @@
 // `ionheat dissolve`: the JSON contract outside scripts rely on, the text
 // report, and one-line errors with exit status 2.
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../../src/node/cli/main.js';
-import type { CliIO } from '../../../src/node/cli/io.js';
+import { runCliInMemory } from '../runCliInMemory.js';
 
-async function run(args: string[]) {
-  let out = '';
-  let err = '';
-  const io: CliIO = { stdout: (t) => void (out += t), stderr: (t) => void (err += t), stderrIsTTY: false, readStdin: async () => '', cwd: process.cwd() };
-  const status = await runCli(args, io);
-  return { status, out, err };
-}
+const run = (args: string[]) => runCliInMemory(args);
 
 describe('ionheat dissolve', () => {
   it('--json prints one object with the contract fields', async () => {

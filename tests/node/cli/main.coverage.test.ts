@@ -6,17 +6,11 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { commands, runCli } from '../../../src/node/cli/main.js';
-import type { CliIO } from '../../../src/node/cli/io.js';
+import { commands } from '../../../src/node/cli/main.js';
 import packageJson from '../../../package.json';
+import { runCliInMemory } from '../runCliInMemory.js';
 
-async function run(args: string[], cwd = process.cwd()) {
-  let out = '';
-  let err = '';
-  const io: CliIO = { stdout: (t) => void (out += t), stderr: (t) => void (err += t), stderrIsTTY: false, readStdin: async () => '', cwd };
-  const status = await runCli(args, io);
-  return { status, out, err };
-}
+const run = (args: string[], cwd = process.cwd()) => runCliInMemory(args, { cwd });
 
 describe('runCli dispatch', () => {
   it('prints the version of the package', async () => {
