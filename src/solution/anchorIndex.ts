@@ -8,16 +8,15 @@
  * @module
  */
 import type { Dataset } from '../data/dataset.js';
-import { parseSalt } from '../chem/parseSalt.js';
-import { saltRecordIndex, saltRecords, WATER } from '../chem/saltRecords.js';
+import { saltRecords } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
-import { isIonheatError } from '../error.js';
 import type { Estimate } from '../quantity/estimate.js';
 import { latticeModels, type LatticeModel } from '../lattice/latticeModel.js';
 import { bornRadius } from '../hydration/bornHydration.js';
 import { measuredSolutionEnthalpy } from './measuredSolution.js';
 import { solutionEnthalpyFromCycle } from './cycleSolution.js';
 import { saltLattice } from './saltLattice.js';
+import { tableSalts } from './tableSalts.js';
 
 /** One anchor: a salt M_aX_b with a known enthalpy of solution. */
 export interface AnchorSalt {
@@ -164,17 +163,10 @@ function gridOf(anchors: readonly AnchorSalt[], inPool: { cation: Set<string>; a
 /** The anchor index of a dataset, built on first use. */
 export function anchorIndex(dataset: Dataset): AnchorIndex {
   return dataset.memo('solution.anchorIndex', () => {
-    const formulas = new Set<string>();
-    for (const table of ['solution-enthalpies.json', 'compound-formation.json'] as const) for (const f of saltRecordIndex(table, dataset).keys()) if (f !== WATER) formulas.add(f);
+    const salts = tableSalts(dataset);
     const anchors: AnchorSalt[] = [];
-    for (const formula of [...formulas].sort(byName)) {
-      let salt: Salt;
-      try {
-        salt = parseSalt(formula, dataset);
-      } catch (e) {
-        if (isIonheatError(e)) continue;
-        throw e;
-      }
+    for (const formula of [...salts.keys()].sort(byName)) {
+      const salt = salts.get(formula)!;
       if (salt.water > 0) continue;
       const ions = binaryIons(salt);
       if (!ions) continue;

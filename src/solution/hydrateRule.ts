@@ -9,12 +9,12 @@
 import { describeValue, estimateArgument, numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
-import { parseSalt } from '../chem/parseSalt.js';
 import { saltRecordIndex, saltRecords, WATER } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
-import { IonheatError, isIonheatError } from '../error.js';
+import { IonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { widenEstimate } from './widenEstimate.js';
+import { tableSalts } from './tableSalts.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 /**
@@ -65,22 +65,10 @@ export interface HydrateRuleInput {
 export function saltFormIndex(dataset: Dataset): ReadonlyMap<string, readonly { formula: string; water: number; salt: Salt }[]> {
   return dataset.memo('solution.saltForms', () => {
     const byAnhydrous = new Map<string, { formula: string; water: number; salt: Salt }[]>();
-    const seen = new Set<string>();
-    for (const table of ['compound-formation.json', 'solution-enthalpies.json'] as const) {
-      for (const formula of saltRecordIndex(table, dataset).keys()) {
-        if (formula === WATER || seen.has(formula)) continue;
-        seen.add(formula);
-        let salt: Salt;
-        try {
-          salt = parseSalt(formula, dataset);
-        } catch (e) {
-          if (isIonheatError(e)) continue;
-          throw e;
-        }
-        const list = byAnhydrous.get(salt.anhydrous) ?? [];
-        list.push({ formula: salt.formula, water: salt.water, salt });
-        byAnhydrous.set(salt.anhydrous, list);
-      }
+    for (const salt of tableSalts(dataset).values()) {
+      const list = byAnhydrous.get(salt.anhydrous) ?? [];
+      list.push({ formula: salt.formula, water: salt.water, salt });
+      byAnhydrous.set(salt.anhydrous, list);
     }
     for (const list of byAnhydrous.values()) list.sort((a, b) => a.water - b.water);
     return byAnhydrous;

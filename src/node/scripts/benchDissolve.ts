@@ -14,9 +14,8 @@
  * Target: ≥ 50,000 salts per second.
  */
 import { performance } from 'node:perf_hooks';
-import { Dataset, type Tables } from '../../data/dataset.js';
-import { builtinDataset } from '../../data/builtin.js';
-import { tableSchemas, type TableName } from '../../data/schemas.js';
+import { freshDataset } from './freshDataset.js';
+import type { Dataset } from '../../data/dataset.js';
 import { parseSalt } from '../../chem/parseSalt.js';
 import type { Salt } from '../../chem/salt.js';
 import { isIonheatError } from '../../error.js';
@@ -27,17 +26,6 @@ import { enumerate } from '../../screen/enumerate.js';
 export const DISSOLVE_TARGET_PER_SECOND = 50_000;
 
 type DissolveFn = (salt: Salt, options: DissolveOptions, dataset: Dataset) => DissolveResult;
-
-/** A dataset with the built-in tables and empty caches, so the first pass pays for every index. */
-function freshDataset(): Dataset {
-  const base = builtinDataset();
-  const tables: Tables = {};
-  for (const name of Object.keys(tableSchemas) as TableName[]) {
-    const t = base.table(name);
-    if (t) (tables as Record<string, unknown>)[name] = t;
-  }
-  return new Dataset(tables, base.sources, 'built-in (fresh)');
-}
 
 /** Every charge-balanced salt of one cation and one anion of the ion table. */
 export function chargeBalancedPairs(dataset: Dataset): Salt[] {

@@ -6,9 +6,7 @@
  * run. Target: that ratio ≤ 20.
  */
 import { performance } from 'node:perf_hooks';
-import { Dataset, type Tables } from '../../data/dataset.js';
-import { builtinDataset } from '../../data/builtin.js';
-import { tableSchemas, type TableName } from '../../data/schemas.js';
+import { freshDataset } from './freshDataset.js';
 import type { Salt } from '../../chem/salt.js';
 import { isIonheatError } from '../../error.js';
 import { cycleLatticeEnthalpy } from '../../cycle/cycleLatticeEnthalpy.js';
@@ -22,17 +20,6 @@ import { chargeBalancedPairs } from './benchDissolve.js';
 
 /** Largest allowed cost of a Kapustinskii estimate, in bare inline evaluations (issue target). */
 export const KAPUSTINSKII_RATIO_TARGET = 20;
-
-/** A dataset with the built-in tables and empty caches, so the first pass pays for every index and the calibration. */
-function freshDataset(): Dataset {
-  const base = builtinDataset();
-  const tables: Tables = {};
-  for (const name of Object.keys(tableSchemas) as TableName[]) {
-    const t = base.table(name);
-    if (t) (tables as Record<string, unknown>)[name] = t;
-  }
-  return new Dataset(tables, base.sources, 'built-in (fresh)');
-}
 
 /** Runs `pass` repeatedly for about `ms` milliseconds; returns calls per second. */
 function rate(pass: () => number, ms = 600): number {

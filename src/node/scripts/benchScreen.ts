@@ -20,9 +20,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { performance } from 'node:perf_hooks';
-import { Dataset, type Tables } from '../../data/dataset.js';
-import { builtinDataset } from '../../data/builtin.js';
-import { tableSchemas, type TableName } from '../../data/schemas.js';
+import { freshDataset } from './freshDataset.js';
 import { enumerate } from '../../screen/enumerate.js';
 import { screen } from '../../screen/screen.js';
 
@@ -32,16 +30,6 @@ export const SCREEN_COMMAND_TARGET_PER_SECOND = 50_000;
 export const SCREEN_MEMORY_RATIO_TARGET = 1.5;
 
 const root = fileURLToPath(new URL('../../../', import.meta.url));
-
-function freshDataset(): Dataset {
-  const base = builtinDataset();
-  const tables: Tables = {};
-  for (const name of Object.keys(tableSchemas) as TableName[]) {
-    const t = base.table(name);
-    if (t) (tables as Record<string, unknown>)[name] = t;
-  }
-  return new Dataset(tables, base.sources, 'built-in (fresh)');
-}
 
 /** A candidate CSV of n rows: the enumerated salts in turn, each row with its own price and note. */
 function candidateCsv(n: number, formulas: readonly string[]): string {
