@@ -9,6 +9,7 @@ import type { Dataset } from '../data/dataset.js';
 import type { SolubilityProductRecord } from '../data/schemas.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import type { Salt } from '../chem/salt.js';
+import { findIon } from '../chem/ionIndex.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { solubilityFromProduct } from './solubilityFromProduct.js';
@@ -24,16 +25,35 @@ export const ESTIMATE_IONIC_STRENGTH_LIMIT = 0.1;
 /**
  * Standard uncertainty, in log10, of a solubility estimated from Ksp for
  * what the estimate leaves out (activity coefficients, ion pairs, hydrolysis
- * and complexes): an allowance of common practice, not a fitted figure.
- * Hydrolysis of hydroxides and sulfides can raise the true solubility by
- * more; such salts still stay far below what moves a pack.
+ * and complexes), by kind of cation. Checked against the CRC table at 25 °C
+ * (tests/brine/productSolubility.test.ts): for cations of the s and p blocks
+ * (Ca, Sr, Ba, Mg, Pb fluorides, sulfates and halides) the CRC value lies
+ * within a factor of 3 of the estimate, so 0.4 (95 %: a factor of 6); for
+ * d-block cations fluoride complexes put CoF₂ and NiF₂ a factor of 10–12
+ * above it, so 1.0 (95 %: a factor of about 100).
  */
-export const ESTIMATE_MODEL_U_LOG10 = 0.4;
+export const ESTIMATE_MODEL_U_LOG10 = { mainGroup: 0.4, dBlock: 1.0 } as const;
+
+/**
+ * Cations of this charge or more are not estimated: hydrolysis and
+ * complexes dominate, and the CRC table puts AlF₃ and FeF₃ 10³ to 10⁵ times
+ * above the ideal figure.
+ */
+export const UNESTIMATED_CATION_CHARGE = 3;
+
+/** Atomic numbers of the d-block metals (groups 3–12 of periods 4–6, lanthanum aside). */
+function isDBlock(z: number): boolean {
+  return (z >= 21 && z <= 30) || (z >= 39 && z <= 48) || (z >= 72 && z <= 80);
+}
 
 /** What the solubility products say about a salt. */
 export interface ProductSolubility {
-  /** `estimated` when the saturated solution is dilute enough for the estimate; `too-soluble` when it is not. */
-  kind: 'estimated' | 'too-soluble';
+  /**
+   * `estimated` when the saturated solution is dilute enough for the
+   * estimate; `too-soluble` when it is not; `unreliable` for a cation of
+   * charge 3 or more (see {@link UNESTIMATED_CATION_CHARGE}).
+   */
+  kind: 'estimated' | 'too-soluble' | 'unreliable';
   /** Grams of anhydrous salt per 100 g of water at 25 °C (ideal estimate). */
   value: number;
   /** Standard uncertainty, g/100 g H2O (from the log10 uncertainty, first order). */
@@ -82,11 +102,13 @@ function estimateOf({ record, salt }: Indexed, anhydrousMolarMass: number, datas
   const { molality, ionicStrength } = solubilityFromProduct(record.value, cation.count, cation.charge, anion.count, anion.charge);
   const nu = cation.count + anion.count;
   const uLogK = dataset.uncertaintyOf('solubility-products.json', record) ?? 0;
-  const uLog10 = Math.hypot(uLogK / nu, ESTIMATE_MODEL_U_LOG10);
+  const element = Object.keys(findIon(cation.ion, dataset)?.composition ?? {});
+  const z = element.length === 1 ? (dataset.records('elements.json').find((e) => e.symbol === element[0])?.z ?? 0) : 0;
+  const uLog10 = Math.hypot(uLogK / nu, isDBlock(z) ? ESTIMATE_MODEL_U_LOG10.dBlock : ESTIMATE_MODEL_U_LOG10.mainGroup);
   const value = (molality * anhydrousMolarMass) / 10;
   const factor = 10 ** (COVERAGE_95 * uLog10);
   return {
-    kind: ionicStrength <= ESTIMATE_IONIC_STRENGTH_LIMIT ? 'estimated' : 'too-soluble',
+    kind: cation.charge >= UNESTIMATED_CATION_CHARGE ? 'unreliable' : ionicStrength <= ESTIMATE_IONIC_STRENGTH_LIMIT ? 'estimated' : 'too-soluble',
     value,
     u: value * Math.LN10 * uLog10,
     low: value / factor,

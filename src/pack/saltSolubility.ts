@@ -12,7 +12,7 @@ import type { Salt } from '../chem/salt.js';
 import { saltArgument } from '../chem/saltArgument.js';
 import { numberArgument } from '../quantity/argumentChecks.js';
 import { COVERAGE_95 } from '../quantity/constants.js';
-import { productSolubility, ESTIMATE_IONIC_STRENGTH_LIMIT, type ProductSolubility } from '../brine/productSolubility.js';
+import { productSolubility, ESTIMATE_IONIC_STRENGTH_LIMIT, UNESTIMATED_CATION_CHARGE, type ProductSolubility } from '../brine/productSolubility.js';
 import { constantSolubilityCurve, solubilityAt, solubilityCurve, type SolubilityCurve } from './solubilityCurve.js';
 
 /** How well a salt's solubility is known. */
@@ -53,6 +53,14 @@ function build(salt: Salt, dataset: Dataset): PackSolubility {
       curve,
       product,
       note: `estimated from ${describeProduct(product)} with activity coefficients of 1: ${product.value.toPrecision(2)} g per 100 g water at 25 °C (95 %: ${product.low.toPrecision(2)}–${product.high.toPrecision(2)}), taken as the same at every temperature; a sparingly soluble salt`,
+    };
+  }
+  if (product?.kind === 'unreliable') {
+    return {
+      status: 'unknown',
+      curve: undefined,
+      product,
+      note: `unknown: no measured solubility, and for a cation of charge ${UNESTIMATED_CATION_CHARGE} or more the estimate from ${describeProduct(product)} is not given (hydrolysis and complexes make it fail by orders of magnitude)`,
     };
   }
   if (product) {

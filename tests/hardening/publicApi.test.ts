@@ -114,6 +114,7 @@ const cases: Record<string, Case> = {
   ionHydrationEnthalpy: { samples: () => [['Na[+]'], ['SO4[2-]', 'conventional']], userArgs: 2 },
   bornHydrationEnthalpy: { samples: () => [['Na[+]', {}], ['Cl[-]', { excludeIon: 'Cl[-]' }]], userArgs: 2, runs: 40 },
   gaseousIonFormationEnthalpy: { samples: () => [['Na[+]'], ['Cl[-]']], userArgs: 1 },
+  solubilityFromProduct: { samples: () => [[-9.7453, 1, 1, 1, 1], [-34.2293, 1, 3, 3, -1]], userArgs: 5 },
   // The enthalpy of solution
   dissolve: { samples: () => [['NH4NO3', {}], ['CaCl2·6H2O', { excludeMeasured: true, temperatureC: 10 }], [s().salt, { temperatureC: 25 }, mine]], userArgs: 2, runs: 80 },
   solutionVerdict: { samples: () => [[s().estimate]], userArgs: 1 },
@@ -138,6 +139,7 @@ const cases: Record<string, Case> = {
   saltHazards: { samples: () => [['NH4NO3'], [s().salt]], userArgs: 1 },
   solubilityCurve: { samples: () => [['KNO3'], [s().hydrate]], userArgs: 1 },
   solubilityAt: { samples: () => [[s().curveKNO3, 25], [s().curveKNO3, 80]], userArgs: 2 },
+  saltSolubility: { samples: () => [['KNO3', 20], ['AgCl'], ['ScF3', 80], [s().hydrate, 25]], userArgs: 2 },
   freezingPointOfSolution: { samples: () => [[0.2, 100]], userArgs: 2 },
   // Screening
   screen: { samples: () => [[['NH4NO3', 'KNO3', 'Xy'], { spec: 'best.low > 10' }], [[{ formula: 'KNO3', pricePerKg: 2, measuredEnthalpy: 35, measuredUncertainty: 0.5, solubility: 30 }], { fill: '20:80@22', objective: 'cost-per-kj', direction: 'cool', filters: { excludeSalts: ['NH4NO3'], excludeIons: ['Na[+]'], excludeHazards: ['oxidizer'], minMolarMass: 10, maxMolarMass: 500 } }]], userArgs: 2, runs: 60 },
