@@ -60,7 +60,9 @@ function withCurves(fill: PreparedFill, end: 'lower' | 'upper'): PreparedFill {
 export function withSolubilityBounds(fill: PreparedFill, solution: FillSolution, interval: TemperatureInterval): TemperatureInterval {
   const open = fill.solids.filter((s) => s.solubilityBounds !== undefined);
   if (open.length === 0) return interval;
-  const ends: FillSolution[] = [solveFillTemperature(withCurves(fill, 'lower')), solveFillTemperature(withCurves(fill, 'upper'))];
+  const ends: FillSolution[] = [solveFillTemperature(withCurves(fill, 'lower'))];
+  // An unknown solubility's upper end is the fill as solved (all of it dissolved): no need to solve it again.
+  if (open.some((s) => s.solubilityBounds!.upper !== undefined)) ends.push(solveFillTemperature(withCurves(fill, 'upper')));
   const temperatures = ends.map((e) => e.temperature);
   const low = Math.min(interval.low, solution.temperature, ...temperatures);
   const high = Math.max(interval.high, solution.temperature, ...temperatures);
