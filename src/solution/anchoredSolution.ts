@@ -14,7 +14,8 @@ import { saltRecords } from '../chem/saltRecords.js';
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { latticeModels, type LatticeModel } from '../lattice/latticeModel.js';
-import { anchorIndex, binaryIons, cationCore, type AnchorSalt, type IndexedAnchor } from './anchorIndex.js';
+import { anchorIndex, binaryIons, type AnchorSalt, type IndexedAnchor } from './anchorIndex.js';
+import { saltIonClass, type SaltIonClass } from '../lattice/saltIonClass.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
@@ -75,6 +76,7 @@ interface Target {
   anion: string;
   cationCount: number;
   anionCount: number;
+  chargeType: string;
   structure: string | undefined;
   lattice: ReadonlyMap<LatticeModel, number>;
 }
@@ -105,7 +107,7 @@ function sidesOf(target: Target, models: readonly number[], dataset: Dataset): S
   const withX = x === undefined ? undefined : byAnion[x]!;
   for (const n of (withX && neighbours.get(target.cation)) || []) {
     const nx = withX![n.index];
-    if (!nx || nx.anchor.formula === target.formula) continue;
+    if (!nx || nx.anchor.formula === target.formula || nx.anchor.chargeType !== target.chargeType) continue;
     let useful = false;
     for (const m of models) {
       if (Number.isNaN(nx.lattice[m]!) || found[m]! >= ANCHOR_NEIGHBOURS) continue;
@@ -122,7 +124,7 @@ function sidesOf(target: Target, models: readonly number[], dataset: Dataset): S
     found.fill(0);
     for (const y of neighbours.get(target.anion) ?? []) {
       const my = own[y.index];
-      if (!my || my.anchor.formula === target.formula) continue;
+      if (!my || my.anchor.formula === target.formula || my.anchor.chargeType !== target.chargeType) continue;
       let useful = false;
       for (const m of models) {
         if (Number.isNaN(my.lattice[m]!) || found[m]! >= ANCHOR_NEIGHBOURS) continue;
@@ -144,10 +146,12 @@ const PART = 5;
 /**
  * Every usable anchor set for a target and each estimator asked for,
  * combined: the nearest {@link ANCHOR_NEIGHBOURS} cations N (with NX known)
- * and anions Y (with MY known), each pair (N, Y) with NY known. For
- * MX = M_pX_q, MY = M_aY_b, NX = N_cX_d, NY = N_eY_f the coefficients
- * α = p/a, β = q/d, γ = −α·b/f make the ions of α·MY + β·NX + γ·NY those of
- * MX, so the hydration enthalpies cancel exactly for any charge types.
+ * and anions Y (with MY known), each pair (N, Y) with NY known. N has the
+ * charge of M and Y that of X, so all four salts share one charge type (see
+ * {@link anchoredSolutionEnthalpies} for why). For MX = M_pX_q, MY = M_aY_b,
+ * NX = N_cX_d, NY = N_eY_f the coefficients α = p/a, β = q/d, γ = −α·b/f make
+ * the ions of α·MY + β·NX + γ·NY those of MX, so the hydration enthalpies
+ * cancel exactly (with one charge type, α = β = −γ = 1).
  * What does not depend on the estimator (coefficients, the anchors' data
  * uncertainty, the weight) is worked out once per set and shared by the
  * estimators. `keep` collects the sets themselves (for inspection, one
@@ -290,13 +294,12 @@ function typicalSpreadOf(calibration: FloorCalibration | undefined, type: string
 function floorGroups(dataset: Dataset): ReadonlyMap<LatticeModel, FloorCalibration> {
   return dataset.memo('solution.anchorFloors', () => {
     const out = new Map<LatticeModel, FloorCalibration>();
-    const charges = new Map(dataset.records('ions.json').map((i) => [i.id, i.charge]));
     for (const [mi, model] of latticeModels.entries()) {
-      const rows: { a: AnchorSalt; type: string; core: string; c: Combination }[] = [];
+      const rows: { a: AnchorSalt; type: string; c: Combination }[] = [];
       for (const a of anchorIndex(dataset).anchors) {
         if (!a.lattice.has(model)) continue;
-        const [c] = combine({ formula: a.formula, cation: a.cation, anion: a.anion, cationCount: a.cationCount, anionCount: a.anionCount, structure: a.structure, lattice: a.lattice }, [mi], dataset);
-        if (c) rows.push({ a, type: `${charges.get(a.cation)}:${-(charges.get(a.anion) ?? 0)}`, core: cationCore(a.cation, dataset), c });
+        const [c] = combine({ formula: a.formula, cation: a.cation, anion: a.anion, cationCount: a.cationCount, anionCount: a.anionCount, chargeType: a.chargeType, structure: a.structure, lattice: a.lattice }, [mi], dataset);
+        if (c) rows.push({ a, type: a.chargeType, c });
       }
       // The typical relative spread, from salts with at least three effective sets.
       const spreads = new Map<string, number[]>();
@@ -308,11 +311,11 @@ function floorGroups(dataset: Dataset): ReadonlyMap<LatticeModel, FloorCalibrati
       for (const [key, list] of spreads) if (key === '*' || list.length >= MIN_FLOOR_GROUP) typicalSpread.set(key, median(list));
       const calibration: FloorCalibration = { typicalSpread, groups: new Map() };
       const points: FloorPoint[] = [];
-      for (const { a, type, core, c } of rows) {
+      for (const { a, type, c } of rows) {
         // The anchors' stated uncertainties are not subtracted, so that a wider input never narrows a result.
         const miss = c.value - a.value;
         const needed2 = (miss / COVERAGE_95) ** 2 - usedSpread(c, typicalSpreadOf(calibration, type)) ** 2;
-        points.push({ formula: a.formula, keys: [`${type}|${core}`, type, '*'], needed: Math.sqrt(Math.max(0, needed2)) / Math.abs(c.lattice) });
+        points.push({ formula: a.formula, keys: [`${type}|${a.ionClass}`, type, '*'], needed: Math.sqrt(Math.max(0, needed2)) / Math.abs(c.lattice) });
       }
       points.sort((x, y) => x.needed - y.needed || (x.formula < y.formula ? -1 : 1));
       for (const p of points) {
@@ -340,10 +343,10 @@ function quantile95(sorted: readonly number[], skip: number): number {
   return at(lo) + (h - lo) * (at(hi) - at(lo));
 }
 
-/** The calibration group of a target: its charge type and the electron core of its cation. */
+/** The calibration group of a target: its charge type and the class of its ions. */
 export interface FloorGroupKey {
   chargeType: string;
-  cationCore: 'noble-gas' | 'other';
+  ionClass: SaltIonClass;
 }
 
 /**
@@ -362,13 +365,13 @@ export interface FloorGroupKey {
 export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options: { excludeFormula?: string } = {}, dataset: Dataset = builtinDataset()): { relative: number; salts: number; group: string } {
   const groups = floorGroups(dataset).get(model)?.groups;
   let atLeast = 0;
-  for (const key of [`${group.chargeType}|${group.cationCore}`, group.chargeType, '*']) {
+  for (const key of [`${group.chargeType}|${group.ionClass}`, group.chargeType, '*']) {
     const g = groups?.get(key);
     if (!g) continue;
     const skip = options.excludeFormula !== undefined ? (g.position.get(options.excludeFormula) ?? -1) : -1;
     const n = g.needed.length - (skip >= 0 ? 1 : 0);
     if (n >= MIN_FLOOR_GROUP || key === '*') {
-      const label = key === '*' ? 'all charge types' : key.replace('|', ', cation core ');
+      const label = key === '*' ? 'all charge types' : key.replace('|', ', ');
       return { relative: Math.max(quantile95(g.needed, skip), atLeast), salts: n, group: atLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
     }
     if (n > 0) atLeast = Math.max(atLeast, g.needed[skip === g.needed.length - 1 ? g.needed.length - 2 : g.needed.length - 1]!);
@@ -385,7 +388,18 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
  * over every usable anchor set (MY, NX, NY with measured or cycle values,
  * nearest ions first), combined with weights exp(−D), D the ion distance
  * of N from M and Y from X plus a penalty for each anchor of another
- * structure type. The standard uncertainty is √(u_data² + spread² + f²):
+ * structure type.
+ *
+ * All four salts of a set share the target's charge type. Only then does
+ * the bracket cancel the model's error: the volume-based equation fits its
+ * coefficients to each charge type, the Born–Landé and Born–Mayer Madelung
+ * constants belong to one structure, and although Kapustinskii's equation
+ * is one form for every charge type, its radius errors enter as
+ * ν·|z₊z₋|/(r₊ + r₋), so sets that mix charge types leave them uncancelled
+ * (K₂CO₃ from KClO₃ + Na₂CO₃ − NaClO₃ missed by about 180 kJ/mol, Al₂(SO₄)₃
+ * from 1:1 and 2:2 salts by about 1000). No estimator is therefore allowed
+ * to mix charge types; a salt with no anchor set of its own charge type
+ * gets no anchored estimate. The standard uncertainty is √(u_data² + spread² + f²):
  * the anchors' own uncertainties, the weighted spread of the sets, and a
  * floor f calibrated so that 95 % of the pool salts, each estimated from
  * the others, fall inside their intervals. The salt itself is never an
@@ -416,7 +430,7 @@ export function anchoredEstimates(salt: Salt, lattice: () => SaltLattice, option
   const target = targetOf(salt, lattice, dataset);
   if (!target) return [];
   const type = chargeType(salt) ?? 'other';
-  const group: FloorGroupKey = { chargeType: type, cationCore: cationCore(target.cation, dataset) };
+  const group: FloorGroupKey = { chargeType: type, ionClass: saltIonClass(salt, dataset) };
   const out: Estimate[] = [];
   const combinations = combine(target, ALL_MODELS, dataset);
   for (const [mi, model] of latticeModels.entries()) {

@@ -22,6 +22,7 @@ import { heatPerGramOfFill, heatPerGramOfSalt, saturatedFill, type SaturatedFill
 import { checkKirchhoffTemperature, kirchhoffCorrection, solutionHeatCapacity, TABLE_TEMPERATURE_C, typicalSolutionHeatCapacity } from './solutionHeatCapacity.js';
 import { solutionVerdict, type Verdict } from './verdict.js';
 import { anchoredEstimates } from './anchoredSolution.js';
+import { widenForDisagreement } from './anchoredDisagreement.js';
 import { hydrationText, modelEstimate } from './modelSolution.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 
@@ -253,12 +254,13 @@ function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
   const key = hide ? 'hidden' : 'open';
   let found = profile.ranked[key];
   if (!found) {
-    const estimates: Estimate[] = [];
-    if (profile.measured && !hide) estimates.push(profile.measured);
-    if (profile.cycle && !hide) estimates.push(profile.cycle);
+    const made: Estimate[] = [];
+    if (profile.measured && !hide) made.push(profile.measured);
+    if (profile.cycle && !hide) made.push(profile.cycle);
     const rule = ruleOf(salt, profile, hide, dataset);
-    if (rule) estimates.push(rule);
-    for (const e of modelledEstimates(profile, hide, dataset, store)) estimates.push(e);
+    if (rule) made.push(rule);
+    for (const e of modelledEstimates(profile, hide, dataset, store)) made.push(e);
+    const estimates = widenForDisagreement(made).map((e) => (profile.kept ? frozen(e) : e));
     estimates.sort(rank);
     let perGram: DissolveResult['perGram'] | undefined;
     if (estimates[0]) {

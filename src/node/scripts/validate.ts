@@ -19,6 +19,7 @@ import { dissolve } from '../../solution/dissolve.js';
 import { measuredSolutionEnthalpy } from '../../solution/measuredSolution.js';
 import { solutionEnthalpyFromCycle } from '../../solution/cycleSolution.js';
 import { solutionVerdict } from '../../solution/verdict.js';
+import { saltIonClass, saltIonClasses } from '../../lattice/saltIonClass.js';
 
 const dataset = builtinDataset();
 
@@ -129,14 +130,65 @@ function tables(rs: readonly Row[]): string {
   ].join('\n');
 }
 
+/** The charge type of a case, or its kind where it has none (hydrates apart, whatever their charge type). */
+function kindOf(c: Case): string {
+  return c.salt.kind !== 'ionic' ? 'non-electrolytes' : c.salt.water > 0 ? 'hydrates' : (chargeType(c.salt) ?? 'several kinds of ion');
+}
+
+function classOf(c: Case): string {
+  return c.salt.kind !== 'ionic' ? '—' : saltIonClass(c.salt, dataset);
+}
+
+/** Whether an interval misses its reference by more than its own half-width on that side. */
+function farMiss(e: Estimate, truth: number): boolean {
+  return truth > e.high ? truth - e.high > e.high - e.value : truth < e.low ? e.low - truth > e.value - e.low : false;
+}
+
+interface Breakdown {
+  label: string;
+  cases: number;
+  best: Row;
+  /** The anchored basis alone (its most precise estimate per salt). */
+  anchored: Row;
+  /** Salts whose best interval misses its reference by more than its own half-width. */
+  farMisses: string[];
+}
+
+function breakdown(label: string, cases: readonly Case[]): Breakdown {
+  const best = cases.flatMap((c) => (c.best ? [{ e: c.best, truth: c.truth }] : []));
+  const anchored = cases.flatMap((c) => {
+    const e = c.estimates.find((x) => x.basis === 'anchored');
+    return e ? [{ e, truth: c.truth }] : [];
+  });
+  const farMisses = cases.filter((c) => c.best && farMiss(c.best, c.truth)).map((c) => c.salt.formula);
+  return { label, cases: cases.length, best: row(label, best), anchored: row(label, anchored), farMisses };
+}
+
+function breakdowns(cases: readonly Case[]): Breakdown[] {
+  const out: Breakdown[] = [];
+  for (const t of [...new Set(cases.map(kindOf))].sort()) {
+    const ofType = cases.filter((c) => kindOf(c) === t);
+    out.push(breakdown(t, ofType));
+    const classes = [...new Set(ofType.map(classOf))].filter((k) => k !== '—');
+    if (classes.length > 1) for (const k of saltIonClasses.filter((x) => classes.includes(x))) out.push(breakdown(`  ${t} · ${k}`, ofType.filter((c) => classOf(c) === k)));
+  }
+  return out;
+}
+
+/** MAE, coverage, undetermined and wrong shares of `best` by charge type and ion class, with the anchored basis's MAE beside. */
 function byChargeType(cases: readonly Case[]): string {
-  const kindOf = (c: Case): string => (c.salt.kind !== 'ionic' ? 'non-electrolytes' : c.salt.water > 0 ? 'hydrates' : (chargeType(c.salt) ?? 'several kinds of ion'));
-  const types = [...new Set(cases.map(kindOf))].sort();
-  const lines = ['| salts | n | estimated (best) | best MAE | best 95 % coverage | best wrong verdicts |', '|---|---:|---:|---:|---:|---:|'];
-  for (const t of types) {
-    const sub = cases.filter((c) => kindOf(c) === t);
-    const r = row(t, sub.flatMap((c) => (c.best ? [{ e: c.best, truth: c.truth }] : [])));
-    lines.push(r.n > 0 ? `| ${t} | ${sub.length} | ${r.n} | ${kj(r.mae)} | ${pct(r.coverage)} | ${pct(r.wrong)} |` : `| ${t} | ${sub.length} | 0 | — | — | — |`);
+  const lines = [
+    '| salts | n | estimated | best MAE | anchored MAE (n) | 95 % coverage | missed by > half-width | undetermined | wrong |',
+    '|---|---:|---:|---:|---:|---:|---:|---:|---:|',
+  ];
+  for (const b of breakdowns(cases)) {
+    const label = b.label.startsWith('  ') ? `&nbsp;&nbsp;${b.label.trim()}` : `**${b.label}**`;
+    const anchored = b.anchored.n > 0 ? `${kj(b.anchored.mae)} (${b.anchored.n})` : '—';
+    lines.push(
+      b.best.n > 0
+        ? `| ${label} | ${b.cases} | ${b.best.n} | ${kj(b.best.mae)} | ${anchored} | ${pct(b.best.coverage)} | ${b.farMisses.length} | ${pct(b.best.undetermined)} | ${pct(b.best.wrong)} |`
+        : `| ${label} | ${b.cases} | 0 | — | — | — | — | — | — |`,
+    );
   }
   return lines.join('\n');
 }
