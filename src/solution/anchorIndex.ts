@@ -89,17 +89,18 @@ export interface AnchorIndex {
 
 /**
  * Weights of the ion distance (a method choice of ionheat, not published
- * values): radius difference in units of 0.25 Å, squared; 1 for monatomic
- * against polyatomic; 3 for a cation with a noble-gas core against one
- * without (d-block and post-transition cations bond more covalently, and the
- * ionic models miss them by more); 4 for the radius term where an ion has no
- * radius. Charge comes before all of these: an ion of another charge is
- * farther than any ion of the same charge (neighbours are ordered by charge
- * first), and its distance carries a further `charge` term, so that a 1−
- * anion never outweighs a 2− one as a stand-in for a 2− anion. Chosen by
- * leave-one-out over the anchor pool among a handful of settings.
+ * values): radius difference in units of 0.25 Å, squared; 6 for monatomic
+ * against polyatomic (a halide carries a covalent lattice excess with Ag⁺ or
+ * Tl⁺ that an oxoanion lacks, so AgBr is a poor stand-in for AgNO₃); 3 for a
+ * cation with a noble-gas core against one without (d-block and
+ * post-transition cations bond more covalently, and the ionic models miss
+ * them by more); 4 for the radius term where an ion has no radius. Charge
+ * comes before all of these: an ion of another charge is farther than any
+ * ion of the same charge (neighbours are ordered by charge first) and its
+ * distance carries a further `charge` term. Chosen by leave-one-out over the
+ * anchor pool among a handful of settings (kind 1, 3, 6, 10).
  */
-export const ION_DISTANCE = { radiusScale: 0.25, charge: 25, kind: 1, core: 3, noRadius: 4 } as const;
+export const ION_DISTANCE = { radiusScale: 0.25, charge: 25, kind: 6, core: 3, noRadius: 4 } as const;
 
 const NOBLE_GAS_Z = new Set([2, 10, 18, 36, 54, 86]);
 
