@@ -26,6 +26,7 @@ import { widenForDisagreement } from './anchoredDisagreement.js';
 import { hypotheticalHydrate, type HypotheticalHydrate } from './knownHydrates.js';
 import { hydrationText, modelEstimate } from './modelSolution.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
+import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 export interface DissolveOptions {
   /**
@@ -125,9 +126,9 @@ function ruleEstimate(salt: Salt, hide: boolean, dataset: Dataset): Estimate | u
 }
 
 /** θ and the scatter of the difference rule for the salt's family, its own pairs left out when its values are hidden. */
-function familyRule(salt: Salt, hide: boolean, dataset: Dataset): { scatter: number; theta: number; family: string } {
+function familyRule(salt: Salt, hide: boolean, dataset: Dataset): { scatter: number; theta: number; thetaU: number; family: string } {
   const c = hydrateRuleScatter({ family: hydrateRuleFamily(salt), ...(hide ? { excludeFormula: salt.formula } : {}) }, dataset);
-  return { scatter: c.perSqrtWater, theta: c.theta, family: c.family === 'all' ? 'all families' : `${c.family} salts` };
+  return { scatter: c.perSqrtWater, theta: c.theta, thetaU: c.thetaU, family: c.family === 'all' ? `all families (too few ${hydrateRuleFamily(salt)} pairs; θ uncertain by ${fixedDecimal(c.thetaU, 1)} kJ/mol per water)` : `${c.family} salts` };
 }
 
 /**

@@ -71,6 +71,13 @@ export interface HydrateRuleScatter {
   theta: number;
   /** The family calibrated (`2:1` …), `all` where the family had too few pairs, `all (θ of Jenkins and Glasser)` without a family. */
   family: string;
+  /**
+   * Standard uncertainty of θ itself, kJ/mol per water: 0 where the family
+   * fits its own θ; where it falls back to every pair, the spread of the θ
+   * of the families that do fit their own, since its own θ is not known.
+   * It enters linearly in Δn, being the same for every water.
+   */
+  thetaU: number;
 }
 
 /** What {@link hydrateFromParent} needs besides the parent's enthalpy of solution. */
@@ -89,6 +96,8 @@ export interface HydrateRuleInput {
   theta?: number;
   /** The family θ and the scatter were calibrated on, for the note. */
   family?: string;
+  /** Standard uncertainty of θ, kJ/mol per water ({@link HydrateRuleScatter.thetaU}); default 0. */
+  thetaU?: number;
 }
 
 /** Anhydrous formula → every form (canonical formula, waters, the parsed salt) that the formation and solution tables hold, fewest waters first. */
@@ -157,7 +166,8 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
  * step per water), and the scatter is measured about it and mixed with the
  * pooled scatter (about the θ fitted to every pair) as {@link FAMILY_PRIOR_PAIRS}
  * pseudo-pairs, s² = (N_f·s_f² + 4·s²_all)/(N_f + 4); a family with fewer
- * than {@link MIN_FAMILY_PAIRS} pairs uses every pair and the pooled fit instead. `excludeFormula`
+ * than {@link MIN_FAMILY_PAIRS} pairs uses every pair and the pooled fit instead,
+ * and its θ is then uncertain by the spread of the fitted family θs (`thetaU`). `excludeFormula`
  * leaves out the pairs involving one salt (its own values are hidden in
  * leave-one-out), so neither θ nor the scatter sees them.
  *
@@ -180,7 +190,7 @@ export function hydrateRuleScatter(options: { excludeFormula?: string; family?: 
   options = optionsArgument(options);
   const pairs = rulePairs(dataset).filter((p) => p.hydrate !== options.excludeFormula && p.parent !== options.excludeFormula);
   const rms = (list: readonly RulePair[], theta: number): number => Math.sqrt(list.reduce((s, p) => s + (p.waters * (p.theta - theta)) ** 2 / p.waters, 0) / Math.max(1, list.length));
-  if (options.family === undefined) return { perSqrtWater: rms(pairs, WATER_OF_CRYSTALLIZATION_ENTHALPY), pairs: pairs.length, theta: WATER_OF_CRYSTALLIZATION_ENTHALPY, family: 'all (θ of Jenkins and Glasser)' };
+  if (options.family === undefined) return { perSqrtWater: rms(pairs, WATER_OF_CRYSTALLIZATION_ENTHALPY), pairs: pairs.length, theta: WATER_OF_CRYSTALLIZATION_ENTHALPY, family: 'all (θ of Jenkins and Glasser)', thetaU: 0 };
   const fitted = (list: readonly RulePair[]): number => {
     const waters = list.reduce((s, p) => s + p.waters, 0);
     return waters > 0 ? list.reduce((s, p) => s + p.waters * p.theta, 0) / waters : WATER_OF_CRYSTALLIZATION_ENTHALPY;
@@ -188,11 +198,18 @@ export function hydrateRuleScatter(options: { excludeFormula?: string; family?: 
   const pooledTheta = fitted(pairs);
   const pooled = rms(pairs, pooledTheta);
   const own = pairs.filter((p) => p.family === options.family);
-  if (own.length < MIN_FAMILY_PAIRS) return { perSqrtWater: pooled, pairs: pairs.length, theta: pooledTheta, family: 'all' };
+  if (own.length < MIN_FAMILY_PAIRS) {
+    const families = new Map<string, RulePair[]>();
+    for (const p of pairs) families.set(p.family, [...(families.get(p.family) ?? []), p]);
+    const thetas = [...families.values()].filter((l) => l.length >= MIN_FAMILY_PAIRS).map(fitted);
+    const mean = thetas.reduce((s, t) => s + t, 0) / Math.max(1, thetas.length);
+    const thetaU = thetas.length > 1 ? Math.sqrt(thetas.reduce((s, t) => s + (t - mean) ** 2, 0) / (thetas.length - 1)) : 0;
+    return { perSqrtWater: pooled, pairs: pairs.length, theta: pooledTheta, family: 'all', thetaU };
+  }
   const theta = fitted(own);
   // A few pairs say little about their spread: theirs is mixed with the pooled one as FAMILY_PRIOR_PAIRS pseudo-pairs.
   const perSqrtWater = Math.sqrt((own.length * rms(own, theta) ** 2 + FAMILY_PRIOR_PAIRS * pooled ** 2) / (own.length + FAMILY_PRIOR_PAIRS));
-  return { perSqrtWater, pairs: own.length, theta, family: options.family };
+  return { perSqrtWater, pairs: own.length, theta, family: options.family, thetaU: 0 };
 }
 
 /**
@@ -204,8 +221,9 @@ export function hydrateRuleScatter(options: { excludeFormula?: string; family?: 
  *
  * with θ = `rule.theta` (a family's θ from {@link hydrateRuleScatter}),
  * else {@link WATER_OF_CRYSTALLIZATION_ENTHALPY}. The standard
- * uncertainty adds √|n − n′| times the rule's scatter (see
- * {@link hydrateRuleScatter}) to the parent's in quadrature. A measured or
+ * uncertainty adds u_rule = √(|n − n′|·s² + ((n − n′)·u_θ)²) to the
+ * parent's in quadrature: s the rule's scatter, u_θ the uncertainty of θ
+ * itself (`rule.thetaU`, default 0; see {@link hydrateRuleScatter}). A measured or
  * cycle parent gives the `anchored` basis (a related salt's value plus an
  * empirical difference, like the four-salt anchors); an anchored or model
  * parent keeps its basis.
@@ -229,11 +247,13 @@ export function hydrateFromParent(parent: Estimate, rule: HydrateRuleInput): Est
   numberArgument(rule.waterFormation, 'rule.waterFormation', 'ΔfH°(H₂O, l) in kJ/mol', { min: -1e4, max: 1e4 });
   numberArgument(rule.scatter, 'rule.scatter', 'the scatter of the rule in kJ/mol', { min: 0, max: 1e4 });
   if (rule.theta !== undefined) numberArgument(rule.theta, 'rule.theta', 'θ in kJ/mol per water of crystallization', { min: -1e4, max: 0 });
+  if (rule.thetaU !== undefined) numberArgument(rule.thetaU, 'rule.thetaU', 'the standard uncertainty of θ in kJ/mol', { min: 0, max: 1e4 });
   const { parentFormula, parentWater, water, waterFormation, scatter } = rule;
   const theta = rule.theta ?? WATER_OF_CRYSTALLIZATION_ENTHALPY;
   const dn = water - parentWater;
   const shift = dn * (waterFormation - theta);
-  const uRule = Math.sqrt(Math.abs(dn)) * scatter;
+  const thetaU = rule.thetaU ?? 0;
+  const uRule = Math.sqrt(Math.abs(dn) * scatter ** 2 + (dn * thetaU) ** 2);
   const shifted = widenEstimate(parent, uRule, shift);
   return makeEstimate({
     ...shifted,
