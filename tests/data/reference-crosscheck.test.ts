@@ -109,3 +109,21 @@ describe('the known problems the comparison found stay fixed', () => {
     for (const c of densities) expect(c.agree, describeCheck(c)).toBe(true);
   });
 });
+
+describe('docs/provenance.md', () => {
+  // Written by `npm run provenance`; stale when a table gains, loses or re-marks records.
+  const report = readFileSync(join(root, 'docs', 'provenance.md'), 'utf8');
+
+  it('counts, per table, the records, the checked ones and those from memory as the tables now hold them', () => {
+    const stale: string[] = [];
+    for (const file of readdirSync(join(root, 'data')).filter((f) => f.endsWith('.json') && f !== 'sources.json')) {
+      const records: any[] = JSON.parse(readFileSync(join(root, 'data', file), 'utf8')).records;
+      const checked = records.filter((r) => typeof r.checkedAgainst === 'string').length;
+      const memory = records.filter((r) => r.fromMemory === true).length;
+      const row = report.split('\n').find((line) => line.startsWith(`| ${file} |`));
+      const cells = row?.split('|').map((c) => c.trim());
+      if (!cells || Number(cells[2]) !== records.length || !cells[3]!.startsWith(`${checked} (`) || Number(cells[5]) !== memory) stale.push(file);
+    }
+    expect(stale, 'run npm run provenance').toEqual([]);
+  });
+});
