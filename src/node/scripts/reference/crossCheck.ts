@@ -76,6 +76,7 @@ const QUANTITY: Record<string, string> = {
   bondAtct: '2·atom − molecule',
   ionCompositionCrc: 'composition and charge',
   ionCompositionShannon: 'composition and charge',
+  moleculeCompositionCrc: 'composition',
   hydrationCycle: 'cycle: aqueous ion, proton, gaseous ion',
 };
 
@@ -213,6 +214,12 @@ export const FAMILIES: Record<string, Family> = {
     reference: 'chemicals-crc-aqueous-ions',
     why: 'an ion\'s composition and charge exist as an aqueous ion of the CRC table: the elemental formula and the charge must match exactly.',
   },
+  moleculeCompositionCrc: {
+    name: 'moleculeCompositionCrc',
+    table: 'ions.json',
+    reference: 'chemicals-crc-thermo',
+    why: 'a non-electrolyte solute\'s composition is that of the crystalline substance of the CRC table with the name it is filed under (urea, not ammonium cyanate): the elemental formula must match exactly.',
+  },
   ionCompositionShannon: {
     name: 'ionCompositionShannon',
     table: 'ions.json',
@@ -279,7 +286,7 @@ const REQUIRED_LABEL: Record<string, RegExp> = {
   C5H12O5: /xylitol/i,
   C4H10O4: /erythritol/i,
   ZnS: /sphalerite|^zinc sulfide$/i,
-  Al2O3: /corundum|^aluminum oxide$/i,
+  Al2O3: /corundum|^aluminum oxide( \(α\))?$/i,
 };
 
 function pick<T extends { label?: string }>(candidates: T[], key: string): T | undefined {
@@ -404,8 +411,12 @@ export function crossChecks(tables: Record<string, any>, refs: Record<string, Re
   };
   const shannonIons = new Set(refs['pymatgen-shannon-radii']!.records.map((r) => `${r.element}|${r.charge}`));
   recs('ions.json').forEach((r, i) => {
-    if (r.kind === 'non-electrolyte') return;
     const key = ionKey(r.composition, r.charge);
+    if (r.kind === 'non-electrolyte') {
+      const molecule = pick((crcThermo.get(`${hill(r.composition)}|cr`) ?? []).filter((x) => x.dfH != null), hill(r.composition));
+      if (molecule) add('moleculeCompositionCrc', i, r, r.id, 0, 0, 0, `${molecule.cas} ${molecule.label}`);
+      return;
+    }
     const inAq = aq.get(key);
     if (inAq) add('ionCompositionCrc', i, r, r.id, 0, 0, 0, inAq[0].formula);
     else if (r.kind === 'monatomic' && shannonIons.has(key)) add('ionCompositionShannon', i, r, r.id, 0, 0, 0, `${key.replace('|', ' ')} (Shannon)`);

@@ -81,6 +81,17 @@ def hill(comp: dict[str, float]) -> str:
     return "".join(term(k) for k in keys)
 
 
+# Rows whose CAS number the identifier table lacks or gives as an ion (lithium
+# oxide as HLi2O+): the formula their label names.
+LABEL_FORMULAS = {
+    "Lithium oxide": "Li2O",
+    "Titanium(IV) oxide (rutile)": "TiO2",
+    "Titanium(IV) oxide (anatase)": "TiO2",
+    "Titanium(IV) oxide (brookite)": "TiO2",
+    "Barium titanate [BaTiO3]": "BaTiO3",
+    "Lithium bromate": "LiBrO3",
+}
+
 HYDRATE_NUMBERS = {"mono": 1, "di": 2, "tri": 3, "tetra": 4, "penta": 5, "hexa": 6, "hepta": 7, "octa": 8, "nona": 9, "deca": 10, "dodeca": 12}
 
 # Carbon compounds kept: carbonates, acetates, cyanides and the like (≤ 2 C), and
@@ -132,9 +143,12 @@ def chemicals_files() -> None:
     base = os.path.dirname(chemicals.__file__)
     pkg = {"package": "chemicals (PyPI)", "version": version, "licence": "MIT"}
 
-    def formula_of(cas: str) -> str | None:
+    def formula_of(cas: str, label: str = "") -> str | None:
         hit = pubchem_db.search_CAS(cas)
-        return hit.formula if hit else None
+        formula = hit.formula if hit else None
+        if (not formula or re.search(r"[+-]", formula)) and label.strip() in LABEL_FORMULAS:
+            formula = LABEL_FORMULAS[label.strip()]
+        return formula
 
     def with_hydrates(rows: list[dict], label_key: str = "Chemical") -> dict[str, str]:
         """CAS → formula. A hydrate ('… hexahydrate') takes the formula of the
@@ -149,7 +163,7 @@ def chemicals_files() -> None:
             if m:
                 hydrates.append((r["CAS"], m))
                 continue
-            f = formula_of(r["CAS"])
+            f = formula_of(r["CAS"], r[label_key])
             if f and not re.search(r"[+-]", f):
                 by_cas[r["CAS"]] = f
                 by_label[r[label_key].strip().lower()] = f
