@@ -21,6 +21,7 @@ import json
 import os
 import re
 import sys
+from datetime import date
 from importlib import metadata
 
 ROOT = os.path.abspath(os.path.join(os.path.dirname(__file__), "..", "..", "..", ".."))
@@ -410,7 +411,10 @@ def llnl_file() -> None:
             continue
         i += 1
     write("phreeqc-llnl-phases.json", {"package": "PHREEQC 3 database llnl.dat (USGS)", "version": "usgs-coupled/phreeqc3 commit 8176af0c5e28ac469227b932f89fac3a29d5909c, database/llnl.dat",
-          "licence": "public domain (USGS notice, NOTICE.TXT beside /work/shared/reference/phreeqc/llnl.dat)", "file": "database/llnl.dat, PHASES block",
+          "licence": "USGS user rights notice (public domain): tests/reference/phreeqc-NOTICE.TXT, copied unchanged from doc/NOTICE.TXT of the same commit",
+          "file": "database/llnl.dat, PHASES block",
+          "acknowledgement": "PHREEQC and its databases are by D. L. Parkhurst and C. A. J. Appelo, U.S. Geological Survey; llnl.dat after the Lawrence Livermore National Laboratory thermodynamic database",
+          "modifications": f"Not the original distribution (which is the repository and commit named in version). Extracted on {date.today().isoformat()} by the ionheat project with src/node/scripts/reference/extract_reference.py: only each phase's name, reaction, log_k, -delta_H and enthalpy-of-formation comment, kcal/mol converted to kJ/mol (x 4.184), zeros read as missing.",
           "units": {"logK": "log10 K at 25 °C", "dH": "kJ/mol, enthalpy of the dissolution reaction at 25 °C (kcal converted × 4.184)", "dfH": "kJ/mol, enthalpy of formation of the solid (kcal converted × 4.184)"}}, out)
 
 
