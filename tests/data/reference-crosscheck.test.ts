@@ -17,7 +17,7 @@ const byFamily = (name: string): Check[] => checks.filter((c) => c.family === na
 const describeCheck = (c: Check) => `${c.table} ${c.subject}: ours ${c.ours}, ${c.reference} ${c.ref} ± ${c.tolerance.toFixed(3)} (${c.refLabel})`;
 
 describe('reference copies under tests/reference', () => {
-  const files = readdirSync(join(root, 'tests', 'reference')).filter((f) => f.startsWith('chemicals-') || f.startsWith('pymatgen-') || f.startsWith('phreeqc-'));
+  const files = readdirSync(join(root, 'tests', 'reference')).filter((f) => f.endsWith('.json') && /^(chemicals|pymatgen|phreeqc)-/.test(f));
 
   it.each(files)('%s names its package, version, licence and file, and holds only numbers and identifiers', (file) => {
     const ref = JSON.parse(readFileSync(join(root, 'tests', 'reference', file), 'utf8'));
@@ -125,5 +125,16 @@ describe('docs/provenance.md', () => {
       if (!cells || Number(cells[2]) !== records.length || !cells[3]!.startsWith(`${checked} (`) || Number(cells[5]) !== memory) stale.push(file);
     }
     expect(stale, 'run npm run provenance').toEqual([]);
+  });
+});
+
+describe('the llnl.dat extract', () => {
+  // The USGS notice asks that copies and modifications carry it and say what was changed.
+  it('travels with the USGS notice and says what was taken and changed', () => {
+    const notice = readFileSync(join(root, 'tests', 'reference', 'phreeqc-NOTICE.TXT'), 'utf8');
+    expect(notice).toMatch(/User Rights Notice/);
+    const llnl = refs['phreeqc-llnl-phases']!;
+    expect(llnl.licence).toMatch(/phreeqc-NOTICE\.TXT/);
+    expect((llnl as unknown as { modifications: string }).modifications).toMatch(/Not the original distribution/);
   });
 });
