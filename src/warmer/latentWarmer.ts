@@ -259,10 +259,15 @@ export function latentWarmer(fill: WarmerFill, options: WarmerOptions = {}, data
   ];
   const totalG = given.massG + given.extraWaterG;
   const outputs = (w: WarmerRun) => [w.plateauC, w.crystalAtOnceG / given.massG, w.heatReleasedJ / 1000, w.plateauDurationS, w.rechargeC ?? Number.NaN];
+  // A side whose melting point falls to the start temperature leaves no supercooled fill: use the other side alone.
+  const supercooled = (v: DataValues) => given.startC < fillConstants(kernelFill(melt, given, v, water.value)).liquidusC - 0.05;
+  const centre = outputs(base);
   const sensitivity = steps.map(([key, u]) => {
-    const up = outputs(run({ ...nominal, [key]: nominal[key] + u }));
-    const down = outputs(run({ ...nominal, [key]: nominal[key] - u }));
-    return up.map((x, i) => (x - down[i]!) / 2);
+    const upValues = { ...nominal, [key]: nominal[key] + u };
+    const downValues = { ...nominal, [key]: nominal[key] - u };
+    const up = supercooled(upValues) ? outputs(run(upValues)) : undefined;
+    const down = supercooled(downValues) ? outputs(run(downValues)) : undefined;
+    return centre.map((x, i) => (up && down ? (up[i]! - down[i]!) / 2 : up ? up[i]! - x : down ? x - down[i]! : 0));
   });
   const uOf = (i: number, floor: number) => Math.max(floor, Math.hypot(...sensitivity.map((s) => (Number.isFinite(s[i]!) ? s[i]! : 0))));
   const sources = [r.source, r.meltingPoint.source, r.latentHeat.source, r.solidHeatCapacity.source, r.meltHeatCapacity.source, ...(usesSolubility && melt.solubilitySource ? [melt.solubilitySource] : []), ...(given.extraWaterG > 0 ? [water.source] : [])];
@@ -271,7 +276,7 @@ export function latentWarmer(fill: WarmerFill, options: WarmerOptions = {}, data
     const high = Math.min(bounds.max ?? Infinity, value + COVERAGE_95 * u);
     return makeEstimate({ quantity, value, u, low: Math.min(low, value), high: Math.max(high, value), unit, basis: 'model', method: 'latent-warmer', sources });
   };
-  const out = outputs(base);
+  const out = centre;
   const heatU = uOf(2, RESOLUTION.heat * out[2]!);
   const plateau = estimate('plateau temperature after triggering', out[0]!, uOf(0, RESOLUTION.temperature), '°C');
   const crystallised = estimate('fraction of the hydrate crystallised at once', out[1]!, uOf(1, RESOLUTION.fraction), '1', { min: 0, max: 1 });
