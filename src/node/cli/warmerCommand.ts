@@ -79,12 +79,13 @@ function textReport(w: WarmerResult): string {
   const f = w.fill;
   const out: string[] = [];
   out.push(`Warmer: ${f.massG} g ${f.formula}${f.extraWaterG > 0 ? ` + ${f.extraWaterG} g extra water` : ''}, supercooled at ${f.startC} °C${f.containerJPerK > 0 ? `, container ${f.containerJPerK} J/K` : ''}`);
-  out.push(`melting ${w.melt.melting} at ${w.melt.meltingPoint.value} °C, latent heat ${w.melt.latentHeat.value} J/g; liquidus of this fill ${r(w.liquidusC, 2)} °C\n`);
+  const melts = { congruent: 'congruently', 'semi-congruent': 'semi-congruently', incongruent: 'incongruently' }[w.melt.melting];
+  out.push(`melts ${melts} at ${w.melt.meltingPoint.value} °C, latent heat ${w.melt.latentHeat.value} J/g; liquidus of this fill ${r(w.liquidusC, 2)} °C\n`);
   out.push(`plateau              ${line(w.plateau)}`);
   out.push(`crystallised at once ${line({ ...w.crystallisedAtPlateau, unit: 'of the hydrate' })}`);
   out.push(`heat released        ${line(w.heatReleased)}`);
   out.push(`heat per gram        ${line(w.heatPerGram)}`);
-  out.push(`plateau duration     ${line(w.plateauDuration)}`);
+  out.push(`plateau duration     ${line(w.plateauDuration)}, until all crystallised or 1 K below the plateau`);
   out.push(`recharge above       ${w.rechargeTemperature ? line(w.rechargeTemperature) : 'not reachable by heating in water (see notes)'}`);
   out.push(`above 44 °C for about ${Math.round(w.secondsAboveBurnThreshold / 60)} min; energy balance closes to ${Math.abs(w.energy.course.residualJ).toExponential(1)} J`);
   out.push('\nCautions:');
