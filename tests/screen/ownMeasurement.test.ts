@@ -36,8 +36,14 @@ describe('own measured enthalpy: the cheap path equals the merged dataset', () =
       type E = { basis: string; method: string; value: number; u: number };
       const plain = JSON.parse(JSON.stringify(dissolve(salt))).estimates.filter((e: E) => e.basis !== 'measured');
       expect(row.estimates.slice(1)).toEqual(plain);
-      const key = (e: E) => `${e.basis}/${e.method}/${e.value.toFixed(6)}`;
+      // The same bases and methods. Values agree to a small part of their uncertainty: the anchored estimates' bracket
+      // scale and floors are fitted over every measured salt, so a merged dataset moves them a little with the user's value.
+      const key = (e: E) => `${e.basis}/${e.method}`;
       expect(row.estimates.map(key).sort()).toEqual(reference.estimates.map(key).sort());
+      for (const e of reference.estimates as E[]) {
+        const mine = (row.estimates as E[]).find((r) => key(r) === key(e))!;
+        expect(Math.abs(mine.value - e.value), key(e)).toBeLessThanOrEqual(e.basis === 'anchored' ? 0.05 * e.u : 1e-6);
+      }
       expect(row.notes.slice(0, reference.notes.length)).toEqual(reference.notes);
     });
   }
