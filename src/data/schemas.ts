@@ -26,6 +26,8 @@ const provenance = {
   source: z.string().min(1).max(80),
   /** True where the number was typed from memory and not checked against a copy of the source. */
   fromMemory: z.boolean(),
+  /** The open copy the value was matched with, e.g. `tests/reference/chemicals-crc-thermo.json` (see docs/provenance.md); absent where none was. */
+  checkedAgainst: z.string().min(1).max(300).optional(),
   note: z.string().max(2000).optional(),
 };
 
