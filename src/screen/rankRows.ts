@@ -8,12 +8,15 @@ export function isRankable(row: ScreenRow): row is ScreenRow & { objective: NonN
   return row.status === 'computed' && row.objective !== undefined && row.suitability !== undefined;
 }
 
+/** What ranking reads of a row (a table writer may keep only this and its cells). */
+export type RankKey = Pick<ScreenRow, 'line' | 'suitability'> & { objective?: { value: number } | undefined };
+
 /**
  * Orders two rankable rows: salts that suit the direction first, then those
  * whose verdict is undetermined, then those that work the other way; within
  * each group by the objective value, best first; ties by input line.
  */
-export function compareRanked(a: ScreenRow, b: ScreenRow, objective: ObjectiveName, direction: Direction): number {
+export function compareRanked(a: RankKey, b: RankKey, objective: ObjectiveName, direction: Direction): number {
   const sign = higherIsBetter(objective, direction) ? -1 : 1;
   return GROUP[a.suitability!] - GROUP[b.suitability!] || sign * (a.objective!.value - b.objective!.value) || a.line - b.line;
 }
