@@ -137,7 +137,7 @@ describe('a full disk', () => {
       const r = await new Promise<{ status: number | null; err: string }>((resolve) => {
         const child = spawn(process.execPath, [CLI, 'screen', 'rows.csv', '--format', 'csv'], { cwd: dir, stdio: ['ignore', outFd, 'pipe'] });
         let err = '';
-        child.stderr.setEncoding('utf8').on('data', (t: string) => (err += t));
+        child.stderr!.setEncoding('utf8').on('data', (t: string) => (err += t));
         child.on('close', (status) => resolve({ status, err }));
       });
       expect(r.status).toBe(2);
