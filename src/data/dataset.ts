@@ -109,7 +109,7 @@ export class Dataset {
 
   /**
    * A cache kept for the dataset's life under `key`, holding at most `limit`
-   * entries ({@link BoundedCache}): per-salt and per-formula results go here,
+   * entries (a `BoundedCache`): per-salt and per-formula results go here,
    * so that memory stays flat however many distinct salts a run brings.
    */
   cache<K, V>(key: string, limit: number = DATASET_CACHE_LIMIT): BoundedCache<K, V> {

@@ -206,9 +206,9 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  * hot.fill.finalTemperature.value; // ≈ 70.3 °C
  * ```
  */
-export function createScreener(given: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
-  if (given === null || typeof given !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
-  const options = ownOptions(given);
+export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
+  if (options === null || typeof options !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
+  options = ownOptions(options);
   const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
   const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
   if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: ${describeValue(options.objective)} is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });

@@ -61,8 +61,10 @@ function takeDataFiles(argv: readonly string[]): { files: string[]; rest: string
  * Runs the command line with these arguments (without `node` and the script).
  *
  * @param argv - the arguments, e.g. `['dissolve', 'KNO3']`; `--data <file>` may appear anywhere and repeat
- * @param io - where to read and write (default: the process's streams); tests and embedding tools pass buffers
- * @returns the exit status: 0 success, 1 a specification failed, 2 bad input or arguments, 3 a defect
+ * @param io - where to read and write (default: the process's streams, attached for this run only: no listener is
+ *   left on them afterwards); tests and embedding tools pass buffers
+ * @returns the exit status: 0 success, 1 a specification failed, 2 bad input or arguments (or output that could not
+ *   be written, unless a specification failed), 3 a defect. A reader that closes the pipe early does not change it.
  * @see README.md, "The command line", for a tour; `ionheat help <command>` for each command's usage.
  *
  * @example
