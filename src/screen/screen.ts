@@ -58,7 +58,13 @@ export interface ScreenResult {
  * ```
  */
 export function screen(candidates: Iterable<CandidateLike>, options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): ScreenResult {
-  if (candidates === null || typeof candidates !== 'object' || typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] !== 'function') {
+  let iterable: boolean;
+  try {
+    iterable = candidates !== null && typeof candidates === 'object' && typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] === 'function';
+  } catch (e) {
+    throw candidateListError(e);
+  }
+  if (!iterable) {
     throw new IonheatError('INVALID_ARGUMENT', `the candidates of a screen are a list of formulas or candidate objects, got ${describeValue(candidates)}`, { field: 'candidates' });
   }
   const screener = createScreener(options, dataset);

@@ -38,7 +38,12 @@ export async function* screenStream(
   options: ScreenOptions = {},
   dataset: Dataset = builtinDataset(),
 ): AsyncGenerator<ScreenRow, ScreenSummary, undefined> {
-  const iterable = candidates !== null && typeof candidates === 'object' && (typeof (candidates as AsyncIterable<CandidateLike>)[Symbol.asyncIterator] === 'function' || typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] === 'function');
+  let iterable: boolean;
+  try {
+    iterable = candidates !== null && typeof candidates === 'object' && (typeof (candidates as AsyncIterable<CandidateLike>)[Symbol.asyncIterator] === 'function' || typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] === 'function');
+  } catch (e) {
+    throw candidateListError(e);
+  }
   if (!iterable) throw new IonheatError('INVALID_ARGUMENT', `the candidates of a screen are a list or stream of formulas or candidate objects, got ${describeValue(candidates)}`, { field: 'candidates' });
   const screener = createScreener(options, dataset);
   const asyncSource = typeof (candidates as AsyncIterable<CandidateLike>)[Symbol.asyncIterator] === 'function';

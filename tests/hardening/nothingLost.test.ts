@@ -203,6 +203,9 @@ describe('user-supplied objects: every throw becomes an IonheatError, one bad ca
       },
     };
     expect(() => screen(list)).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT', message: 'the list of candidates could not be read: list broke' }));
+    const { proxy: revokedList, revoke: revokeList } = Proxy.revocable(['KCl'], {});
+    revokeList();
+    expect(() => screen(revokedList)).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT', field: 'candidates' }));
     const rows: string[] = [];
     await expect(
       (async () => {
