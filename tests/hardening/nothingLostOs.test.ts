@@ -59,9 +59,34 @@ describe('a reader that pauses', () => {
   }, 30_000);
 });
 
+describe('signals', () => {
+  it('SIGINT during a screen: the rows computed are written whole, the summary and the reason follow, status 130', async () => {
+    const child = spawn(process.execPath, [CLI, 'screen', 'rows.csv', '--format', 'csv'], { cwd: dir, stdio: ['ignore', 'pipe', 'pipe'] });
+    let err = '';
+    child.stderr.setEncoding('utf8').on('data', (t: string) => (err += t));
+    let out = '';
+    // Read nothing until the first output is waiting: the command is then held by the pipe, mid-screen, when the signal comes.
+    child.stdout.pause();
+    child.stdout.once('readable', () => {
+      child.kill('SIGINT');
+      child.stdout.setEncoding('utf8').on('data', (t: string) => (out += t));
+      child.stdout.resume();
+    });
+    const status = await new Promise<number | null>((resolve) => child.on('close', resolve));
+    expect(status).toBe(130);
+    expect(err).toMatch(/^screen: (\d+) rows read, \1 computed, 0 failed\nionheat: stopped by SIGINT after \d+ rows; the rows before it were written\n$/);
+    const lines = out.split('\n');
+    expect(lines.pop()).toBe(''); // ends with a whole record
+    expect(lines.length - 1).toBeGreaterThan(0);
+    expect(lines.length - 1).toBeLessThan(2500);
+    expect(lines.length - 1).toBe(Number(/^screen: (\d+)/.exec(err)![1]));
+  }, 30_000);
+});
+
 describe('process-wide listeners', () => {
   it('runCli on the process streams leaves no listener behind', async () => {
-    const before = [process.stdout.listenerCount('error'), process.stderr.listenerCount('error'), process.stdout.listenerCount('drain')];
+    const counts = () => [process.stdout.listenerCount('error'), process.stderr.listenerCount('error'), process.stdout.listenerCount('drain'), process.listenerCount('SIGINT'), process.listenerCount('SIGTERM')];
+    const before = counts();
     const write = process.stdout.write;
     let printed = '';
     // Keep the version line out of the test report; the stream and its listeners are the real ones.
@@ -77,7 +102,7 @@ describe('process-wide listeners', () => {
       process.stdout.write = write;
     }
     expect(printed).toMatch(/^\d+\.\d+\.\d+\n$/);
-    expect([process.stdout.listenerCount('error'), process.stderr.listenerCount('error'), process.stdout.listenerCount('drain')]).toEqual(before);
+    expect(counts()).toEqual(before);
   });
 });
 

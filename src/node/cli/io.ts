@@ -23,6 +23,12 @@ export interface CliIO {
    * tells the truth.
    */
   stdoutGone?(): string | undefined;
+  /**
+   * The signal (`SIGINT`, `SIGTERM`, `SIGHUP`) that asked the run to stop, or
+   * undefined. A long command stops reading, writes what it has computed and
+   * ends with 128 + the signal's number; a second signal ends the process at once.
+   */
+  interrupted?(): NodeJS.Signals | undefined;
 }
 
 /** True for the errors a stream gives when its reader has gone away. */
@@ -100,7 +106,11 @@ export function outputChannel(stream: NodeJS.WritableStream): OutputChannel {
 export interface ProcessIO extends CliIO {
   out: OutputChannel;
   err: OutputChannel;
+  /** Removes every listener the run put on the process. */
+  release(): void;
 }
+
+const STOP_SIGNALS: readonly NodeJS.Signals[] = ['SIGINT', 'SIGTERM', 'SIGHUP'];
 
 /**
  * The process's own streams for one run. A reader that stops early
@@ -112,9 +122,24 @@ export interface ProcessIO extends CliIO {
 export function processIO(): ProcessIO {
   const out = outputChannel(process.stdout);
   const err = outputChannel(process.stderr);
+  let interrupted: NodeJS.Signals | undefined;
+  // The first signal asks the run to stop and write what it has; the listener goes, so a second one acts at once.
+  const onSignal = (signal: NodeJS.Signals) => {
+    interrupted = signal;
+    for (const s of STOP_SIGNALS) process.removeListener(s, onSignal);
+    // A read of standard input that waits for a terminal would never end: end it.
+    process.stdin.destroy();
+  };
+  for (const s of STOP_SIGNALS) process.on(s, onSignal);
   return {
     out,
     err,
+    interrupted: () => interrupted,
+    release() {
+      out.release();
+      err.release();
+      for (const s of STOP_SIGNALS) process.removeListener(s, onSignal);
+    },
     stdout: (t) => out.write(t),
     stderr: (t) => void err.write(t),
     stdoutGone: () => out.gone(),

@@ -89,8 +89,7 @@ export async function runCli(argv: readonly string[], io?: CliIO): Promise<numbe
   const failure = own.out.failure();
   if (failure) own.stderr(`ionheat: cannot write the output: ${failure.code ?? failure.message}\n`);
   await own.err.flush();
-  own.out.release();
-  own.err.release();
+  own.release();
   return failure && status !== 1 ? 2 : status;
 }
 

@@ -5,6 +5,7 @@
  *
  * @module
  */
+import { constants as osConstants } from 'node:os';
 import { Readable } from 'node:stream';
 import { IonheatError } from '../../error.js';
 import { intervalChart } from '../../render/intervalChart.js';
@@ -53,6 +54,8 @@ Every input row gives one output row, in input order, with its line number; rows
 cannot be computed (or read: an unclosed quote, an over-long record) carry their error.
 Output waits for a slow reader; a reader that stops early (| head) stops the output but
 not the screen. A summary line goes to standard error once the output is written.
+Ctrl-C (SIGINT, or SIGTERM, SIGHUP) stops reading and writes the rows computed so far
+(status 128 + the signal's number, 130 for Ctrl-C); a second one ends at once.
 Exit status: 0 all rows computed and the spec holds for all; 1 the spec fails for
 some row; 2 unusable arguments, an unreadable file, or a row that could not be computed
 (a chart that cannot be written gives 2 unless the spec failed, which gives 1).`;
@@ -141,6 +144,8 @@ export const screenCommand: Command = {
       const text = pending;
       pending = '';
       if (text !== '' && !gone()) await io.stdout(text);
+      // A turn of the event loop, so that a signal (Ctrl-C) is seen even while every write completes at once.
+      if (io.interrupted) await new Promise<void>((resolve) => setImmediate(resolve));
     };
     let best: ScreenRow[] = [];
     const keepForChart = (row: ScreenRow) => {
@@ -154,6 +159,7 @@ export const screenCommand: Command = {
     let fatal: unknown;
     try {
       for await (const batch of records as AsyncIterable<InputRecord[]>) {
+        if (io.interrupted?.()) break;
         for (const record of batch) {
           if (record.kind === 'blank') {
             screener.blankLine();
@@ -167,7 +173,10 @@ export const screenCommand: Command = {
             else table!.add(row);
           }
           if (chartTarget !== undefined) keepForChart(row);
-          if (pending.length >= FLUSH_AT) await flush();
+          if (pending.length >= FLUSH_AT) {
+            await flush();
+            if (io.interrupted?.()) break;
+          }
           count++;
           if ((count & 255) === 0) {
             const p = progressOf();
@@ -182,6 +191,8 @@ export const screenCommand: Command = {
     } finally {
       progress.done();
     }
+    const signal = io.interrupted?.();
+    if (signal !== undefined && fatal === undefined) fatal = new IonheatError('INVALID_ARGUMENT', `stopped by ${signal} after ${count} row${count === 1 ? '' : 's'}`);
     const summary = screener.summary();
     startWriter();
     if (writer) pending += writer.end(summary);
@@ -210,7 +221,7 @@ export const screenCommand: Command = {
     io.stderr(`${summaryLine(summary, settings.spec !== null)}${stopped ? `; output stopped early (${stopped})` : ''}\n`);
     if (fatal !== undefined) {
       io.stderr(`ionheat: ${escapeControls(fatal instanceof Error ? fatal.message : String(fatal))}; the rows before it were written\n`);
-      return 2;
+      return signal !== undefined ? 128 + (osConstants.signals[signal] ?? 0) : 2;
     }
     if (chartFailure) io.stderr(`ionheat: ${escapeControls(chartFailure.message)}\n`);
     if (summary.failed > 0) return 2;
