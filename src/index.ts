@@ -23,6 +23,7 @@ export * as constants from './quantity/constants.js';
 
 // Data
 export { Dataset, type Tables, type TableOverrides } from './data/dataset.js';
+export type { BoundedCache } from './data/boundedCache.js';
 export { builtinDataset } from './data/builtin.js';
 export * as schemas from './data/schemas.js';
 export { tableSchemas, type TableName, type TableRecord, type TableFile, type IonRecord, type SourceEntry, type StructureType, type HazardClass, type HazardRecord } from './data/schemas.js';

@@ -179,11 +179,11 @@ const PARSED_CACHE_LIMIT = 4096;
 
 /** {@link parseSalt}, remembered per dataset for texts already read. */
 function parsedFormula(text: string, dataset: Dataset): Salt {
-  const cache = dataset.memo('pack.parsedFormulas', () => new Map<string, Salt>());
+  const cache = dataset.cache<string, Salt>('pack.parsedFormulas', PARSED_CACHE_LIMIT);
   const known = cache.get(text);
   if (known) return known;
   const salt = parseSalt(text, dataset);
-  if (cache.size < PARSED_CACHE_LIMIT) cache.set(text, salt);
+  cache.set(text, salt);
   return salt;
 }
 
