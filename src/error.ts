@@ -22,9 +22,11 @@ export const errorCodes = [
   'MISSING_DATA',
   'NOT_APPLICABLE',
   'INVALID_ARGUMENT',
+  'INVALID_OPTION',
   'INVALID_DATA',
   'INVALID_EXPRESSION',
   'NO_SOLUTION',
+  'SUSPECTED_TYPO',
 ] as const;
 
 export type ErrorCode = (typeof errorCodes)[number];

@@ -6,7 +6,7 @@
  *
  * @module
  */
-import { describeValue } from '../quantity/argumentChecks.js';
+import { describeValue, checkOptionKeys, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { HazardClass, SourceEntry } from '../data/schemas.js';
@@ -98,10 +98,15 @@ type Computed =
   | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; hazards: HazardSummary }
   | { ok: false; salt?: Salt; error: IonheatError };
 
+const SCREEN_OPTIONS = optionNames<ScreenOptions>('the screen', { objective: true, direction: true, spec: true, filters: true, excludeMeasured: true, sources: true, fill: true });
+const FILTER_KEYS = optionNames<ScreenFilters>('the screen filters', { excludeSalts: true, excludeIons: true, excludeHazards: true, minMolarMass: true, maxMolarMass: true });
+const FILL_SPEC_KEYS = optionNames<FillSpec>('a standard fill', { saltMassG: true, waterMassG: true, startC: true });
+
 /** A fill as given, checked: positive masses, a start where water is liquid. */
 function checkFill(fill: FillSpec | string): FillSpec {
   if (typeof fill === 'string') return parseFillSpec(fill);
   if (fill === null || typeof fill !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'fill: a standard fill is { saltMassG, waterMassG, startC } or text such as 40:80@22', { field: 'fill' });
+  checkOptionKeys(fill, FILL_SPEC_KEYS, 'fill');
   const { saltMassG, waterMassG, startC } = fill;
   const ok = (x: unknown): x is number => typeof x === 'number' && Number.isFinite(x);
   if (!ok(saltMassG) || saltMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.saltMassG must be a positive number of grams, got ${describeValue(saltMassG)}`, { field: 'fill.saltMassG' });
@@ -141,6 +146,7 @@ class BoundedMap<K, V> {
 
 function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<string>; ions: Set<string>; hazards: Set<HazardClass> } {
   if (filters === null || typeof filters !== 'object') throw new IonheatError('INVALID_ARGUMENT', `filters must be an object, got ${describeValue(filters)}`, { field: 'filters' });
+  checkOptionKeys(filters, FILTER_KEYS, 'filters');
   for (const k of ['excludeSalts', 'excludeIons', 'excludeHazards'] as const) {
     const v: unknown = filters[k];
     if (v !== undefined && !(Array.isArray(v) && v.every((x) => typeof x === 'string'))) throw new IonheatError('INVALID_ARGUMENT', `${k} must be a list of text when given, got ${describeValue(v)}`, { field: k });
@@ -183,6 +189,7 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  */
 export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
   if (options === null || typeof options !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
+  checkOptionKeys(options, SCREEN_OPTIONS, 'options');
   const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
   const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
   if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: ${describeValue(options.objective)} is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });

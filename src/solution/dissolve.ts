@@ -5,7 +5,7 @@
  * @module
  */
 import { saltArgument } from '../chem/saltArgument.js';
-import { optionsArgument } from '../quantity/argumentChecks.js';
+import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -24,6 +24,8 @@ import { solutionVerdict, type Verdict } from './verdict.js';
 import { anchoredEstimates } from './anchoredSolution.js';
 import { hydrationText, modelEstimate } from './modelSolution.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
+
+const DISSOLVE_OPTIONS = optionNames<DissolveOptions>('dissolve', { excludeMeasured: true, temperatureC: true });
 
 export interface DissolveOptions {
   /**
@@ -337,7 +339,7 @@ export function dissolveUncached(formula: string | Salt, options: DissolveOption
 
 function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset: Dataset, store: ProfileStore): DissolveResult {
   const salt = saltArgument(formula, dataset, 'formula');
-  options = optionsArgument(options);
+  options = optionsArgument(options, DISSOLVE_OPTIONS);
   const hide = options.excludeMeasured === true;
   const celsius = options.temperatureC ?? TABLE_TEMPERATURE_C;
   checkKirchhoffTemperature(celsius);

@@ -30,7 +30,7 @@ describe('ionheat command line basics', () => {
   it.each([
     [['salt', 'NaCl2'], /charges in "NaCl2" do not balance/],
     [['salt'], /missing the formula/],
-    [['salt', 'NaCl', '--colour'], /Unknown option '--colour'/],
+    [['salt', 'NaCl', '--colour'], /unknown option --colour/],
     [['salt', 'Ca(NO3'], /never closed/],
   ])('bad input %j: exit 2, one line, no stack trace', async (args, message) => {
     const r = await run(args);

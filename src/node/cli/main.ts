@@ -8,6 +8,7 @@
 import { builtinDataset } from '../../data/builtin.js';
 import { isIonheatError } from '../../error.js';
 import { loadDataset } from '../loadDataset.js';
+import { didYouMean } from '../../quantity/nearestName.js';
 import type { Command } from './command.js';
 import { demoCommand } from './demoCommand.js';
 import { processIO, type CliIO } from './io.js';
@@ -82,7 +83,7 @@ export async function runCli(argv: readonly string[], io: CliIO = processIO()): 
     if (name === undefined || name === 'help' || name === '--help' || name === '-h') {
       const topic = name === 'help' ? commands.find((c) => c.name === args[0]) : undefined;
       if (name === 'help' && args[0] !== undefined && !topic) {
-        io.stderr(`ionheat: no command "${args[0]}"; try: ionheat help\n`);
+        io.stderr(`ionheat: no command "${args[0]}"${didYouMean(args[0], commands.map((c) => c.name))}; try: ionheat help\n`);
         return 2;
       }
       io.stdout(topic ? `${topic.summary}\n\n${topic.usage}\n` : overview());
@@ -94,7 +95,7 @@ export async function runCli(argv: readonly string[], io: CliIO = processIO()): 
     }
     const command = commands.find((c) => c.name === name);
     if (!command) {
-      io.stderr(`ionheat: no command "${name}"; the commands are ${commands.map((c) => c.name).join(', ')} (ionheat help)\n`);
+      io.stderr(`ionheat: no command "${name}"${didYouMean(name, [...commands.map((c) => c.name), 'help'])}; the commands are ${commands.map((c) => c.name).join(', ')} (ionheat help)\n`);
       return 2;
     }
     if (args.includes('--help') || args.includes('-h')) {

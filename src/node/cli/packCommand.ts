@@ -270,7 +270,14 @@ export const packCommand: Command = {
     '  --ambient <°C> (22)   --g-ambient <W/K> (0.15)   --skin <°C> (33)   --g-skin <W/K> (0.25)   --time-svg <file>',
   ].join('\n'),
   async run(argv, { io, dataset }) {
-    const { values } = readArgs(joinNegativeValues(argv), options, { min: 0, max: 0, names: '' });
+    const { values } = readArgs(joinNegativeValues(argv), options, { min: 0, max: 0, names: '' }, {
+      seed: { anyOf: ['monte-carlo'], why: 'the seed belongs to the Monte Carlo interval (e.g. --monte-carlo 2000 --seed 7); the default interval is by bounds and draws nothing' },
+      points: { anyOf: ['curve', 'curve-svg'], why: 'it sets how many points the ratio curve has (--curve with --json, or --curve-svg <file>)' },
+      'heat-capacity-u': { anyOf: ['heat-capacity'], why: 'it is the uncertainty of your own heat capacity of the fill' },
+    });
+    if (values.curve === true && values.json !== true && values['curve-svg'] === undefined) {
+      throw bad('curve', '--curve has no effect in text output: the curve\'s points are written with --json, or drawn with --curve-svg <file>');
+    }
     const saltsGiven = values.salt ?? [];
     const massesGiven = values['salt-mass'] ?? [];
     if (saltsGiven.length === 0) throw bad('salt', '--salt is required, with its --salt-mass (e.g. --salt KNO3 --salt-mass 10 --water 100)');

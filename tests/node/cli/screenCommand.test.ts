@@ -143,7 +143,7 @@ describe('ionheat screen: exit statuses', () => {
       [['screen', 'good.csv', '--fill', '40:80'], /write a fill as <salt-g>:<water-g>@<start-°C>/],
       [['screen', 'good.csv', '--fill', '40:80@120'], /start temperature/],
       [['screen', 'good.csv', '--objective', 'fill-temperature'], /needs a standard fill/],
-      [['screen', 'good.csv', '--colour'], /Unknown option '--colour'/],
+      [['screen', 'good.csv', '--colour'], /unknown option --colour/],
       [['screen', 'absent.csv'], /cannot read the candidate file "absent.csv": ENOENT/],
       [['screen', 'good.txt2'], /a candidate list is a .csv or .json file/],
       [['screen', file('badhead.csv', 'formula,price\nKCl,1\n')], /unknown column "price"/],
