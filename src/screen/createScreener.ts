@@ -12,6 +12,7 @@ import { builtinDataset } from '../data/builtin.js';
 import type { HazardClass, SourceEntry } from '../data/schemas.js';
 import { hazardClassSchema } from '../data/schemas.js';
 import { parseSalt } from '../chem/parseSalt.js';
+import { typoSuspicion } from '../chem/typoSuspicion.js';
 import { findIon } from '../chem/ionIndex.js';
 import { saltRecords } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
@@ -371,6 +372,9 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       if (input.solubility !== undefined) notes.push(`solubility ${input.solubility} g/100 g H2O from the screening input (source ${input.source ?? 'screenInput'}), taken as the same at every temperature${fill ? '' : '; it matters only to a fill'}`);
       if (pack && excludeMeasured) notes.push('the standard fill uses the enthalpy of solution the pack model finds, measured values included: excludeMeasured hides them from dissolve only');
       if (first !== undefined) notes.push(`the same candidate as line ${first}`);
+      // A formula that reads through a likely slip is computed (both readings are real salts) but never ranked silently.
+      const typo = read.salt ? undefined : typoSuspicion(input.formula, salt, dataset);
+      if (typo) notes.push(typo.message);
       const cost = input.pricePerKg === undefined ? undefined : costPerKJ(input.pricePerKg, result.perGram.salt, direction);
       if (input.pricePerKg !== undefined && cost === undefined) notes.push(`no cost per kJ: the 95 % interval of the heat per gram reaches zero or the wrong sign for ${direction === 'cool' ? 'cooling' : 'heating'}`);
       const base = { ...result, ...(cost ? { costPerKJ: cost } : {}), ...(pack ? { fill: pack } : {}) };
@@ -386,7 +390,8 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         hazards: hazards.classes,
         cautions: hazards.statements,
         ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
-        suitability: suitabilityOf(result.verdict, direction),
+        suitability: typo ? 'undetermined' : suitabilityOf(result.verdict, direction),
+        ...(typo ? { suspectedTypo: { suggestion: typo.suggestion, message: typo.message } } : {}),
         ...(objectiveValue ? { objective: objectiveValue } : {}),
         ...(cost ? { costPerKJ: cost } : {}),
       };

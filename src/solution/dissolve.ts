@@ -5,6 +5,7 @@
  * @module
  */
 import { saltArgument } from '../chem/saltArgument.js';
+import { typoSuspicion } from '../chem/typoSuspicion.js';
 import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
@@ -345,6 +346,8 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
   checkKirchhoffTemperature(celsius);
   if (Object.is(celsius, -0)) return dissolveWith(salt, { ...options, temperatureC: 0 }, dataset, store);
   const notes: string[] = [];
+  const typo = typeof formula === 'string' ? typoSuspicion(formula, salt, dataset) : undefined;
+  if (typo) notes.push(typo.message);
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
 
   const profile = profileOf(salt, dataset, store);

@@ -171,7 +171,7 @@ describe('the command line under hostile arguments', () => {
     [['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', 'Infinity'], /^ionheat: --water needs a number, got "Infinity"/],
     [['pack', '--salt', 'NH4NO3', '--salt-mass', '-0', '--water', '100'], /^ionheat: --salt-mass must be greater than zero/],
     [['dissolve', 'NaCl', '--temperature', '1e308'], /^ionheat: .*temperature/],
-    [['dissolve', 'Na999999999Cl999999999'], /^ionheat: the count 999999999 at position 2 is too large/],
+    [['dissolve', 'Na999999999Cl999999999'], /^ionheat: the count 999999999 at position 3 is too large/],
     [['salt', HUGE], /^ionheat: the formula is 100000 characters long/],
     [['salt', '('.repeat(10_000)], /^ionheat: the formula is 10000 characters long/],
     [['screen', 'missing.csv'], /^ionheat: .*missing\.csv/],

@@ -137,7 +137,7 @@ describe('candidate lists mixing good and bad rows: each bad row is reported in 
     [4, 'KCl', /measuredUncertainty: must not be negative/],
     [5, 'NH4NO3', /solubility: must be greater than zero/],
     [6, 'NaNO3', /pricePerKg: must not be negative/],
-    [7, 'NaXy', /"Xy" at position 2 is not a chemical element/],
+    [7, 'NaXy', /"Xy" at position 3 is not a chemical element/],
     [8, 'KBr', /measuredEnthalpy: "abc" is not a number/],
     [9, 'CaCl2', /measuredUncertainty: must be at most 1000 kJ\/mol/],
     [10, 'NH4Cl', null],

@@ -73,7 +73,7 @@ function takeDataFiles(argv: readonly string[]): { files: string[]; rest: string
  * await runCli(['salt', 'NaCl'], io); // 0
  * out.includes('58.44'); // true (g/mol)
  * await runCli(['salt', 'NaXy'], io); // 2
- * err; // 'ionheat: "Xy" at position 2 is not a chemical element\n'
+ * err; // 'ionheat: "Xy" at position 3 is not a chemical element\n'
  * ```
  */
 export async function runCli(argv: readonly string[], io: CliIO = processIO()): Promise<number> {
