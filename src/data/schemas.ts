@@ -58,7 +58,7 @@ function table<T extends z.ZodType>(record: T, extra: z.ZodRawShape = {}) {
 
 export const sourceSchema = z.strictObject({
   citation: z.string().min(1),
-  kind: z.enum(['book', 'journal', 'database', 'software', 'standard', 'commonPractice', 'derived', 'invented']),
+  kind: z.enum(['book', 'journal', 'database', 'software', 'standard', 'commonPractice', 'derived', 'invented', 'inHouse']),
   url: z.string().optional(),
   note: z.string().optional(),
 });

@@ -6,6 +6,7 @@
  */
 import { saltArgument } from '../chem/saltArgument.js';
 import { typoSuspicion } from '../chem/typoSuspicion.js';
+import { userValueDisagreement } from './userValueCheck.js';
 import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
@@ -362,6 +363,8 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
     estimates = at25.estimates.map((e) => kirchhoffCorrection(e, celsius, heatCapacity, typical)).sort(rank);
     if (!heatCapacity) notes.push(`no heat capacity of solution for ${salt.formula}: values are those at 25 °C with a widened interval`);
   }
+  const disagreement = userValueDisagreement(estimates, dataset);
+  if (disagreement) notes.push(disagreement);
   const best = estimates[0];
   if (!best) throw (profile.failure[hide ? 'hidden' : 'open'] ??= failure(salt, hide, dataset));
   const perGram = celsius === TABLE_TEMPERATURE_C && at25.perGram ? { ...at25.perGram } : perGramOf(best, salt, profile);

@@ -13,6 +13,7 @@ import { packTimeCourse, type PackTimeCourse, type TimeCourseOptions } from '../
 import { packCurveSvg } from '../../render/packCurve.js';
 import { timeCourseSvg } from '../../render/timeCourse.js';
 import { numberOption, readArgs } from './args.js';
+import { userSourceOf } from '../../solution/userValueCheck.js';
 import { packDesignMargin, type PackDesignMargin } from '../../pack/designMargin.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
@@ -212,7 +213,7 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
         d.loadedMass.toFixed(2),
         d.dissolvedMass.toFixed(2),
         d.undissolvedMass.toFixed(2) + (d.undissolvedSolid && d.undissolvedSolid.formula !== d.formula ? ` (as ${d.undissolvedSolid.formula})` : ''),
-        `${d.enthalpyOfSolution.value.toFixed(2)} ± ${d.enthalpyOfSolution.u.toPrecision(2)} (${d.enthalpyOfSolution.basis})`,
+        `${d.enthalpyOfSolution.value.toFixed(2)} ± ${d.enthalpyOfSolution.u.toPrecision(2)} (${userSourceOf(d.enthalpyOfSolution as Estimate, dataset) ? 'your value' : d.enthalpyOfSolution.basis})`,
         d.heat.toFixed(3),
       ]),
       new Set([1, 2, 3, 5]),
