@@ -82,7 +82,7 @@ export { packRatioCurve, ratioForTargetTemperature, ratioForLargestChangePerGram
 export { packDesignMargin, FROSTBITE_THRESHOLD_C, type PackDesignMargin, type TemperatureBand } from './pack/designMargin.js';
 export { packTimeCourse, type PackTimeCourse, type TimeCourseOptions, type TimeCourseParameter, type TimeCoursePoint } from './pack/packTimeCourse.js';
 export { packCautions, CONTACT_BURN_THRESHOLD_C, SCREENING_LINE, type CautionInput } from './pack/packCautions.js';
-export { saltHazards } from './pack/saltHazards.js';
+export { saltHazards, hazardCoverage, type HazardCoverage } from './pack/saltHazards.js';
 export { solubilityCurve, solubilityAt, type SolubilityCurve, type SolubilityPoint, type SolubilityAt } from './pack/solubilityCurve.js';
 export { freezingPointOfSolution, WATER_CRYOSCOPIC_CONSTANT } from './pack/freezingPoint.js';
 

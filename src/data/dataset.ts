@@ -121,8 +121,9 @@ export class Dataset {
    * @param label - where the records came from (a file name), for messages
    * @param sources - extra citations the records refer to; a built-in source key cannot be redefined, nor a key an
    *   earlier override set gave with another citation
-   * @param problems - problems the caller already found in the same file (plausibility, file shape), reported
-   *   together with these: every problem of a file is named in one error
+   * @param checks - `problems` the caller already found in the same file (plausibility, file shape), reported
+   *   together with these, so that every problem of a file is named in one error; `refuseConflicts`: refuse a
+   *   record an earlier override set gave with other values (files read one after another), instead of replacing it
    * @example
    * ```ts
    * const mine = builtinDataset().withOverrides(
@@ -134,11 +135,11 @@ export class Dataset {
    * measuredSolutionEnthalpy(parseSalt('KNO3')).value; // 34.89 (the built-in table is unchanged)
    * ```
    */
-  withOverrides(overrides: TableOverrides, label: string, sources: Record<string, SourceEntry> = {}, problems: readonly OverrideProblem[] = []): Dataset {
+  withOverrides(overrides: TableOverrides, label: string, sources: Record<string, SourceEntry> = {}, checks: { problems?: readonly OverrideProblem[]; refuseConflicts?: boolean } = {}): Dataset {
     if (overrides === null || typeof overrides !== 'object' || Array.isArray(overrides)) {
       throw new IonheatError('INVALID_DATA', `${label}: an override set is an object keyed by table name`, { field: label });
     }
-    const found: OverrideProblem[] = [...problems];
+    const found: OverrideProblem[] = [...(checks.problems ?? [])];
     const origins = new Map(this.#origins);
     const mergedSources: Record<string, SourceEntry> = { ...this.#sources };
     for (const [key, entry] of Object.entries(sources)) {
@@ -168,7 +169,7 @@ export class Dataset {
         found.push({ field: name, message: `table "${name}" must be a list of records` });
         continue;
       }
-      tables[tableName] = mergeTable(tableName, this.#tables[tableName], incoming, label, mergedSources, origins, found) as never;
+      tables[tableName] = mergeTable(tableName, this.#tables[tableName], incoming, label, mergedSources, origins, found, checks.refuseConflicts === true) as never;
     }
     if (found.length > 0) throw overrideError(label, found);
     return new Dataset(tables, mergedSources, this.label === 'built-in' ? `built-in + ${label}` : `${this.label} + ${label}`, origins);
@@ -222,6 +223,7 @@ function mergeTable<N extends TableName>(
   sources: Record<string, SourceEntry>,
   origins: Map<string, string>,
   problems: OverrideProblem[],
+  refuseConflicts: boolean,
 ): TableFile<N> {
   const recordSchema = tableSchemas[name].shape.records.element;
   const keyOf = tableKeys[name] as (r: TableRecord<N>) => string;
@@ -248,7 +250,7 @@ function mergeTable<N extends TableName>(
       return;
     }
     const givenBy = origins.get(`${name}:${key}`);
-    if (givenBy !== undefined && givenBy !== label && JSON.stringify(earlier.get(key)) !== JSON.stringify(record)) {
+    if (refuseConflicts && givenBy !== undefined && givenBy !== label && JSON.stringify(earlier.get(key)) !== JSON.stringify(record)) {
       problems.push({ field: `${name}[${i}]`, message: `${where} is also given by ${givenBy}, with other values; keep it in one file (a later file would silently win)` });
       return;
     }

@@ -78,7 +78,7 @@ export function applyOverrideDocument(document: unknown, label: string, base: Da
   }
   const tables: Record<string, unknown[]> = {};
   for (const [name, records] of Object.entries(parsed.data.tables)) tables[name.endsWith('.json') ? name : `${name}.json`] = records;
-  return base.withOverrides(tables as TableOverrides, label, parsed.data.sources ?? {}, implausibleOverrides(tables));
+  return base.withOverrides(tables as TableOverrides, label, parsed.data.sources ?? {}, { problems: implausibleOverrides(tables), refuseConflicts: true });
 }
 
 const TOP_LEVEL_KEYS = ['$schema', 'description', 'sources', 'tables'];

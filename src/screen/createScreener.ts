@@ -365,7 +365,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       const { salt, result, hazards, pack } = computed;
       const excludedBy = exclusion(salt, () => hazards);
       if (excludedBy !== undefined) {
-        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements });
+        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements, hazardData: hazards.data });
       }
       const notes: string[] = [];
       if (input.measuredEnthalpy !== undefined) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
@@ -389,6 +389,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         notes: notes.length > 0 ? [...result.notes, ...notes] : result.notes,
         hazards: hazards.classes,
         cautions: hazards.statements,
+        hazardData: hazards.data,
         ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
         suitability: typo ? 'undetermined' : suitabilityOf(result.verdict, direction),
         ...(typo ? { suspectedTypo: { suggestion: typo.suggestion, message: typo.message } } : {}),

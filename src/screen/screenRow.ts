@@ -95,6 +95,10 @@ export const screenRowSchema = z
     notes: z.array(z.string()).optional(),
     hazards: z.array(hazardClassSchema).optional().describe('hazard classes of the salt and its ions from the hazards table'),
     cautions: z.array(z.string()).optional().describe('the hazards table statements for the salt and its ions'),
+    hazardData: z
+      .enum(['classified', 'not classified', 'no hazard data'])
+      .optional()
+      .describe('whether the hazards table classifies the salt, checked it and found no class, or has no data (then an empty hazards list says nothing)'),
     fill: fillResultSchema.optional(),
     suitability: suitabilitySchema.optional(),
     suspectedTypo: z

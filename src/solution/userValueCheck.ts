@@ -31,7 +31,15 @@ export function userValueDisagreement(estimates: readonly Estimate[], dataset: D
   const mine = estimates[0];
   if (!mine || mine.basis !== 'measured') return undefined;
   const file = userSourceOf(mine, dataset);
-  if (file === undefined) return undefined;
+  return file === undefined ? undefined : measuredValueDisagreement(mine, estimates, file);
+}
+
+/**
+ * The note of {@link userValueDisagreement} for a user's measured value `mine` that came from `origin` (a file, or
+ * the screening input), against the most trusted estimate of another basis among `estimates`.
+ */
+export function measuredValueDisagreement(mine: Estimate, estimates: readonly Estimate[], origin: string): string | undefined {
+  const file = origin;
   const other = estimates.find((e) => e.basis !== 'measured');
   if (!other) return undefined;
   const combined = Math.hypot(mine.u, other.u);

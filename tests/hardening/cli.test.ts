@@ -122,6 +122,13 @@ const NULLABLE = new Set([
   '$.curve[].clamp',
   '$.design.saturationRatio',
   '$.target.design',
+  // the margins of a design: null where the target is out of reach, where no mass reaches the line, or no caution is due
+  '$.target.margin.designedMassG',
+  '$.target.margin.massInterval',
+  '$.target.margin.massInterval.high',
+  '$.target.margin.finalTemperature',
+  '$.target.margin.caution',
+  '$.target.margin.threshold.largestSafeMassG',
   '$.timeCourse.band',
   '$.timeCourse.band.firstInsideS',
   '$.timeCourse.band.lastInsideS',

@@ -3,7 +3,7 @@ import { formatSalt } from '../../chem/formatSalt.js';
 import type { Salt } from '../../chem/salt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { dissolve, type DissolveResult } from '../../solution/dissolve.js';
-import { saltHazards } from '../../pack/saltHazards.js';
+import { hazardCoverage, saltHazards } from '../../pack/saltHazards.js';
 import { numberOption, readArgs } from './args.js';
 import { userSourceOf } from '../../solution/userValueCheck.js';
 import type { Command } from './command.js';
@@ -15,7 +15,10 @@ const GENERAL_CAUTION =
 
 /** Hazard statements of the salt (a hydrate shares its anhydrous salt's) and of its ions, from hazards.json. */
 function cautionsFor(salt: Salt, dataset: Dataset): string[] {
-  return saltHazards(salt, dataset).map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
+  const found = saltHazards(salt, dataset).map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
+  const coverage = hazardCoverage(salt, dataset);
+  if (coverage.status === 'no hazard data') found.push(`No hazard data: the hazards table has no record for ${coverage.missingIons.join(' or ')}, which is not a sign of safety; check the safety data sheet.`);
+  return found;
 }
 
 const rounded = (e: Estimate | undefined): Estimate | undefined => (e ? roundEstimate(e) : undefined);
