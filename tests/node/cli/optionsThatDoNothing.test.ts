@@ -59,6 +59,7 @@ describe('--json on every command', () => {
     ['cycle', ['cycle', 'NaCl', '--json']],
     ['dissolve', ['dissolve', 'KNO3', '--json']],
     ['pack', [...packArgs, '--json']],
+    ['warmer', ['warmer', '--salt', 'NaCH3COO·3H2O', '--mass', '100', '--json']],
     ['screen', ['screen', '-', '--json']],
     ['demo', ['demo', '--json', '--out', dir]],
   ])('%s', async (_, args) => {
