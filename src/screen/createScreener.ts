@@ -233,8 +233,14 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  */
 export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
   if (options === null || typeof options !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
-  options = ownOptions(options);
-  checkOptionKeys(options, SCREEN_OPTIONS, 'options');
+  const given = options;
+  options = ownOptions(options); // the known keys, read once (a throwing getter or a revoked proxy is INVALID_ARGUMENT)
+  try {
+    checkOptionKeys(given, SCREEN_OPTIONS, 'options'); // on what was given: the copy holds only known keys
+  } catch (e) {
+    if (isIonheatError(e)) throw e;
+    throw new IonheatError('INVALID_ARGUMENT', `the options of the screen could not be read: ${thrownText(e)}`, { field: 'options' });
+  }
   const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
   const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
   if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: ${describeValue(options.objective)} is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
