@@ -63,7 +63,10 @@ export { bornHydrationEnthalpy, type BornCalibration, type BornClass, type BornR
 export { gaseousIonFormationEnthalpy } from './hydration/gaseousIonFormation.js';
 
 // The enthalpy of solution
+export { brineFreezingPoint } from './brine/brineFreezingPoint.js';
+export { brineCalibration, type BrineCalibration, type BrineResidual } from './brine/brineCalibration.js';
 export { dissolve, type DissolveOptions, type DissolveResult } from './solution/dissolve.js';
+export { integralEnthalpyOfSolution } from './solution/integralEnthalpy.js';
 export { solutionVerdict, type Verdict } from './solution/verdict.js';
 export { measuredSolutionEnthalpy } from './solution/measuredSolution.js';
 export { solutionEnthalpyFromCycle } from './solution/cycleSolution.js';

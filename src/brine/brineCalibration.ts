@@ -24,7 +24,7 @@ type Quantity = keyof DiscrepancyScales;
 const QUANTITIES: readonly Quantity[] = ['osmotic', 'enthalpy', 'heatCapacity'];
 
 /** One left-out residual. */
-export interface CalibrationResidual {
+export interface BrineResidual {
   formula: string;
   quantity: Quantity;
   molality: number;
@@ -37,7 +37,7 @@ export interface CalibrationResidual {
 /** What the calibration gives. */
 export interface BrineCalibration {
   scales: DiscrepancyScales;
-  residuals: CalibrationResidual[];
+  residuals: BrineResidual[];
   /** Leave-one-salt-out coverage of the ±1.96·u intervals, per quantity (0–1), and the count of residuals. */
   coverage: Record<Quantity, { covered: number; total: number; share: number }>;
 }
@@ -64,7 +64,7 @@ function percentile95(values: readonly number[]): number {
 
 function calibrate(dataset: Dataset): BrineCalibration {
   const records = brineRecords(dataset);
-  const residuals: CalibrationResidual[] = [];
+  const residuals: BrineResidual[] = [];
   for (const r of records) {
     const { pitzer } = chargeTypeEstimate(r.pitzer, records, r.formula);
     const c = chargeScaleOf(r.pitzer);
@@ -91,9 +91,18 @@ function calibrate(dataset: Dataset): BrineCalibration {
 }
 
 /**
- * The discrepancy calibration of a dataset (kept per dataset).
+ * The leave-one-salt-out calibration of the brine model's discrepancy (kept
+ * per dataset): for each of φ, φL and φJ, the scale s such that
+ * u = s·(ν|zMzX|/2)·m, with s = P95(|own − estimate|/(c·m))/1.96 over the
+ * salts with data, and the share of each left-out salt's residuals inside
+ * ±1.96·u when s comes from the others only.
  *
  * @param dataset - the Pitzer table (default: built-in)
+ * @see pitzerDat (parameters); docs/methods.md, "Brines"
+ * @example
+ * ```ts
+ * brineCalibration().coverage.enthalpy.share >= 0.9; // true
+ * ```
  */
 export function brineCalibration(dataset: Dataset = builtinDataset()): BrineCalibration {
   return dataset.memo('brine.calibration', () => calibrate(dataset));
