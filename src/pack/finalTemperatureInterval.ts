@@ -7,7 +7,7 @@
  */
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { quadrature } from '../quantity/propagate.js';
-import { fillEquilibrium, type Perturbation } from './fillEquilibrium.js';
+import type { Perturbation } from './fillEquilibrium.js';
 import type { PackIntervalOptions, PreparedFill } from './packFill.js';
 import { seededNormal } from './seededNormal.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
@@ -70,6 +70,12 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
       inputs.push({ label: `enthalpy of solution of ${state.undissolvedPhase}`, ...spread, perturb: (shift) => ({ phaseShift: shiftAt(i, shift) }) });
     }
   });
+  // The brine's φL and φJ (fit allowance or model discrepancy) and the osmotic coefficient, in units of their own standard uncertainty.
+  fill.solids.forEach((s, i) => {
+    inputs.push({ label: `relative apparent enthalpy φL of ${s.salt.anhydrous}`, u: 1, perturb: (shift) => ({ brineEnthalpyZ: shiftAt(i, shift) }) });
+    if (!fill.heatCapacityOverride) inputs.push({ label: `apparent heat capacity φCp of ${s.salt.anhydrous}`, u: 1, perturb: (shift) => ({ brineHeatCapacityZ: shiftAt(i, shift) }) });
+  });
+  inputs.push({ label: 'osmotic coefficients (freezing and boiling points)', u: 1, perturb: (shift) => ({ osmoticZ: shift }) });
   if (fill.heatCapacityOverride) {
     const { value, u } = fill.heatCapacityOverride;
     inputs.push({ label: 'your heat capacity', u: u / value, perturb: (shift) => ({ heatCapacityRelative: shift }) });
@@ -145,15 +151,21 @@ export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolut
     for (let k = 0; k < samples; k++) {
       const enthalpyShift = new Array<number>(n).fill(0);
       const phaseShift = new Array<number>(n).fill(0);
+      const brineEnthalpyZ = new Array<number>(n).fill(0);
+      const brineHeatCapacityZ = new Array<number>(n).fill(0);
       let heatCapacityRelative = 0;
+      let osmoticZ = 0;
       for (const input of inputs) {
         const p = input.perturb(1);
         const z = draw() * input.u;
         if (p.enthalpyShift) p.enthalpyShift.forEach((v, i) => (enthalpyShift[i]! += v * z));
         if (p.phaseShift) p.phaseShift.forEach((v, i) => (phaseShift[i]! += v * z));
+        if (p.brineEnthalpyZ) p.brineEnthalpyZ.forEach((v, i) => (brineEnthalpyZ[i]! += v * z));
+        if (p.brineHeatCapacityZ) p.brineHeatCapacityZ.forEach((v, i) => (brineHeatCapacityZ[i]! += v * z));
+        if (p.osmoticZ) osmoticZ += p.osmoticZ * z;
         if (p.heatCapacityRelative) heatCapacityRelative += p.heatCapacityRelative * z;
       }
-      results[k] = solveFillTemperature(fill, { enthalpyShift, phaseShift, heatCapacityRelative: Math.max(-0.9, heatCapacityRelative) }).temperature;
+      results[k] = solveFillTemperature(fill, { enthalpyShift, phaseShift, brineEnthalpyZ, brineHeatCapacityZ, osmoticZ, heatCapacityRelative: Math.max(-0.9, heatCapacityRelative) }).temperature;
     }
     results.sort();
     const quantile = (q: number): number => {
@@ -198,12 +210,7 @@ export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolut
     // sensitivity (plus − minus)/(up + down) times the input's u, (up + down)/(2·1.96)
     central += ((plus - minus) / (2 * COVERAGE_95)) ** 2;
   }
-  let low = Math.min(t, Math.max(floor, t - Math.sqrt(down)));
-  // Shifts combined in quadrature can overshoot a floor that no single re-solve
-  // reached: the solution the fill would hold at the low end still sets a floor
-  // (its freezing point, or the salt–ice eutectic once saturated).
-  const floorAtLow = fillEquilibrium(fill, low).floorC;
-  if (low < floorAtLow) low = Math.min(t, floorAtLow);
+  const low = Math.min(t, Math.max(floor, t - Math.sqrt(down)));
   return {
     low,
     high: Math.max(t, Math.min(ceiling, t + Math.sqrt(up))),

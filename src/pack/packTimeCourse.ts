@@ -217,11 +217,12 @@ export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, 
     if (g > 0) T = tEnv + (T - tEnv) * exchange;
     if (T > BOILING_C) T = BOILING_C;
     evaluateFill(prepared, T, {}, w);
-    if (T < w.floorC) {
-      T = w.floorC;
-      frozeAt ??= k * h;
+    if (w.frozen) {
+      // Below the eutectic no liquid is left: the fill holds where it was.
+      T = before;
       evaluateFill(prepared, T, {}, w);
     }
+    if (w.iceG > 0) frozeAt ??= k * h;
     const t = k * h;
     if (band) {
       const share = shareInside(before, T, band.lowC, band.highC);
