@@ -13,7 +13,9 @@
  * @module
  */
 import { FIT_ALLOWANCE, type BrineModel } from './brineModel.js';
-import { osmoticCoefficient, relativeApparentEnthalpy, relativeApparentHeatCapacity } from './pitzerBrine.js';
+import { apparentFromTerms, enthalpyTerms, heatCapacityTerms, osmoticCoefficient, osmoticCoefficientWith, relativeApparentEnthalpy, relativeApparentHeatCapacity } from './pitzerBrine.js';
+import { debyeHuckelOsmotic } from './debyeHuckelSlopes.js';
+import { pitzerAt } from './pitzerTemperature.js';
 
 /** Molality past the model's own range (all of it without own data). */
 function excess(model: BrineModel, m: number, own: boolean): number {
@@ -23,6 +25,25 @@ function excess(model: BrineModel, m: number, own: boolean): number {
 /** φ at m (mol/kg), T (K). */
 export function brineOsmotic(model: BrineModel, m: number, tK: number): number {
   return model.pitzer ? osmoticCoefficient(model.pitzer, m, tK) : 1;
+}
+
+/**
+ * The temperature-dependent parts of φ at tK written into `out` (Aφ, β⁰, β¹,
+ * β², Cᵠ), for {@link brineOsmoticWith} at many molalities.
+ */
+export function brineOsmoticTerms(model: BrineModel, tK: number, out: Float64Array): void {
+  const p = model.pitzer;
+  if (!p) return;
+  out[0] = debyeHuckelOsmotic(tK);
+  out[1] = pitzerAt(p.beta0, tK);
+  out[2] = pitzerAt(p.beta1, tK);
+  out[3] = p.alpha2 > 0 ? pitzerAt(p.beta2, tK) : 0;
+  out[4] = pitzerAt(p.cphi, tK);
+}
+
+/** φ at m from the terms {@link brineOsmoticTerms} wrote. */
+export function brineOsmoticWith(model: BrineModel, m: number, terms: Float64Array): number {
+  return model.pitzer ? osmoticCoefficientWith(model.pitzer, m, terms[0]!, terms[1]!, terms[2]!, terms[3]!, terms[4]!) : 1;
 }
 
 /** Standard uncertainty of φ at m (mol/kg). */
@@ -38,8 +59,25 @@ export function brineEnthalpy(model: BrineModel, m: number, tK: number): number 
 
 /** Standard uncertainty of φL, J/mol, at m (mol/kg), T (K). */
 export function brineEnthalpyU(model: BrineModel, m: number, tK: number): number {
-  const fit = model.own.enthalpy ? FIT_ALLOWANCE.enthalpyRelative * Math.abs(brineEnthalpy(model, Math.min(m, model.maxMolality), tK)) + FIT_ALLOWANCE.enthalpyPerMolality * Math.min(m, model.maxMolality) : 0;
+  return enthalpyAllowance(model, m, model.own.enthalpy && m > model.maxMolality ? brineEnthalpy(model, model.maxMolality, tK) : brineEnthalpy(model, m, tK));
+}
+
+/** u(φL) from φL at min(m, the fitted range) already known (J/mol). */
+export function enthalpyAllowance(model: BrineModel, m: number, phiLInRange: number): number {
+  const fit = model.own.enthalpy ? FIT_ALLOWANCE.enthalpyRelative * Math.abs(phiLInRange) + FIT_ALLOWANCE.enthalpyPerMolality * Math.min(m, model.maxMolality) : 0;
   return fit + model.scales.enthalpy * model.chargeScale * excess(model, m, model.own.enthalpy);
+}
+
+/** The terms of φL (`kind` 'enthalpy') or φJ ('heatCapacity') at tK into `out` (five numbers), for the *With kernels. */
+export function brineApparentTerms(model: BrineModel, kind: 'enthalpy' | 'heatCapacity', tK: number, out: Float64Array): void {
+  if (!model.pitzer) return;
+  if (kind === 'enthalpy') enthalpyTerms(model.pitzer, tK, out);
+  else heatCapacityTerms(model.pitzer, tK, out);
+}
+
+/** φL (J/mol) or φJ (J/(mol·K)) at m from terms at tK written by {@link brineApparentTerms}. */
+export function brineApparentWith(model: BrineModel, m: number, tK: number, terms: Float64Array): number {
+  return model.pitzer ? apparentFromTerms(model.pitzer, m, tK, terms) : 0;
 }
 
 /** φJ = φCp − φCp°, J/(mol·K), at m (mol/kg), T (K). */

@@ -51,17 +51,20 @@ function gFunction(x: number): number {
 
 /** The osmotic coefficient φ at m (mol/kg) and T (K). */
 export function osmoticCoefficient(p: PitzerParameters, m: number, tK: number): number {
+  return osmoticCoefficientWith(p, m, debyeHuckelOsmotic(tK), pitzerAt(p.beta0, tK), pitzerAt(p.beta1, tK), p.alpha2 > 0 ? pitzerAt(p.beta2, tK) : 0, pitzerAt(p.cphi, tK));
+}
+
+/**
+ * φ from Aφ and the parameters already taken at T: for loops over molality
+ * at one temperature (the ice balance), which then evaluate no logarithm.
+ */
+export function osmoticCoefficientWith(p: PitzerParameters, m: number, aPhi: number, beta0: number, beta1: number, beta2: number, cphi: number): number {
   if (m <= 0) return 1;
   const sqrtI = Math.sqrt(ionicStrength(p, m));
   const nu = p.nuM + p.nuX;
-  const b = pitzerAt(p.beta0, tK) + pitzerAt(p.beta1, tK) * Math.exp(-p.alpha1 * sqrtI) + (p.alpha2 > 0 ? pitzerAt(p.beta2, tK) * Math.exp(-p.alpha2 * sqrtI) : 0);
-  const c = pitzerAt(p.cphi, tK);
-  return (
-    1 -
-    (p.zM * p.zX * debyeHuckelOsmotic(tK) * sqrtI) / (1 + PITZER_B * sqrtI) +
-    (m * (2 * p.nuM * p.nuX) * b) / nu +
-    (m * m * 2 * Math.pow(p.nuM * p.nuX, 1.5) * c) / nu
-  );
+  const b = beta0 + beta1 * Math.exp(-p.alpha1 * sqrtI) + (p.alpha2 > 0 ? beta2 * Math.exp(-p.alpha2 * sqrtI) : 0);
+  const nn = p.nuM * p.nuX;
+  return 1 - (p.zM * p.zX * aPhi * sqrtI) / (1 + PITZER_B * sqrtI) + (m * 2 * nn * b) / nu + (m * m * 2 * nn * Math.sqrt(nn) * cphi) / nu;
 }
 
 /** B or one of its temperature derivatives, given β's at T and √I. */
@@ -69,15 +72,44 @@ function bSum(b0: number, b1: number, b2: number, p: PitzerParameters, sqrtI: nu
   return b0 + b1 * gFunction(p.alpha1 * sqrtI) + (p.alpha2 > 0 ? b2 * gFunction(p.alpha2 * sqrtI) : 0);
 }
 
-/** φL, J/mol of salt, at m (mol/kg) and T (K). */
-export function relativeApparentEnthalpy(p: PitzerParameters, m: number, tK: number): number {
+/**
+ * The temperature-dependent parts of φL at tK into `out`: A_H, β⁰ᴸ, β¹ᴸ, β²ᴸ, Cᴸ
+ * (for loops over molality at one temperature).
+ */
+export function enthalpyTerms(p: PitzerParameters, tK: number, out: Float64Array): void {
+  out[0] = debyeHuckelEnthalpy(tK);
+  out[1] = pitzerSlope(p.beta0, tK);
+  out[2] = pitzerSlope(p.beta1, tK);
+  out[3] = pitzerSlope(p.beta2, tK);
+  out[4] = pitzerSlope(p.cphi, tK) / (2 * Math.sqrt(p.zM * p.zX));
+}
+
+/**
+ * The temperature-dependent parts of φJ at tK into `out`: A_J, β⁰ᴶ, β¹ᴶ, β²ᴶ, Cᴶ.
+ */
+export function heatCapacityTerms(p: PitzerParameters, tK: number, out: Float64Array): void {
+  out[0] = debyeHuckelHeatCapacity(tK);
+  out[1] = heatCapacityParameter(p.beta0, tK);
+  out[2] = heatCapacityParameter(p.beta1, tK);
+  out[3] = heatCapacityParameter(p.beta2, tK);
+  out[4] = heatCapacityParameter(p.cphi, tK) / (2 * Math.sqrt(p.zM * p.zX));
+}
+
+/** φL or φJ from its terms at tK: ν|zMzX|·(A/2b)·ln(1 + b√I) − 2νMνX·R·T²·(m·Bˣ + m²·νM·zM·Cˣ). */
+export function apparentFromTerms(p: PitzerParameters, m: number, tK: number, terms: Float64Array): number {
   if (m <= 0) return 0;
   const sqrtI = Math.sqrt(ionicStrength(p, m));
   const nu = p.nuM + p.nuX;
-  const bL = bSum(pitzerSlope(p.beta0, tK), pitzerSlope(p.beta1, tK), pitzerSlope(p.beta2, tK), p, sqrtI);
-  const cL = pitzerSlope(p.cphi, tK) / (2 * Math.sqrt(p.zM * p.zX));
-  const dh = ((nu * p.zM * p.zX * debyeHuckelEnthalpy(tK)) / (2 * PITZER_B)) * Math.log(1 + PITZER_B * sqrtI);
-  return dh - 2 * p.nuM * p.nuX * GAS_CONSTANT * tK * tK * (m * bL + m * m * p.nuM * p.zM * cL);
+  const b = bSum(terms[1]!, terms[2]!, terms[3]!, p, sqrtI);
+  const dh = ((nu * p.zM * p.zX * terms[0]!) / (2 * PITZER_B)) * Math.log(1 + PITZER_B * sqrtI);
+  return dh - 2 * p.nuM * p.nuX * GAS_CONSTANT * tK * tK * (m * b + m * m * p.nuM * p.zM * terms[4]!);
+}
+
+/** φL, J/mol of salt, at m (mol/kg) and T (K). */
+export function relativeApparentEnthalpy(p: PitzerParameters, m: number, tK: number): number {
+  const terms = new Float64Array(5);
+  enthalpyTerms(p, tK, terms);
+  return apparentFromTerms(p, m, tK, terms);
 }
 
 /** Xᴶ = ∂²X/∂T² + (2/T)·∂X/∂T, per K². */
@@ -87,11 +119,7 @@ function heatCapacityParameter(a: PitzerCoefficients, tK: number): number {
 
 /** φJ = φCp − φCp°, J/(mol·K), at m (mol/kg) and T (K). */
 export function relativeApparentHeatCapacity(p: PitzerParameters, m: number, tK: number): number {
-  if (m <= 0) return 0;
-  const sqrtI = Math.sqrt(ionicStrength(p, m));
-  const nu = p.nuM + p.nuX;
-  const bJ = bSum(heatCapacityParameter(p.beta0, tK), heatCapacityParameter(p.beta1, tK), heatCapacityParameter(p.beta2, tK), p, sqrtI);
-  const cJ = heatCapacityParameter(p.cphi, tK) / (2 * Math.sqrt(p.zM * p.zX));
-  const dh = ((nu * p.zM * p.zX * debyeHuckelHeatCapacity(tK)) / (2 * PITZER_B)) * Math.log(1 + PITZER_B * sqrtI);
-  return dh - 2 * p.nuM * p.nuX * GAS_CONSTANT * tK * tK * (m * bJ + m * m * p.nuM * p.zM * cJ);
+  const terms = new Float64Array(5);
+  heatCapacityTerms(p, tK, terms);
+  return apparentFromTerms(p, m, tK, terms);
 }

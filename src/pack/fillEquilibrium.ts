@@ -9,7 +9,7 @@
  * @module
  */
 import type { PreparedFill, PreparedPhase } from './packFill.js';
-import { brineEnthalpy, brineEnthalpyU, brineHeatCapacity, brineHeatCapacityU, brineOsmotic, brineOsmoticU } from '../brine/brineProperties.js';
+import { brineApparentTerms, brineApparentWith, brineHeatCapacityU, brineOsmoticTerms, brineOsmoticU, brineOsmoticWith, enthalpyAllowance } from '../brine/brineProperties.js';
 import { boilingWaterActivityLn, fusionEnthalpyAt, iceWaterActivityLn } from '../brine/waterPhases.js';
 import { ZERO_CELSIUS_K } from '../brine/debyeHuckelSlopes.js';
 import { solubilityAt, type SolubilityAt } from './solubilityCurve.js';
@@ -143,6 +143,11 @@ export interface FillScratch {
   heldAsLoaded: number;
   hydrationNeed: number;
   molality: number[];
+  /** Per solid, the temperature-dependent terms of φ at the temperature of this evaluation. */
+  osmoticTerms: Float64Array[];
+  /** Per solid, the terms of φL and of φJ at the start temperature (fixed for the solve). */
+  enthalpyTerms: Float64Array[];
+  heatCapacityTerms: Float64Array[];
   integralEnthalpy: number[];
   integralEnthalpyU: number[];
 }
@@ -188,6 +193,17 @@ export function fillScratch(fill: PreparedFill): FillScratch {
     heldAsLoaded: 0,
     hydrationNeed: 0,
     molality: zeros(n),
+    osmoticTerms: Array.from({ length: n }, () => new Float64Array(5)),
+    enthalpyTerms: fill.solids.map((s) => {
+      const out = new Float64Array(5);
+      brineApparentTerms(s.brine, 'enthalpy', fill.startC + ZERO_CELSIUS_K, out);
+      return out;
+    }),
+    heatCapacityTerms: fill.solids.map((s) => {
+      const out = new Float64Array(5);
+      brineApparentTerms(s.brine, 'heatCapacity', fill.startC + ZERO_CELSIUS_K, out);
+      return out;
+    }),
     integralEnthalpy: zeros(n),
     integralEnthalpyU: zeros(n),
   };
@@ -281,15 +297,33 @@ function waterActivityLn(fill: PreparedFill, tK: number, perturbation: Perturbat
     const m = w.molality[i]!;
     if (!(m > 0)) continue;
     const b = fill.solids[i]!.brine;
-    let phi = brineOsmotic(b, m, tK);
+    let phi = brineOsmoticWith(b, m, w.osmoticTerms[i]!);
     if (z !== 0) phi += z * brineOsmoticU(b, m);
     sum += b.particles * m * Math.max(phi, 0.05);
   }
   return -fill.water.molarMass * sum;
 }
 
-/** Bisection steps of the ice balance (2⁻⁶⁰ of the water: far below a microgram). */
-const ICE_STEPS = 60;
+/** Most steps of the ice balance, and its tolerance as a share of the water. */
+const ICE_STEPS = 100;
+const ICE_TOLERANCE = 1e-12;
+/** Share of the water taken as the last liquid when testing for the eutectic. */
+const MIN_LIQUID_SHARE = 1e-9;
+
+/**
+ * How far the fill at t lies below its eutectic: ln a_w of the brine left
+ * when nearly all water has frozen (saturated where the salts have
+ * solubility data) less ln a_w over ice; positive where no liquid can exist
+ * (the `frozen` of {@link evaluateFill}, computed the same way).
+ * @internal
+ */
+export function frozenMargin(fill: PreparedFill, t: number, perturbation: Perturbation, w: FillScratch): number {
+  const tK = t + ZERO_CELSIUS_K;
+  for (let i = 0; i < fill.solids.length; i++) brineOsmoticTerms(fill.solids[i]!.brine, tK, w.osmoticTerms[i]!);
+  solubilityState(fill, t, w);
+  shareWater(fill, w.totalWater * MIN_LIQUID_SHARE, w);
+  return waterActivityLn(fill, tK, perturbation, w) - iceWaterActivityLn(fill.water, tK);
+}
 
 /**
  * The state of the fill held at temperature t (°C), written into `w`.
@@ -320,6 +354,7 @@ export function evaluateFill(fill: PreparedFill, t: number, perturbation: Pertur
   const n = list.length;
   const tK = t + ZERO_CELSIUS_K;
   const water = fill.water;
+  for (let i = 0; i < n; i++) brineOsmoticTerms(list[i]!.brine, tK, w.osmoticTerms[i]!);
   solubilityState(fill, t, w);
   const totalWater = w.totalWater;
   shareWater(fill, totalWater, w);
@@ -328,26 +363,44 @@ export function evaluateFill(fill: PreparedFill, t: number, perturbation: Pertur
   let frozen = false;
   if (t < 0) {
     const target = iceWaterActivityLn(water, tK);
-    if (lnAw > target) {
-      // Ice forms: find the ice mass whose removal brings the brine to the ice line.
+    // Below the eutectic even the brine left when nearly all water has frozen lies above the ice line.
+    const top = totalWater * (1 - MIN_LIQUID_SHARE);
+    shareWater(fill, totalWater - top, w);
+    let gHi = waterActivityLn(fill, tK, perturbation, w) - target;
+    if (gHi > 0) {
+      frozen = true;
+      ice = totalWater;
+    } else if (lnAw > target) {
+      // Ice forms: find the ice mass whose removal brings the brine to the ice line
+      // (regula falsi, Illinois variant: g(ice) = ln a_w − target falls as ice forms).
       let lo = 0;
-      let hi = totalWater;
-      shareWater(fill, totalWater * 1e-9, w);
-      if (waterActivityLn(fill, tK, perturbation, w) > target) {
-        frozen = true;
-        ice = totalWater;
-      } else {
-        for (let k = 0; k < ICE_STEPS; k++) {
-          const mid = 0.5 * (lo + hi);
-          shareWater(fill, totalWater - mid, w);
-          if (waterActivityLn(fill, tK, perturbation, w) > target) lo = mid;
-          else hi = mid;
+      let gLo = lnAw - target;
+      let hi = top;
+      let side = 0;
+      ice = lo;
+      for (let k = 0; k < ICE_STEPS && hi - lo > ICE_TOLERANCE * totalWater; k++) {
+        const x = gHi === -Infinity ? 0.5 * (lo + hi) : (lo * gHi - hi * gLo) / (gHi - gLo);
+        shareWater(fill, totalWater - x, w);
+        const gx = waterActivityLn(fill, tK, perturbation, w) - target;
+        ice = x;
+        if (gx === 0) break;
+        if (gx > 0) {
+          lo = x;
+          gLo = gx;
+          if (side === 1) gHi /= 2;
+          side = 1;
+        } else {
+          hi = x;
+          gHi = gx;
+          if (side === -1) gLo /= 2;
+          side = -1;
         }
-        ice = lo;
       }
+    }
+    if (frozen || ice > 0) {
       shareWater(fill, totalWater - ice, w);
       lnAw = frozen ? target : waterActivityLn(fill, tK, perturbation, w);
-    }
+    } else shareWater(fill, totalWater, w);
   }
   // A eutectic hold freezes out a share of the brine together with its salt.
   const hold = w.holdFraction;
@@ -361,7 +414,6 @@ export function evaluateFill(fill: PreparedFill, t: number, perturbation: Pertur
   const boiling = t > 99 && !frozen && lnAw >= boilingWaterActivityLn(water, tK);
 
   const t0K = fill.startC + ZERO_CELSIUS_K;
-  const midK = 0.5 * (tK + t0K);
   const shifts = perturbation.enthalpyShift;
   const phaseShifts = perturbation.phaseShift;
   const zL = perturbation.brineEnthalpyZ;
@@ -377,11 +429,14 @@ export function evaluateFill(fill: PreparedFill, t: number, perturbation: Pertur
     let phiLU = 0;
     let phiJ = 0;
     if (x > 0 && m > 0 && Number.isFinite(m)) {
-      phiL = brineEnthalpy(s.brine, m, t0K);
-      phiLU = brineEnthalpyU(s.brine, m, t0K);
-      phiJ = brineHeatCapacity(s.brine, m, midK);
+      const b = s.brine;
+      const lTerms = w.enthalpyTerms[i]!;
+      phiL = brineApparentWith(b, m, t0K, lTerms);
+      phiLU = enthalpyAllowance(b, m, b.own.enthalpy && m > b.maxMolality ? brineApparentWith(b, b.maxMolality, t0K, lTerms) : phiL);
+      // φJ at the start temperature: the final state's heat capacity over T₀ → T (its change with T is a second-order term).
+      phiJ = brineApparentWith(b, m, t0K, w.heatCapacityTerms[i]!);
       const zj = zJ?.[i] ?? 0;
-      if (zj !== 0) phiJ += zj * brineHeatCapacityU(s.brine, m, midK);
+      if (zj !== 0) phiJ += zj * brineHeatCapacityU(b, m, t0K);
     }
     const zl = zL?.[i] ?? 0;
     const integral = s.enthalpy.value + (shifts?.[i] ?? 0) + (phiL + zl * phiLU) / 1000;

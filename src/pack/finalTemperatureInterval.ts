@@ -8,6 +8,8 @@
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { quadrature } from '../quantity/propagate.js';
 import type { Perturbation } from './fillEquilibrium.js';
+import { brineHeatCapacityU } from '../brine/brineProperties.js';
+import { ZERO_CELSIUS_K } from '../brine/debyeHuckelSlopes.js';
 import type { PackIntervalOptions, PreparedFill } from './packFill.js';
 import { seededNormal } from './seededNormal.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
@@ -51,10 +53,11 @@ export const DEFAULT_SEED = 1;
  * solution (kJ/mol), that of each equilibrium solid an undissolved salt
  * turns into, and the heat capacity (relative).
  *
- * Heat capacity from the parts: u² = (W·u(c_w))² + Σ(nᵢ,dissolved)²·(u(Cp°ᵢ)² + aᵢ²)
- * + Σ(nᵢ,undissolved·u(Cp°solid))², where aᵢ = |Cp°(crystal) − Σν·Cp°(aq)|/√3
- * allows for the dissolved salt's true heat capacity lying anywhere between
- * the concentrated (crystal, additive) and the infinitely dilute limit.
+ * Heat capacity from the parts: u² = (W·u(c_w))² + Σ(nᵢ,dissolved)²·(u(φCp°ᵢ)² + u(φJᵢ)²)
+ * + Σ(nᵢ,undissolved·u(Cp°solid))², u(φJ) being the brine module's fit
+ * allowance or model discrepancy at the final molality. The integral
+ * enthalpy's input combines the interval of ΔsolH°(∞) with u(φL) at the final
+ * molality; the osmotic coefficients are an input where ice or boiling is involved.
  * @internal
  */
 export function uncertainInputs(fill: PreparedFill, solution: FillSolution): UncertainInput[] {
@@ -62,7 +65,11 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
   const n = fill.solids.length;
   const shiftAt = (i: number, shift: number): number[] => Array.from({ length: n }, (_, k) => (k === i ? shift : 0));
   fill.solids.forEach((s, i) => {
-    inputs.push({ label: `enthalpy of solution of ${s.salt.formula}`, ...ownInterval(s.enthalpy), perturb: (shift) => ({ enthalpyShift: shiftAt(i, shift) }) });
+    // ΔsolH°(∞) and φL at the final molality are independent; their spreads add in quadrature on each side.
+    const own = ownInterval(s.enthalpy);
+    const uL = solution.state.solids[i]!.integralEnthalpyU;
+    const spread = { u: Math.hypot(own.u, uL), up: Math.hypot(own.up, COVERAGE_95 * uL), down: Math.hypot(own.down, COVERAGE_95 * uL) };
+    inputs.push({ label: `integral enthalpy of solution of ${s.salt.formula} (ΔsolH°(∞) and φL)`, ...spread, perturb: (shift) => ({ enthalpyShift: shiftAt(i, shift) }) });
     const state = solution.state.solids[i]!;
     if (state.converts && state.fraction < 1) {
       const phase = s.phases.get(state.undissolvedPhase);
@@ -70,12 +77,8 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
       inputs.push({ label: `enthalpy of solution of ${state.undissolvedPhase}`, ...spread, perturb: (shift) => ({ phaseShift: shiftAt(i, shift) }) });
     }
   });
-  // The brine's φL and φJ (fit allowance or model discrepancy) and the osmotic coefficient, in units of their own standard uncertainty.
-  fill.solids.forEach((s, i) => {
-    inputs.push({ label: `relative apparent enthalpy φL of ${s.salt.anhydrous}`, u: 1, perturb: (shift) => ({ brineEnthalpyZ: shiftAt(i, shift) }) });
-    if (!fill.heatCapacityOverride) inputs.push({ label: `apparent heat capacity φCp of ${s.salt.anhydrous}`, u: 1, perturb: (shift) => ({ brineHeatCapacityZ: shiftAt(i, shift) }) });
-  });
-  inputs.push({ label: 'osmotic coefficients (freezing and boiling points)', u: 1, perturb: (shift) => ({ osmoticZ: shift }) });
+  // The osmotic coefficients set where ice forms and where the brine boils: an input wherever either happens.
+  if (solution.state.iceG > 0 || solution.clamp) inputs.push({ label: 'osmotic coefficients (freezing and boiling points)', u: 1, perturb: (shift) => ({ osmoticZ: shift }) });
   if (fill.heatCapacityOverride) {
     const { value, u } = fill.heatCapacityOverride;
     inputs.push({ label: 'your heat capacity', u: u / value, perturb: (shift) => ({ heatCapacityRelative: shift }) });
@@ -109,7 +112,7 @@ export function heatCapacityRelativeU(fill: PreparedFill, solution: FillSolution
   const terms = [state.liquidWaterG * fill.waterSpecificHeat.u];
   fill.solids.forEach((s, i) => {
     const e = state.solids[i]!;
-    terms.push(s.moles * e.fraction * quadrature(s.heatCapacityAnhydrous.u, s.additivityU));
+    terms.push(s.moles * e.fraction * quadrature(s.additivityU, e.molality > 0 ? brineHeatCapacityU(s.brine, e.molality, fill.startC + ZERO_CELSIUS_K) : 0));
     const solidCp = e.converts ? (s.phases.get(e.undissolvedPhase)?.heatCapacity.u ?? 0) : s.heatCapacityLoaded.u;
     terms.push(s.moles * (1 - e.fraction) * solidCp);
   });

@@ -7,7 +7,7 @@
  * @module
  */
 import { bracketedRoot } from './bracketedRoot.js';
-import { evaluateFill, fillEquilibrium, fillScratch, type FillEquilibrium, type FillScratch, type Perturbation } from './fillEquilibrium.js';
+import { evaluateFill, fillEquilibrium, fillScratch, frozenMargin, type FillEquilibrium, type FillScratch, type Perturbation } from './fillEquilibrium.js';
 import type { PreparedFill } from './packFill.js';
 
 /** Where the balance was cut short. @internal */
@@ -59,7 +59,7 @@ export const BOILING_C = 100;
 /** No brine at 1 atm boils above this, °C; a guard for the scan only. */
 const HIGHEST_C = 200;
 /** Bisection steps for a phase boundary (the eutectic, the boiling point) and a hold fraction. */
-const BOUNDARY_STEPS = 50;
+const BOUNDARY_STEPS = 40;
 
 /**
  * Solves H(final state at T) = H(start state at T₀) for the final
@@ -118,14 +118,19 @@ function balanceAt(ctx: Solver, t: number): number {
   return ctx.w.heatCapacity * (t - ctx.t0) + ctx.w.heatJ;
 }
 
-/** The temperature between `inside` (liquid, not boiling) and `outside` where `kind` sets in, taken on the inside. */
+/** The temperature between `inside` (liquid, not boiling) and `outside` where `kind` sets in, taken on the inside (bisection on the state's flag). */
 function boundary(ctx: Solver, inside: number, outside: number, kind: 'frozen' | 'boiling'): number {
   let a = inside;
   let b = outside;
   for (let k = 0; k < BOUNDARY_STEPS && Math.abs(b - a) > TEMPERATURE_TOLERANCE_K; k++) {
     const mid = 0.5 * (a + b);
-    evaluateFill(ctx.fill, mid, ctx.perturbation, ctx.w);
-    if (ctx.w[kind]) b = mid;
+    let past: boolean;
+    if (kind === 'frozen') past = mid < 0 && frozenMargin(ctx.fill, mid, ctx.perturbation, ctx.w) > 0;
+    else {
+      evaluateFill(ctx.fill, mid, ctx.perturbation, ctx.w);
+      past = ctx.w.boiling;
+    }
+    if (past) b = mid;
     else a = mid;
   }
   return a;
@@ -145,17 +150,9 @@ function eutecticHold(ctx: Solver, te: number, prev: number): FillSolution {
     w.holdFraction = lambda;
     return balanceAt(ctx, te);
   };
-  let lambda = 1;
-  if (at(1) < 0) {
-    let a = 0;
-    let b = 1;
-    for (let k = 0; k < BOUNDARY_STEPS; k++) {
-      const mid = 0.5 * (a + b);
-      if (at(mid) > 0) a = mid;
-      else b = mid;
-    }
-    lambda = 0.5 * (a + b);
-  }
+  // The balance is linear in the frozen share (heats and heat capacities scale with it).
+  const f1 = at(1);
+  const lambda = f1 < 0 ? Math.min(1, Math.max(0, fe / (fe - f1))) : 1;
   w.holdFraction = lambda;
   const state = stateAt(ctx, te);
   w.holdFraction = 0;
