@@ -76,7 +76,8 @@ export function brineRecords(dataset: Dataset = builtinDataset()): readonly Brin
         record,
       });
     }
-    return out;
+    // Table order must not change a result (sums of floats): keep the sets in formula order.
+    return out.sort((a, b) => (a.formula < b.formula ? -1 : a.formula > b.formula ? 1 : 0));
   });
 }
 

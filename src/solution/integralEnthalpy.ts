@@ -9,12 +9,9 @@ import { builtinDataset } from '../data/builtin.js';
 import { saltArgument } from '../chem/saltArgument.js';
 import type { Salt } from '../chem/salt.js';
 import { numberArgument } from '../quantity/argumentChecks.js';
-import { COVERAGE_95 } from '../quantity/constants.js';
-import { makeEstimate, type Estimate } from '../quantity/estimate.js';
-import { ZERO_CELSIUS_K } from '../brine/debyeHuckelSlopes.js';
-import { brineModel } from '../brine/brineModel.js';
-import { brineEnthalpy, brineEnthalpyU } from '../brine/brineProperties.js';
+import type { Estimate } from '../quantity/estimate.js';
 import { dissolve } from './dissolve.js';
+import { toMolality } from './toMolality.js';
 
 /**
  * The integral enthalpy of solution of a salt to molality m (mol of
@@ -40,24 +37,5 @@ import { dissolve } from './dissolve.js';
 export function integralEnthalpyOfSolution(salt: Salt, molality: number, temperatureC = 25, dataset: Dataset = builtinDataset()): Estimate {
   salt = saltArgument(salt, dataset);
   numberArgument(molality, 'molality', 'the molality in mol/kg', { min: 0, max: 30 });
-  const infinite = dissolve(salt, temperatureC === 25 ? {} : { temperatureC }, dataset).best;
-  const model = brineModel(salt, dataset);
-  const tK = temperatureC + ZERO_CELSIUS_K;
-  const phiL = brineEnthalpy(model, molality, tK) / 1000;
-  const uL = brineEnthalpyU(model, molality, tK) / 1000;
-  const value = infinite.value + phiL;
-  const down = Math.hypot(infinite.value - infinite.low, COVERAGE_95 * uL);
-  const up = Math.hypot(infinite.high - infinite.value, COVERAGE_95 * uL);
-  return makeEstimate({
-    quantity: 'integral enthalpy of solution',
-    value,
-    u: Math.hypot(infinite.u, uL),
-    low: value - down,
-    high: value + up,
-    unit: 'kJ/mol',
-    basis: infinite.basis,
-    method: `infinite-dilution+${model.basis}`,
-    sources: [...infinite.sources, ...model.sources],
-    notes: [`to ${molality} mol/kg at ${temperatureC} °C: ΔsolH°(∞) ${infinite.value.toFixed(2)} kJ/mol plus φL ${phiL.toFixed(2)} ± ${uL.toFixed(2)} kJ/mol`, ...model.notes],
-  });
+  return toMolality(dissolve(salt, temperatureC === 25 ? {} : { temperatureC }, dataset).best, salt, molality, temperatureC, dataset);
 }
