@@ -173,7 +173,18 @@ function stateAt(ctx: Solver, t: number): FillEquilibrium {
 }
 
 function finish(ctx: Solver, t: number): FillSolution {
-  const state = stateAt(ctx, t);
+  let state = stateAt(ctx, t);
   const f = state.heatCapacity * (t - ctx.t0) + state.heatJ;
-  return { temperature: t, state, clamp: undefined, jump: Math.abs(f) > 1e-6 * Math.abs(state.heatJ) + 1e-6, vaporG: 0 };
+  const jump = Math.abs(f) > 1e-6 * Math.abs(state.heatJ) + 1e-6;
+  if (jump) {
+    // Pinned at a change of equilibrium solid: report the change's own temperature, so that fills pinned there agree exactly.
+    for (const s of ctx.fill.phaseChanges) {
+      if (Math.abs(s - t) < 1e-6) {
+        t = s;
+        state = stateAt(ctx, t);
+        break;
+      }
+    }
+  }
+  return { temperature: t, state, clamp: undefined, jump, vaporG: 0 };
 }
