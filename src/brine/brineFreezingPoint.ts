@@ -26,7 +26,7 @@ const LOWEST_C = -80;
 export function freezingPointKernel(model: BrineModel, water: WaterConstants, m: number, z: number): number {
   const gap = (tC: number): number => {
     const tK = tC + ZERO_CELSIUS_K;
-    const phi = brineOsmotic(model, m, tK) + z * brineOsmoticU(model, m);
+    const phi = brineOsmotic(model, m, tK) + z * brineOsmoticU(model, m, tK);
     return -water.molarMass * model.particles * m * Math.max(phi, 0.05) - iceWaterActivityLn(water, tK);
   };
   // gap < 0 above the freezing point (liquid stable), > 0 below it.
@@ -57,7 +57,7 @@ export function freezingPointKernel(model: BrineModel, water: WaterConstants, m:
  * @see pitzerMayorga1973, silvesterPitzer1977, pitzerDat; docs/methods.md, "Brines"
  * @example
  * ```ts
- * brineFreezingPoint(parseSalt('CaCl2'), 2).value; // ≈ -15.2 (Smithsonian table: −15.27 °C)
+ * brineFreezingPoint(parseSalt('CaCl2'), 2).value; // ≈ -15.9 (Smithsonian table: −15.27 °C; the fit is extrapolated below 0 °C)
  * ```
  */
 export function brineFreezingPoint(salt: Salt, molality: number, dataset: Dataset = builtinDataset()): Estimate {

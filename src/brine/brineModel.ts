@@ -51,7 +51,7 @@ export interface BrineModel {
 }
 
 /** Allowance for the fit itself inside its range: relative part and per-molality part (assumed, see docs/methods.md). */
-export const FIT_ALLOWANCE = { osmoticPerMolality: 0.002, enthalpyRelative: 0.03, enthalpyPerMolality: 20, heatCapacityRelative: 0.05, heatCapacityPerMolality: 2 } as const;
+export const FIT_ALLOWANCE = { osmoticPerMolality: 0.005, osmoticPerMolalityKelvin: 0.0006, enthalpyRelative: 0.03, enthalpyPerMolality: 20, heatCapacityRelative: 0.05, heatCapacityPerMolality: 2 } as const;
 
 /**
  * Discrepancy scales of a non-electrolyte without data: assumed, not

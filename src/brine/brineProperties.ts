@@ -14,7 +14,7 @@
  */
 import { FIT_ALLOWANCE, type BrineModel } from './brineModel.js';
 import { apparentFromTerms, enthalpyTerms, heatCapacityTerms, osmoticCoefficient, osmoticCoefficientWith, relativeApparentEnthalpy, relativeApparentHeatCapacity } from './pitzerBrine.js';
-import { debyeHuckelOsmotic } from './debyeHuckelSlopes.js';
+import { debyeHuckelOsmotic, REFERENCE_K } from './debyeHuckelSlopes.js';
 import { pitzerAt } from './pitzerTemperature.js';
 
 /** Molality past the model's own range (all of it without own data). */
@@ -46,9 +46,9 @@ export function brineOsmoticWith(model: BrineModel, m: number, terms: Float64Arr
   return model.pitzer ? osmoticCoefficientWith(model.pitzer, m, terms[0]!, terms[1]!, terms[2]!, terms[3]!, terms[4]!) : 1;
 }
 
-/** Standard uncertainty of φ at m (mol/kg). */
-export function brineOsmoticU(model: BrineModel, m: number): number {
-  const fit = model.own.osmotic ? FIT_ALLOWANCE.osmoticPerMolality * Math.min(m, model.maxMolality) : 0;
+/** Standard uncertainty of φ at m (mol/kg) and tK (the fit allowance grows away from 25 °C, where most parameters were fitted). */
+export function brineOsmoticU(model: BrineModel, m: number, tK = REFERENCE_K): number {
+  const fit = model.own.osmotic ? (FIT_ALLOWANCE.osmoticPerMolality + FIT_ALLOWANCE.osmoticPerMolalityKelvin * Math.abs(tK - REFERENCE_K)) * Math.min(m, model.maxMolality) : 0;
   return fit + model.scales.osmotic * model.chargeScale * excess(model, m, model.own.osmotic);
 }
 

@@ -298,7 +298,7 @@ function waterActivityLn(fill: PreparedFill, tK: number, perturbation: Perturbat
     if (!(m > 0)) continue;
     const b = fill.solids[i]!.brine;
     let phi = brineOsmoticWith(b, m, w.osmoticTerms[i]!);
-    if (z !== 0) phi += z * brineOsmoticU(b, m);
+    if (z !== 0) phi += z * brineOsmoticU(b, m, tK);
     sum += b.particles * m * Math.max(phi, 0.05);
   }
   return -fill.water.molarMass * sum;

@@ -264,14 +264,15 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
  * @throws IonheatError `INVALID_ARGUMENT` naming the field for bad input; parser errors or `MISSING_DATA` for an unknown salt
  * @example
  * ```ts
- * // 10 g KNO3 in 100 g water at 20 °C: 0.0989 mol × 34.89 kJ/mol over 427.5 J/K
+ * // 10 g KNO3 in 100 g water at 20 °C: 0.0989 mol × 35.51 kJ/mol (integral, to 0.99 mol/kg) over 413.7 J/K
  * const r = packFinalTemperature({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 });
- * r.finalTemperature.value; // 11.93
+ * r.finalTemperature.value; // 11.51
  * r.dissolved[0].undissolvedMass; // 0
- * r.heatCapacity.value; // ≈ 427.5 J/K
+ * r.heatCapacity.value; // ≈ 413.7 J/K
+ * r.iceMass; // 0
  * // 30 g CaCl2 in 100 g water: a hot pack, with the contact-burn caution first
  * const hot = packFinalTemperature({ solids: [{ formula: 'CaCl2', massG: 30 }], waterG: 100, startC: 20 });
- * hot.finalTemperature.value; // ≈ 70.3 °C
+ * hot.finalTemperature.value; // ≈ 62.6 °C
  * hot.cautions[0].startsWith('Contact-burn risk'); // true
  * ```
  */

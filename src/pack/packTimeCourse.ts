@@ -155,7 +155,7 @@ function parameter(options: TimeCourseOptions, key: keyof typeof DEFAULTS, check
  * @example
  * ```ts
  * const course = packTimeCourse({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 }, { ambientConductanceWPerK: 0, skinConductanceWPerK: 0 });
- * course.points[course.points.length - 1].temperature; // ≈ 11.93 (the adiabatic final temperature)
+ * course.points[course.points.length - 1].temperature; // ≈ 11.51 (the adiabatic final temperature)
  * // with the default (assumed) exchange with air and skin the pack warms back up within the hour
  * const held = packTimeCourse({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 });
  * held.points[held.points.length - 1].t; // 3600 s
