@@ -28,4 +28,5 @@ export const tableKeys: { [N in TableName]: (record: TableRecord<N>) => string }
   'volume-coefficients.json': (r) => r.chargeType,
   'hazards.json': (r) => r.subject,
   'brine-pitzer.json': (r) => r.formula,
+  'warmer-melts.json': (r) => r.formula,
 };
