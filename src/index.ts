@@ -64,7 +64,6 @@ export { gaseousIonFormationEnthalpy } from './hydration/gaseousIonFormation.js'
 
 // The enthalpy of solution
 export { brineFreezingPoint } from './brine/brineFreezingPoint.js';
-export { brineCalibration, type BrineCalibration, type BrineResidual } from './brine/brineCalibration.js';
 export { dissolve, type DissolveOptions, type DissolveResult } from './solution/dissolve.js';
 export { integralEnthalpyOfSolution } from './solution/integralEnthalpy.js';
 export { solutionVerdict, type Verdict } from './solution/verdict.js';

@@ -456,7 +456,7 @@ export function evaluateFill(fill: PreparedFill, t: number, perturbation: Pertur
     dissolvedCp += w.cpDissolved[i]!;
     undissolvedCp += w.cpUndissolved[i]!;
   }
-  const iceJ = -(ice / (1000 * water.molarMass)) * fusionEnthalpyAt(water, t0K);
+  const iceJ = ice > 0 ? -(ice / (1000 * water.molarMass)) * fusionEnthalpyAt(water, t0K) : 0;
   heatJ += iceJ;
 
   const scale = 1 + (perturbation.heatCapacityRelative ?? 0);

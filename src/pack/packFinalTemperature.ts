@@ -219,7 +219,7 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
       dissolution: state.solids.reduce((sum, e) => sum + e.dissolutionJ, 0) / 1000,
       solidConversion: state.solids.reduce((sum, e) => sum + e.conversionJ, 0) / 1000,
       iceFormation: state.iceJ / 1000,
-      boiling: vaporJ / 1000,
+      boiling: vaporJ === 0 ? 0 : vaporJ / 1000,
       sensible,
       imbalance: absorbedAll === 0 ? 0 : Math.abs(absorbedAll + sensible) / Math.abs(absorbedAll),
     },

@@ -27,7 +27,8 @@ import type { Salt } from '../chem/salt.js';
 import { IonheatError } from '../error.js';
 import type { Estimate } from '../quantity/estimate.js';
 import type { DissolveResult } from '../solution/dissolve.js';
-import { heatPerGramOfFill, heatPerGramOfSalt, saturatedFill } from '../solution/heatPerGram.js';
+import { saturatedFill } from '../solution/heatPerGram.js';
+import { perGramOf } from '../solution/dissolve.js';
 import { measuredSolutionEnthalpy } from '../solution/measuredSolution.js';
 import { solutionVerdict } from '../solution/verdict.js';
 
@@ -74,12 +75,11 @@ export function ownMeasuredEstimate(salt: Salt, tableFormula: string, own: OwnMe
 export function withOwnMeasurement(result: DissolveResult, measured: Estimate, dataset: Dataset): DissolveResult {
   const salt = result.salt;
   const others = result.estimates.filter((e) => !(e.basis === 'measured' && e.method === measured.method));
-  const fill = saturatedFill(salt, dataset);
   return {
     ...result,
     best: measured,
     estimates: [measured, ...others],
     ...solutionVerdict(measured),
-    perGram: { salt: heatPerGramOfSalt(measured, salt), ...(fill ? { saturatedFill: heatPerGramOfFill(measured, fill) } : {}) },
+    perGram: perGramOf(measured, salt, saturatedFill(salt, dataset), dataset),
   };
 }

@@ -261,9 +261,12 @@ function frozen<E extends Estimate | undefined>(e: E): E {
   return e;
 }
 
-/** Per gram of salt at infinite dilution; per gram of a saturated fill with the integral enthalpy to saturation (25 °C, where the fill is defined). */
-function perGramOf(best: Estimate, salt: Salt, profile: SaltProfile, dataset: Dataset): DissolveResult['perGram'] {
-  const fill = profile.fill;
+/**
+ * Per gram of salt at infinite dilution; per gram of a saturated fill with the integral enthalpy to saturation
+ * (25 °C, where the fill is defined). Shared with the screen's own-measurement path.
+ * @internal
+ */
+export function perGramOf(best: Estimate, salt: Salt, fill: SaturatedFill | undefined, dataset: Dataset): DissolveResult['perGram'] {
   if (!fill) return { salt: heatPerGramOfSalt(best, salt) };
   // Water per mole of salt in the fill: its own crystal water plus the water added to saturate it.
   const waterG = salt.water * molarMass({ H: 2, O: 1 }, dataset) + fill.waterPerGramSalt * salt.molarMass;
@@ -300,7 +303,7 @@ function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
     estimates.sort(rank);
     let perGram: DissolveResult['perGram'] | undefined;
     if (estimates[0]) {
-      const p = perGramOf(estimates[0], salt, profile, dataset);
+      const p = perGramOf(estimates[0], salt, profile.fill, dataset);
       perGram = profile.kept ? { salt: frozen(p.salt), ...(p.saturatedFill ? { saturatedFill: frozen(p.saturatedFill) } : {}) } : p;
     }
     profile.ranked[key] = found = { estimates: profile.kept ? Object.freeze(estimates) : estimates, perGram };
@@ -399,7 +402,7 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
   }
   const best = estimates[0];
   if (!best) throw (profile.failure[hide ? 'hidden' : 'open'] ??= failure(salt, hide, dataset));
-  const perGram = celsius === TABLE_TEMPERATURE_C && at25.perGram ? { ...at25.perGram } : perGramOf(best, salt, profile, dataset);
+  const perGram = celsius === TABLE_TEMPERATURE_C && at25.perGram ? { ...at25.perGram } : perGramOf(best, salt, profile.fill, dataset);
   let hydration: DissolveResult['hydration'];
   if (profile.hydration) {
     hydration = {};

@@ -37,5 +37,6 @@ import { toMolality } from './toMolality.js';
 export function integralEnthalpyOfSolution(salt: Salt, molality: number, temperatureC = 25, dataset: Dataset = builtinDataset()): Estimate {
   salt = saltArgument(salt, dataset);
   numberArgument(molality, 'molality', 'the molality in mol/kg', { min: 0, max: 30 });
+  numberArgument(temperatureC, 'temperatureC', 'the temperature in °C', { min: 0, max: 40 });
   return toMolality(dissolve(salt, temperatureC === 25 ? {} : { temperatureC }, dataset).best, salt, molality, temperatureC, dataset);
 }
