@@ -8,6 +8,7 @@ import { drawChecked } from './chartInput.js';
 import type { PackTimeCourse } from '../pack/packTimeCourse.js';
 import { CONTACT_BURN_THRESHOLD_C } from '../pack/packCautions.js';
 import { el, linearScale, niceTicks, svgDocument, text, theme, tickLabel } from './svg.js';
+import { horizontalMark, surroundingsLine, timeChartFrame } from './timeChartFrame.js';
 
 /** Options of {@link timeCourseSvg}. */
 export interface TimeCourseChartOptions {
@@ -50,7 +51,7 @@ function draw(course: PackTimeCourse, options: TimeCourseChartOptions): string {
   const p = course.parameters;
   const star = (q: { assumed: boolean }) => (q.assumed ? '*' : '');
   const line1 = `${options.fillLabel ? `${options.fillLabel}, ` : ''}start ${fmt(course.startC)} °C; lumped model, dissolution time constant ${fmt(p.dissolutionTimeConstantS.value, 0)} s${star(p.dissolutionTimeConstantS)}`;
-  const line2 = `air ${fmt(p.ambientC.value)} °C${star(p.ambientC)} via ${p.ambientConductanceWPerK.value} W/K${star(p.ambientConductanceWPerK)}, skin ${fmt(p.skinC.value)} °C${star(p.skinC)} via ${p.skinConductanceWPerK.value} W/K${star(p.skinConductanceWPerK)}${Object.values(p).some((q) => q.assumed) ? '   * assumed value for illustration' : ''}`;
+  const line2 = surroundingsLine(p, Object.values(p).some((q) => q.assumed));
 
   const pts = course.points;
   const tEnd = pts[pts.length - 1]!.t;
@@ -80,22 +81,9 @@ function draw(course: PackTimeCourse, options: TimeCourseChartOptions): string {
     body.push(el('rect', { x: plot.x0, y: y(b.highC), width: plot.x1 - plot.x0, height: y(b.lowC) - y(b.highC), fill: '#3e9e6b', opacity: 0.13 }));
     body.push(text(plot.x1 - 8, y(b.highC) + 15, `target band ${fmt(b.lowC)}–${fmt(b.highC)} °C: ${fmt(b.secondsInside / 60)} min inside`, { class: 'small', fill: '#2f7a52', 'text-anchor': 'end' }));
   }
-  for (const t of yTicks.ticks) {
-    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(t), y2: y(t), stroke: theme.grid, 'stroke-width': 1 }));
-    body.push(text(plot.x0 - 8, y(t) + 4, tickLabel(t), { class: 'small', 'text-anchor': 'end' }));
-  }
-  for (const t of xTicks.ticks.filter((v) => v <= minutes * (1 + 1e-9))) {
-    body.push(el('line', { x1: x(t), x2: x(t), y1: plot.y1, y2: plot.y1 + 5, stroke: theme.muted }));
-    body.push(text(x(t), plot.y1 + 19, tickLabel(t), { class: 'small', 'text-anchor': 'middle' }));
-  }
-  body.push(el('rect', { x: plot.x0, y: plot.y0, width: plot.x1 - plot.x0, height: plot.y1 - plot.y0, fill: 'none', stroke: theme.muted, 'stroke-width': 1 }));
-  body.push(text((plot.x0 + plot.x1) / 2, height - 18, 'time since the salt met the water (min)', { class: 'label', 'text-anchor': 'middle' }));
-  body.push(text(18, (plot.y0 + plot.y1) / 2, 'pack temperature (°C)', { class: 'label', 'text-anchor': 'middle', transform: `rotate(-90 18 ${(plot.y0 + plot.y1) / 2})` }));
+  body.push(...timeChartFrame(plot, x, y, { x: xTicks.ticks, y: yTicks.ticks }, minutes, { x: 'time since the salt met the water (min)', y: 'pack temperature (°C)' }, height));
 
-  const hline = (value: number, stroke: string, dash: string, label: string, below = false) => {
-    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(value), y2: y(value), stroke, 'stroke-width': 1.2, 'stroke-dasharray': dash }));
-    body.push(text(plot.x1 - 6, y(value) + (below ? 14 : -5), label, { class: 'small', fill: stroke, 'text-anchor': 'end' }));
-  };
+  const hline = (value: number, stroke: string, dash: string, label: string, below = false) => body.push(...horizontalMark(plot, y, value, stroke, dash, label, below));
   const air = p.ambientC.value;
   const skin = p.skinC.value;
   hline(air, theme.neutral, '5 4', `air ${fmt(air)} °C`, air < skin);

@@ -9,6 +9,7 @@ import { drawChecked } from './chartInput.js';
 import type { WarmerResult } from '../warmer/latentWarmer.js';
 import { CONTACT_BURN_THRESHOLD_C } from '../pack/packCautions.js';
 import { el, linearScale, niceTicks, svgDocument, text, theme, tickLabel } from './svg.js';
+import { horizontalMark, surroundingsLine, timeChartFrame } from './timeChartFrame.js';
 
 /** Options of {@link warmerCourseSvg}. */
 export interface WarmerChartOptions {
@@ -49,16 +50,15 @@ function draw(w: WarmerResult, options: WarmerChartOptions): string {
   const plot = { x0: margin.left, x1: width - margin.right, y0: margin.top, y1: height - margin.bottom };
   const title = options.title ?? 'Warmer temperature over time';
   const p = w.parameters;
-  const star = (q: { assumed: boolean }) => (q.assumed ? '*' : '');
   const f = w.fill;
   const line1 = `${fmt(f.massG, 3)} g ${f.formula}${f.extraWaterG > 0 ? ` + ${fmt(f.extraWaterG, 3)} g extra water` : ''}${f.containerJPerK > 0 ? `, container ${fmt(f.containerJPerK, 1)} J/K` : ''}, supercooled at ${fmt(f.startC)} °C, triggered at 0 min`;
-  const line2 = `air ${fmt(p.ambientC.value)} °C${star(p.ambientC)} via ${p.ambientConductanceWPerK.value} W/K${star(p.ambientConductanceWPerK)}, skin ${fmt(p.skinC.value)} °C${star(p.skinC)} via ${p.skinConductanceWPerK.value} W/K${star(p.skinConductanceWPerK)}${Object.values(p).some((q) => q.assumed) ? '   * assumed value for illustration' : ''}`;
+  const line2 = surroundingsLine(p, Object.values(p).some((q) => q.assumed));
 
   const pts = w.points;
   const tEnd = pts[pts.length - 1]!.t;
   const minutes = tEnd / 60;
   const ys = [...pts.map((q) => q.temperature), f.startC, p.ambientC.value, p.skinC.value, w.plateau.high, CONTACT_BURN_THRESHOLD_C];
-  const yTicks = niceTicks(Math.min(...ys), Math.max(...ys) + 2, 7);
+  const yTicks = niceTicks(Math.min(...ys) - 2, Math.max(...ys) + 2, 7);
   const xTicks = niceTicks(0, minutes, 8);
   const x = linearScale([0, minutes], [plot.x0, plot.x1]);
   const y = linearScale(yTicks.domain, [plot.y1, plot.y0]);
@@ -68,32 +68,18 @@ function draw(w: WarmerResult, options: WarmerChartOptions): string {
   body.push(text(margin.left, 48, line1, { class: 'label muted' }));
   body.push(text(margin.left, 66, line2, { class: 'label muted' }));
 
-  for (const t of yTicks.ticks) {
-    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(t), y2: y(t), stroke: theme.grid, 'stroke-width': 1 }));
-    body.push(text(plot.x0 - 8, y(t) + 4, tickLabel(t), { class: 'small', 'text-anchor': 'end' }));
-  }
-  for (const t of xTicks.ticks.filter((v) => v <= minutes * (1 + 1e-9))) {
-    body.push(el('line', { x1: x(t), x2: x(t), y1: plot.y1, y2: plot.y1 + 5, stroke: theme.muted }));
-    body.push(text(x(t), plot.y1 + 19, tickLabel(t), { class: 'small', 'text-anchor': 'middle' }));
-  }
+  body.push(...timeChartFrame(plot, x, y, { x: xTicks.ticks, y: yTicks.ticks }, minutes, { x: 'time since triggering (min)', y: 'fill temperature (°C)' }, height));
 
   // The plateau: its 95 % band of temperature, from the trigger to its end.
   const plateauEndMin = Math.min(minutes, w.plateauDuration.value / 60);
   const band = { x: plot.x0, y: y(w.plateau.high), width: Math.max(1, x(plateauEndMin) - plot.x0), height: Math.max(2, y(w.plateau.low) - y(w.plateau.high)) };
-  body.push(el('rect', { ...band, fill: theme.heat, opacity: 0.12 }));
+  body.push(el('rect', { ...band, fill: theme.heat, opacity: 0.16 }));
   body.push(el('line', { x1: x(plateauEndMin), x2: x(plateauEndMin), y1: plot.y0, y2: plot.y1, stroke: theme.heat, 'stroke-width': 1, 'stroke-dasharray': '3 3' }));
   const plateauLabel = `plateau ${fmt(w.plateau.value)} °C (95 % ${fmt(w.plateau.low)}–${fmt(w.plateau.high)}) for about ${fmt(w.plateauDuration.value / 60)} min; ${fmt(100 * w.crystallisedAtPlateau.value, 0)} % crystallised at once`;
   const labelRight = x(plateauEndMin) < (plot.x0 + plot.x1) / 2;
   body.push(text(labelRight ? x(plateauEndMin) + 8 : x(plateauEndMin) - 8, y(w.plateau.high) - 8, plateauLabel, { class: 'small', fill: theme.heat, 'text-anchor': labelRight ? 'start' : 'end' }));
 
-  body.push(el('rect', { x: plot.x0, y: plot.y0, width: plot.x1 - plot.x0, height: plot.y1 - plot.y0, fill: 'none', stroke: theme.muted, 'stroke-width': 1 }));
-  body.push(text((plot.x0 + plot.x1) / 2, height - 18, 'time since triggering (min)', { class: 'label', 'text-anchor': 'middle' }));
-  body.push(text(18, (plot.y0 + plot.y1) / 2, 'fill temperature (°C)', { class: 'label', 'text-anchor': 'middle', transform: `rotate(-90 18 ${(plot.y0 + plot.y1) / 2})` }));
-
-  const hline = (value: number, stroke: string, dash: string, label: string, below = false) => {
-    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(value), y2: y(value), stroke, 'stroke-width': 1.2, 'stroke-dasharray': dash }));
-    body.push(text(plot.x1 - 6, y(value) + (below ? 14 : -5), label, { class: 'small', fill: stroke, 'text-anchor': 'end' }));
-  };
+  const hline = (value: number, stroke: string, dash: string, label: string, below = false) => body.push(...horizontalMark(plot, y, value, stroke, dash, label, below));
   const air = p.ambientC.value;
   const skin = p.skinC.value;
   hline(air, theme.neutral, '5 4', `air ${fmt(air)} °C`, air < skin);
