@@ -82,7 +82,7 @@ export interface FillEquilibrium {
   boiling: boolean;
   /** Share of the brine frozen out together with salt at the eutectic (0 elsewhere). */
   eutecticFraction: number;
-  /** ln a_w of the liquid. */
+  /** ln a_w of the liquid (computed only below 0 °C and above 99 °C; NaN between). */
   waterActivityLn: number;
 }
 
@@ -354,11 +354,13 @@ export function evaluateFill(fill: PreparedFill, t: number, perturbation: Pertur
   const n = list.length;
   const tK = t + ZERO_CELSIUS_K;
   const water = fill.water;
-  for (let i = 0; i < n; i++) brineOsmoticTerms(list[i]!.brine, tK, w.osmoticTerms[i]!);
+  // The water activity matters only where ice or vapour can form; between 0 and 99 °C it is left uncomputed (NaN).
+  const phases = t < 0 || t > 99;
+  if (phases) for (let i = 0; i < n; i++) brineOsmoticTerms(list[i]!.brine, tK, w.osmoticTerms[i]!);
   solubilityState(fill, t, w);
   const totalWater = w.totalWater;
   shareWater(fill, totalWater, w);
-  let lnAw = waterActivityLn(fill, tK, perturbation, w);
+  let lnAw = phases ? waterActivityLn(fill, tK, perturbation, w) : NaN;
   let ice = 0;
   let frozen = false;
   if (t < 0) {
@@ -411,7 +413,7 @@ export function evaluateFill(fill: PreparedFill, t: number, perturbation: Pertur
   }
   const liquid = w.liquidWaterG;
   const hydrationFraction = w.hydrationFraction;
-  const boiling = t > 99 && !frozen && lnAw >= boilingWaterActivityLn(water, tK);
+  const boiling = t > 99 && lnAw >= boilingWaterActivityLn(water, tK);
 
   const t0K = fill.startC + ZERO_CELSIUS_K;
   const shifts = perturbation.enthalpyShift;
