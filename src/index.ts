@@ -23,6 +23,7 @@ export * as constants from './quantity/constants.js';
 
 // Data
 export { Dataset, type Tables, type TableOverrides } from './data/dataset.js';
+export type { BoundedCache } from './data/boundedCache.js';
 export { builtinDataset } from './data/builtin.js';
 export * as schemas from './data/schemas.js';
 export { tableSchemas, type TableName, type TableRecord, type TableFile, type IonRecord, type SourceEntry, type StructureType, type HazardClass, type HazardRecord } from './data/schemas.js';
@@ -62,6 +63,9 @@ export { ionHydrationEnthalpy, type HydrationScale, type HydrationTerm, type Pro
 export { bornHydrationEnthalpy, type BornCalibration, type BornClass, type BornRadius } from './hydration/bornHydration.js';
 export { gaseousIonFormationEnthalpy } from './hydration/gaseousIonFormation.js';
 
+// Solubility from a solubility product
+export { solubilityFromProduct, type SolubilityFromProduct } from './brine/solubilityFromProduct.js';
+
 // The enthalpy of solution
 export { brineFreezingPoint } from './brine/brineFreezingPoint.js';
 export { dissolve, type DissolveOptions, type DissolveResult } from './solution/dissolve.js';
@@ -85,6 +89,7 @@ export { packTimeCourse, type PackTimeCourse, type TimeCourseOptions, type TimeC
 export { packCautions, CONTACT_BURN_THRESHOLD_C, SCREENING_LINE, type CautionInput } from './pack/packCautions.js';
 export { saltHazards } from './pack/saltHazards.js';
 export { solubilityCurve, solubilityAt, type SolubilityCurve, type SolubilityPoint, type SolubilityAt } from './pack/solubilityCurve.js';
+export { saltSolubility, type SaltSolubility, type SolubilityStatus } from './pack/saltSolubility.js';
 export { freezingPointOfSolution, WATER_CRYOSCOPIC_CONSTANT } from './pack/freezingPoint.js';
 
 // Latent-heat warmers (supercooled salt-hydrate melts)

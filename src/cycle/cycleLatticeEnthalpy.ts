@@ -46,17 +46,16 @@ export function cycleLatticeEnthalpy(salt: Salt | string, dataset: Dataset = bui
   const s = saltArgument(salt, dataset);
   options = optionsArgument(options);
   if (s.kind !== 'ionic' || s.water > 0 || options.hideCrystal) return undefined;
-  const cache = dataset.memo('cycle.latticeCache', () => new Map<string, Estimate | null>());
+  const cache = dataset.cache<string, Estimate | null>('cycle.latticeCache', CACHE_LIMIT);
   let hit = cache.get(s.formula);
   if (hit === undefined) {
     hit = compute(s, dataset) ?? null;
-    if (cache.size >= CACHE_LIMIT) cache.clear();
     cache.set(s.formula, hit);
   }
   return hit === null ? undefined : { ...hit, sources: hit.sources.slice(), notes: hit.notes.slice() };
 }
 
-/** Most results kept per dataset; the cache starts afresh when full. */
+/** Most results kept per dataset (a bounded cache: those not used for longest go first). */
 const CACHE_LIMIT = 20_000;
 
 function compute(s: Salt, dataset: Dataset): Estimate | undefined {

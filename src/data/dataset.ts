@@ -9,6 +9,10 @@
 import { IonheatError } from '../error.js';
 import { tableSchemas, type SourceEntry, type TableFile, type TableName, type TableRecord } from './schemas.js';
 import { tableKeys } from './tableKeys.js';
+import { BoundedCache } from './boundedCache.js';
+
+/** Entries a per-dataset cache holds by default: salts, formulas or results kept per key. */
+export const DATASET_CACHE_LIMIT = 4096;
 
 /** Every table by file name; a dataset may lack some. */
 export type Tables = { [N in TableName]?: TableFile<N> };
@@ -101,6 +105,15 @@ export class Dataset {
     const value = build();
     this.#memo.set(key, value);
     return value;
+  }
+
+  /**
+   * A cache kept for the dataset's life under `key`, holding at most `limit`
+   * entries (a `BoundedCache`): per-salt and per-formula results go here,
+   * so that memory stays flat however many distinct salts a run brings.
+   */
+  cache<K, V>(key: string, limit: number = DATASET_CACHE_LIMIT): BoundedCache<K, V> {
+    return this.memo(key, () => new BoundedCache<K, V>(limit));
   }
 
   /**

@@ -140,11 +140,10 @@ const copy = (e: Estimate): Estimate => ({ ...e, sources: e.sources.slice(), not
 /** The estimate or the error of one method for one salt, computed once per dataset. */
 function lookup(s: Salt, method: LatticeMethod, options: LatticeEstimateOptions, dataset: Dataset): Estimate | IonheatError {
   // Estimates are kept per dataset: by method, then by formula (default options) or by formula and options.
-  const caches = dataset.memo('lattice.estimateCache', () => ({ size: 0, byMethod: new Map<string, Map<string, Estimate | IonheatError>>() }));
-  let cache = caches.byMethod.get(method);
-  if (!cache) caches.byMethod.set(method, (cache = new Map()));
-  const key = plainOptions(options) ? s.formula : optionsKey(s.formula, options);
-  let hit = cache.get(key);
+  const cache = dataset.cache<string, Estimate | IonheatError>('lattice.estimateCache', CACHE_LIMIT);
+  // Only a method name given as text can be a key; anything else is computed (and refused) without being kept.
+  const key = typeof method === 'string' ? `${method}|${plainOptions(options) ? s.formula : optionsKey(s.formula, options)}` : undefined;
+  let hit = key === undefined ? undefined : cache.get(key);
   if (hit === undefined) {
     try {
       hit = computeEstimate(s, method, options, dataset);
@@ -152,18 +151,12 @@ function lookup(s: Salt, method: LatticeMethod, options: LatticeEstimateOptions,
       if (!isIonheatError(e)) throw e;
       hit = e;
     }
-    if (caches.size >= CACHE_LIMIT) {
-      caches.byMethod.clear();
-      caches.size = 0;
-      caches.byMethod.set(method, (cache = new Map()));
-    }
-    cache.set(key, hit);
-    caches.size++;
+    if (key !== undefined) cache.set(key, hit);
   }
   return hit;
 }
 
-/** Most estimates kept per dataset; the cache starts afresh when full. */
+/** Most estimates kept per dataset (a bounded cache: those not used for longest go first). */
 const CACHE_LIMIT = 20_000;
 
 function plainOptions(o: LatticeEstimateOptions): boolean {
@@ -176,13 +169,12 @@ function optionsKey(formula: string, o: LatticeEstimateOptions): string {
 
 /** The model point of a salt, kept per dataset (it does not depend on what the calibration leaves out). */
 function cachedPoint(s: Salt, model: LatticeModel, options: LatticeModelOptions, dataset: Dataset): ModelPoint {
-  const cache = dataset.memo('lattice.pointCache', () => new Map<string, ModelPoint | IonheatError>());
+  const cache = dataset.cache<string, ModelPoint | IonheatError>('lattice.pointCache', CACHE_LIMIT);
   const key = `${model}|${s.formula}|${options.structure ?? ''}|${options.latticeParameter ?? ''}|${options.coordination ?? ''}`;
   let hit = cache.get(key);
   if (hit === undefined) {
     const point = tryLatticeModelPoint(s, model, options, dataset, []);
     hit = point instanceof PointFailure ? point.error() : point;
-    if (cache.size >= CACHE_LIMIT) cache.clear();
     cache.set(key, hit);
   }
   if (hit instanceof Error) throw hit;
@@ -191,11 +183,10 @@ function cachedPoint(s: Salt, model: LatticeModel, options: LatticeModelOptions,
 
 /** The canonical formula of a formula the caller typed, kept per dataset. */
 function canonicalFormula(text: string, dataset: Dataset): string {
-  const cache = dataset.memo('lattice.canonicalFormulas', () => new Map<string, string>());
+  const cache = dataset.cache<string, string>('lattice.canonicalFormulas', CACHE_LIMIT);
   let f = cache.get(text);
   if (f === undefined) {
     f = parseSalt(text, dataset).formula;
-    if (cache.size >= CACHE_LIMIT) cache.clear();
     cache.set(text, f);
   }
   return f;

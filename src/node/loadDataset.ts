@@ -20,7 +20,6 @@
  *
  * @module
  */
-import { readFileSync } from 'node:fs';
 import { basename } from 'node:path';
 import { z } from 'zod';
 import { builtinDataset } from '../data/builtin.js';
@@ -29,6 +28,10 @@ import { sourceSchema } from '../data/schemas.js';
 import { IonheatError } from '../error.js';
 import { parseJsonStrict } from './strictJson.js';
 import { checkPlausibleOverrides } from './plausibleOverrides.js';
+import { readTextFile } from './readInputFile.js';
+
+/** The largest override file read (a table of every ion and salt ionheat knows is well under 1 MB). */
+const MAX_DATA_FILE_BYTES = 16 * 2 ** 20;
 
 const overrideFileSchema = z.strictObject({
   $schema: z.string().optional(),
@@ -79,8 +82,9 @@ export function applyOverrideDocument(document: unknown, label: string, base: Da
  *
  * @param paths - JSON files in the override format above
  * @param base - the dataset to start from (default: built-in); it is not changed
- * @throws IonheatError `INVALID_ARGUMENT` for a file that cannot be read, `INVALID_DATA` naming the file, table, record
- *   and field for bad content
+ * @throws IonheatError `INVALID_ARGUMENT` for a file that cannot be read, is not a regular file (a FIFO, a device, a
+ *   directory) or is over 16 MB; `INVALID_DATA` naming the file, table, record and field for bad content (JSON
+ *   syntax errors at their line and column; a leading byte-order mark is allowed)
  * @see DEVELOPERS.md, "A user's own tables"; {@link applyOverrideDocument} for the format.
  *
  * @example
@@ -101,12 +105,7 @@ export function applyOverrideDocument(document: unknown, label: string, base: Da
 export function loadDataset(paths: readonly string[], base: Dataset = builtinDataset()): Dataset {
   let dataset = base;
   for (const path of paths) {
-    let text: string;
-    try {
-      text = readFileSync(path, 'utf8');
-    } catch (e) {
-      throw new IonheatError('INVALID_ARGUMENT', `cannot read data file "${path}": ${(e as NodeJS.ErrnoException).code ?? String(e)}`, { field: path });
-    }
+    const text = readTextFile(path, 'data file', path, MAX_DATA_FILE_BYTES);
     dataset = applyOverrideDocument(parseJsonStrict(text, basename(path)), basename(path), dataset);
   }
   return dataset;

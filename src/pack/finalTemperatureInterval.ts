@@ -12,6 +12,7 @@ import { brineHeatCapacityU } from '../brine/brineProperties.js';
 import { ZERO_CELSIUS_K } from '../brine/debyeHuckelSlopes.js';
 import type { PackIntervalOptions, PreparedFill } from './packFill.js';
 import { seededNormal } from './seededNormal.js';
+import { withSolubilityBounds } from './solubilityBounds.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
 
 /** One uncertain input of the balance. @internal */
@@ -142,6 +143,11 @@ export function heatCapacityRelativeU(fill: PreparedFill, solution: FillSolution
  * @internal
  */
 export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolution, options: PackIntervalOptions = { method: 'bounds' }): TemperatureInterval {
+  return withSolubilityBounds(fill, solution, propagatedInterval(fill, solution, options));
+}
+
+/** The interval from the enthalpies and the heat capacity alone (see {@link finalTemperatureInterval}). */
+function propagatedInterval(fill: PreparedFill, solution: FillSolution, options: PackIntervalOptions): TemperatureInterval {
   const t = solution.temperature;
   const inputs = uncertainInputs(fill, solution);
   const listed = inputs.map((i) => i.label).join(', ');

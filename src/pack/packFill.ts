@@ -20,6 +20,8 @@ import { brineModel, type BrineModel } from '../brine/brineModel.js';
 import { waterConstants } from '../brine/brineParameterSets.js';
 import type { SolubilityCurve } from './solubilityCurve.js';
 import { packSaltData, type PackSaltData } from './packSaltData.js';
+import type { SolubilityStatus } from './saltSolubility.js';
+import { solubilityBoundsOf, solubilityNote, type SolubilityBounds } from './solubilityBounds.js';
 
 /** One solid of a fill. */
 export interface PackSolid {
@@ -105,6 +107,10 @@ export interface PreparedSolid {
   /** The brine model of the dissolved salt: φ, φL, φJ. */
   brine: BrineModel;
   curve: SolubilityCurve | undefined;
+  /** How well the solubility is known. */
+  solubilityStatus: SolubilityStatus;
+  /** The ends of an estimated or unknown solubility, for the interval. */
+  solubilityBounds: SolubilityBounds | undefined;
   /** Every equilibrium solid the curve names, by canonical formula. */
   phases: ReadonlyMap<string, PreparedPhase>;
 }
@@ -171,11 +177,11 @@ const PARSED_CACHE_LIMIT = 4096;
 
 /** {@link parseSalt}, remembered per dataset for texts already read. */
 function parsedFormula(text: string, dataset: Dataset): Salt {
-  const cache = dataset.memo('pack.parsedFormulas', () => new Map<string, Salt>());
+  const cache = dataset.cache<string, Salt>('pack.parsedFormulas', PARSED_CACHE_LIMIT);
   const known = cache.get(text);
   if (known) return known;
   const salt = parseSalt(text, dataset);
-  if (cache.size < PARSED_CACHE_LIMIT) cache.set(text, salt);
+  cache.set(text, salt);
   return salt;
 }
 
@@ -279,7 +285,9 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
       phases.set(formula, { formula, water: phase.salt.water, enthalpy: phaseEnthalpy, heatCapacity: phase.heatCapacity });
     }
     if (curve) sources.add(curve.source);
-    else notes.push(`no solubility data for ${salt.formula}: assumed to dissolve completely whatever the temperature`);
+    if (data.solubility.status === 'estimated') sources.add('solubilityEstimatePractice');
+    const solubilityText = solubilityNote(salt, data.solubility);
+    if (solubilityText) notes.push(solubilityText);
     for (const s of [...enthalpy.sources, ...heatCapacityLoaded.sources, ...heatCapacityAnhydrous.sources, ...(aq?.sources ?? [])]) sources.add(s);
 
     return {
@@ -296,6 +304,8 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
       additivityU,
       brine,
       curve,
+      solubilityStatus: data.solubility.status,
+      solubilityBounds: solubilityBoundsOf(salt, data.solubility),
       phases,
     };
   });

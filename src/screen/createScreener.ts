@@ -9,10 +9,12 @@
 import { describeValue } from '../quantity/argumentChecks.js';
 import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
+import { BoundedCache } from '../data/boundedCache.js';
 import type { HazardClass, SourceEntry } from '../data/schemas.js';
 import { hazardClassSchema } from '../data/schemas.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import { findIon } from '../chem/ionIndex.js';
+import { isIssuedSalt } from '../chem/issuedSalts.js';
 import { saltRecords } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
 import { IonheatError, isIonheatError } from '../error.js';
@@ -24,7 +26,7 @@ import { readCandidate, type CandidateInput, type CandidateLike } from './candid
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
 import { costPerKJ } from './costPerKJ.js';
 import { hazardSummary, type HazardSummary } from './hazardSummary.js';
-import { screenObjective, suitabilityOf, WARMER_OBJECTIVES } from './screenObjective.js';
+import { screenObjective, suitabilityOf, unknownSolubility, WARMER_OBJECTIVES } from './screenObjective.js';
 import { latentWarmer } from '../warmer/latentWarmer.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
 import { screenSources } from './screenSources.js';
@@ -128,6 +130,42 @@ function checkFill(fill: FillSpec | string): FillSpec {
   return { saltMassG, waterMassG, startC };
 }
 
+/** The message of anything thrown, without trusting it (it may itself be a hostile object). */
+function thrownText(e: unknown): string {
+  try {
+    return e instanceof Error ? e.message : String(e);
+  } catch {
+    return 'an object that cannot even be shown';
+  }
+}
+
+/**
+ * The options read once into a plain object of our own: a getter that
+ * throws, or a revoked proxy, becomes one `INVALID_ARGUMENT` error here
+ * rather than a raw error from deep inside the screen.
+ */
+function ownOptions(options: ScreenOptions): ScreenOptions {
+  try {
+    const { objective, direction, spec, filters, excludeMeasured, sources, fill } = options;
+    return {
+      ...(objective !== undefined ? { objective } : {}),
+      ...(direction !== undefined ? { direction } : {}),
+      ...(spec !== undefined ? { spec } : {}),
+      ...(filters !== undefined ? { filters: filters !== null && typeof filters === 'object' ? { ...filters } : filters } : {}),
+      ...(excludeMeasured !== undefined ? { excludeMeasured } : {}),
+      ...(sources !== undefined && sources !== null ? { sources: { ...sources } } : {}),
+      ...(fill !== undefined ? { fill: fill !== null && typeof fill === 'object' ? { ...fill } : fill } : {}),
+    };
+  } catch (e) {
+    throw new IonheatError('INVALID_ARGUMENT', `the options of the screen could not be read: ${thrownText(e)}`, { field: 'options' });
+  }
+}
+
+/** What the caller's own list of candidates (its iterator) threw, as an IonheatError naming the list. */
+export function candidateListError(e: unknown): IonheatError {
+  return isIonheatError(e) ? e : new IonheatError('INVALID_ARGUMENT', `the list of candidates could not be read: ${thrownText(e)}`, { field: 'candidates' });
+}
+
 /** The candidate's fields as one text, in a fixed order. */
 function candidateKey(input: CandidateInput): string {
   // Numbers through JSON.stringify: the same digits as String(), without V8's number-to-string cache,
@@ -142,19 +180,6 @@ function deepFreeze<T>(value: T): T {
     for (const v of Object.values(value)) deepFreeze(v);
   }
   return value;
-}
-
-/** A map that forgets its oldest entry when full. */
-class BoundedMap<K, V> {
-  readonly #map = new Map<K, V>();
-  constructor(readonly limit: number) {}
-  get(key: K): V | undefined {
-    return this.#map.get(key);
-  }
-  set(key: K, value: V): void {
-    if (this.#map.size >= this.limit) this.#map.delete(this.#map.keys().next().value as K);
-    this.#map.set(key, value);
-  }
 }
 
 function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<string>; ions: Set<string>; hazards: Set<HazardClass> } {
@@ -201,6 +226,7 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  */
 export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
   if (options === null || typeof options !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
+  options = ownOptions(options);
   const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
   const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
   if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: ${describeValue(options.objective)} is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
@@ -224,8 +250,8 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         });
   const settings: ScreenSettings = { objective, direction, fill, spec: spec?.text ?? null, excludeMeasured };
 
-  const results = new BoundedMap<string, Computed>(CACHE_LIMIT);
-  const datasets = new BoundedMap<string, Dataset>(DATASET_CACHE_LIMIT);
+  const results = new BoundedCache<string, Computed>(CACHE_LIMIT);
+  const datasets = new BoundedCache<string, Dataset>(DATASET_CACHE_LIMIT);
   const seen = new RepeatIndex(DUPLICATE_LIMIT);
   const tally: ScreenSummary = { read: 0, computed: 0, failed: 0, excluded: 0, blankLines: 0, specHeld: 0, specFailed: 0 };
   let nextLine = 1;
@@ -300,12 +326,12 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
 
   const compute = (input: CandidateInput, given: Salt | undefined): Computed => {
     const own = input.measuredEnthalpy !== undefined || input.solubility !== undefined;
-    const key = given ? `salt\u0000${given.formula}` : own ? JSON.stringify([input.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, input.source]) : input.formula;
+    const key = given ? `salt\u0000${input.formula}` : own ? JSON.stringify([input.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, input.source]) : input.formula;
     const cached = results.get(key);
     if (cached) return cached;
     let computed: Computed;
-    // A salt given by the caller is copied: the results kept here are frozen, and the caller's object stays theirs.
-    let salt: Salt | undefined = given ? structuredClone(given) : undefined;
+    // A salt parseSalt issued is frozen and trusted; any other object claiming to be a salt (a copy, a proxy) is read again from its formula.
+    let salt: Salt | undefined = given && isIssuedSalt(given) ? given : undefined;
     try {
       salt ??= parseSalt(input.formula, dataset);
       // A fill, or a solubility, needs the row's values in a merged dataset (the pack model reads the tables);
@@ -366,12 +392,18 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       try {
         read = readCandidate(candidate);
       } catch (e) {
-        if (!isIonheatError(e)) throw e;
-        const formula = candidate && typeof candidate === 'object' && typeof (candidate as { formula?: unknown }).formula === 'string' ? (candidate as { formula: string }).formula : typeof candidate === 'string' ? candidate : '';
-        return failedRow(at, { formula }, e);
+        // A candidate is the caller's object: a getter that throws, or a revoked proxy, is one failed row, not the end of the screen.
+        const error = isIonheatError(e) ? e : new IonheatError('INVALID_ARGUMENT', `the candidate could not be read: ${thrownText(e)}`, { field: 'candidate' });
+        let formula = '';
+        try {
+          formula = typeof candidate === 'string' ? candidate : candidate && typeof candidate === 'object' && typeof (candidate as { formula?: unknown }).formula === 'string' ? (candidate as { formula: string }).formula : '';
+        } catch {
+          // the formula cannot be read either
+        }
+        return failedRow(at, { formula }, error);
       }
       const { input } = read;
-      const first = seen.firstLine(read.salt ? `salt\u0000${read.salt.formula}` : candidateKey(input), at);
+      const first = seen.firstLine(read.salt ? `salt\u0000${input.formula}` : candidateKey(input), at);
       const duplicate = first !== undefined ? { duplicateOf: first } : {};
 
       const computed = compute(input, read.salt);
@@ -396,6 +428,8 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       const base = { ...result, ...(cost ? { costPerKJ: cost } : {}), ...(pack ? { fill: pack } : {}), ...(warmerRow ? { warmer: warmerRow } : {}) };
       const objectiveValue = screenObjective(objective, base);
       if (objective === 'cost-per-kj' && input.pricePerKg === undefined) notes.push('no price per kg given, so no cost per kJ to rank by');
+      const unknown = pack ? unknownSolubility(pack) : undefined;
+      if (objective === 'fill-temperature' && unknown !== undefined) notes.push(`not ranked by the fill: the solubility of ${pack!.dissolved[unknown]!.formula} is unknown, so the fill may reach anything from its start to its full-dissolution temperature; give a solubility (g per 100 g water) with the candidate to rank it`);
       const row: ScreenRow = {
         line: at,
         status: 'computed',

@@ -7,6 +7,7 @@
 import { saltArgument } from '../chem/saltArgument.js';
 import { optionsArgument } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
+import type { BoundedCache } from '../data/boundedCache.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import type { Salt } from '../chem/salt.js';
@@ -96,10 +97,10 @@ function waterFormation(dataset: Dataset): number | undefined {
  * nowhere ({@link dissolveUncached}: every call computes its salt afresh
  * from the dataset's indexes).
  */
-type ProfileStore = Map<string, SaltProfile> | undefined;
+type ProfileStore = BoundedCache<string, SaltProfile> | undefined;
 
-function profileStore(dataset: Dataset): Map<string, SaltProfile> {
-  return dataset.memo('solution.profiles', () => new Map<string, SaltProfile>());
+function profileStore(dataset: Dataset): BoundedCache<string, SaltProfile> {
+  return dataset.cache<string, SaltProfile>('solution.profiles');
 }
 
 /** The anhydrous salt of a hydrate, parsed; kept with the hydrate's profile where profiles are kept. */

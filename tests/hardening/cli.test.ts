@@ -190,7 +190,7 @@ describe('the command line under hostile arguments', () => {
     [['dissolve', 'NaCl', '--data'], /^ionheat: --data needs a file name/],
     [['cycle', 'NaCl', '--svg', '/nonexistent/dir/x.svg'], /^ionheat: .*x\.svg/],
     // Found with IONHEAT_FC_SEED=4: JSON.parse quotes the file's text, newlines and all, in its message.
-    [['salt', 'NaCl', '--data=good.csv'], /^ionheat: good\.csv: not valid JSON \(.*\)\n$/],
+    [['salt', 'NaCl', '--data=good.csv'], /^ionheat: good\.csv: not valid JSON at line 1, column 1 \(.*\)\n$/],
     [['screen', 'broken.csv', '--data', 'mixed.csv'], /^ionheat: mixed\.csv: not valid JSON/],
   ];
   // Fresh input files: the random runs above may have written charts over the scratch files.

@@ -68,7 +68,7 @@ describe('override files: each bad one is refused, naming the file, the record a
 
   it('a file that cannot be read is named, with the reason', () => {
     expect(() => loadDataset([join(dir, 'no-such-file.json')])).toThrow(/cannot read data file ".*no-such-file\.json": ENOENT/);
-    expect(() => loadDataset([dir])).toThrow(/cannot read data file ".*": EISDIR/);
+    expect(() => loadDataset([dir])).toThrow(/cannot read data file ".*": it is a directory, not a file/);
   });
 
   it('the built-in tables themselves lie within the plausible ranges', () => {

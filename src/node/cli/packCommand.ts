@@ -124,7 +124,9 @@ function jsonReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
       undissolvedMass: r(d.undissolvedMass, 4),
       undissolvedSolid: d.undissolvedSolid ? { formula: d.undissolvedSolid.formula, mass: r(d.undissolvedSolid.mass, 4) } : null,
       saturated: d.saturated,
-      solubility: d.solubility ? { ...d.solubility, value: r(d.solubility.value, 3) } : null,
+      solubilityStatus: d.solubilityStatus,
+      // three decimals, or three significant digits for a sparingly soluble salt
+      solubility: d.solubility ? { ...d.solubility, value: d.solubility.value < 1 ? Number(d.solubility.value.toPrecision(3)) : r(d.solubility.value, 3) } : null,
       enthalpyOfSolution: { value: d.enthalpyOfSolution.value, u: d.enthalpyOfSolution.u, unit: 'kJ/mol', basis: d.enthalpyOfSolution.basis, sources: d.enthalpyOfSolution.sources },
       integralEnthalpy: { value: r(d.integralEnthalpy.value, 4), low: r(d.integralEnthalpy.low, 4), high: r(d.integralEnthalpy.high, 4), u: r(d.integralEnthalpy.u, 4), unit: 'kJ/mol', basis: d.integralEnthalpy.basis, method: d.integralEnthalpy.method, sources: d.integralEnthalpy.sources },
       molality: r(d.molality, 4),

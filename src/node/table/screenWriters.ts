@@ -7,8 +7,10 @@
  */
 import type { Estimate } from '../../quantity/estimate.js';
 import { formatEstimate } from '../../quantity/formatEstimate.js';
+import { compareRanked, isRankable, type RankKey } from '../../screen/rankRows.js';
 import type { ScreenRow, ScreenSettings, ScreenSummary } from '../../screen/screenRow.js';
-import { textTable } from '../cli/textTable.js';
+import { textTable, textTableLines } from '../cli/textTable.js';
+import { escapeControls } from '../terminalText.js';
 import { csvCell } from './csvCell.js';
 import { csvRecord } from './csvRecord.js';
 import { screenColumns } from './screenColumns.js';
@@ -97,11 +99,71 @@ export function textTableOf(rows: readonly ScreenRow[], settings: ScreenSettings
 /** A Markdown table of collected rows, with the caution below it. */
 export function markdownTableOf(rows: readonly ScreenRow[], settings: ScreenSettings): string {
   const withCost = rows.some((r) => r.input.pricePerKg !== undefined);
-  const cell = (s: string) => s.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/[\r\n]+/g, ' ');
   const header = headerOf(settings, rows, withCost);
-  const lines = [`| ${header.map(cell).join(' | ')} |`, `| ${header.map((_, i) => (i <= 1 ? '---:' : '---')).join(' | ')} |`];
-  for (const r of rows) lines.push(`| ${cellsOf(r, settings, withCost).map(cell).join(' | ')} |`);
-  return `${lines.join('\n')}\n\n${CAUTION}\n`;
+  return [...markdownLines(header, rows.map((r) => cellsOf(r, settings, withCost)))].join('');
+}
+
+/** A Markdown table, a line at a time (each with its line end), the caution after it. */
+function* markdownLines(header: readonly string[], body: Iterable<readonly string[]>): Generator<string> {
+  const cell = (s: string) => escapeControls(s.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/[\r\n]+/g, ' '));
+  yield `| ${header.map(cell).join(' | ')} |\n`;
+  yield `| ${header.map((_, i) => (i <= 1 ? '---:' : '---')).join(' | ')} |\n`;
+  for (const cells of body) yield `| ${cells.map(cell).join(' | ')} |\n`;
+  yield `\n${CAUTION}\n`;
+}
+
+/** What a ranked table keeps of a row: its rank key and its cells (all columns but the rank), joined by NUL. */
+interface TableEntry extends RankKey {
+  rankable: boolean;
+  cells: string;
+}
+
+/** A ranked table built from rows as they come, keeping of each only its cells and what ranking needs. */
+export interface RankedTable {
+  add(row: ScreenRow): void;
+  /** The table's text, a line (or a few) at a time, rows ranked best first; unranked rows after, in input order. */
+  text(): Generator<string>;
+}
+
+/**
+ * Collects rows for the `table` and `md` formats. A row is reduced to its
+ * cells at once (control characters made visible, so NUL can join them), so
+ * a run of any length holds about a hundred bytes per row, never the rows.
+ */
+export function rankedTable(settings: ScreenSettings, format: 'table' | 'md'): RankedTable {
+  const entries: TableEntry[] = [];
+  let withCost = false;
+  let unit: string | undefined;
+  return {
+    add(row) {
+      if (row.input.pricePerKg !== undefined) withCost = true;
+      unit ??= row.objective?.unit;
+      const { rank: _ignored, ...unranked } = row;
+      const cells = cellsOf(unranked, settings, true).slice(1).map((c) => escapeControls(c)).join('\u0000');
+      const rankable = isRankable(row);
+      entries.push({ line: row.line, suitability: row.suitability, objective: rankable ? { value: row.objective!.value } : undefined, rankable, cells });
+    },
+    *text() {
+      const order = entries.filter((e) => e.rankable).sort((a, b) => compareRanked(a, b, settings.objective, settings.direction));
+      const rankOf = new Map<TableEntry, number>(order.map((e, i) => [e, i + 1]));
+      const costAt = 5; // the cost column follows rank, line, salt, objective, basis, verdict (rank left out here)
+      const rowsInOrder = [...order, ...entries.filter((e) => !e.rankable)];
+      entries.length = 0;
+      function* body(): Generator<string[]> {
+        for (const e of rowsInOrder) {
+          const cells = e.cells.split('\u0000');
+          if (!withCost) cells.splice(costAt, 1);
+          yield [rankOf.has(e) ? String(rankOf.get(e)) : '', ...cells];
+        }
+      }
+      const header = headerOf(settings, unit ? [{ objective: { unit } } as ScreenRow] : [], withCost);
+      if (format === 'md') yield* markdownLines(header, body());
+      else {
+        for (const line of textTableLines(header, body, new Set([0, 1]))) yield `${line}\n`;
+        yield `\n${CAUTION}\n`;
+      }
+    },
+  };
 }
 
 /** The one-line summary of a run. */
