@@ -4,7 +4,7 @@
  * @module
  */
 import { saltArgument } from '../chem/saltArgument.js';
-import { optionsArgument } from '../quantity/argumentChecks.js';
+import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -14,6 +14,8 @@ import { exactSum } from '../quantity/exactSum.js';
 import { linearUncertainty } from '../quantity/propagate.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { gaseousIon } from './gaseousIon.js';
+
+const CYCLE_LATTICE_OPTIONS = optionNames<CycleLatticeOptions>('cycleLatticeEnthalpy', { hideCrystal: true });
 
 /** Options of {@link cycleLatticeEnthalpy}. */
 export interface CycleLatticeOptions {
@@ -44,7 +46,7 @@ export interface CycleLatticeOptions {
  */
 export function cycleLatticeEnthalpy(salt: Salt | string, dataset: Dataset = builtinDataset(), options: CycleLatticeOptions = {}): Estimate | undefined {
   const s = saltArgument(salt, dataset);
-  options = optionsArgument(options);
+  options = optionsArgument(options, CYCLE_LATTICE_OPTIONS);
   if (s.kind !== 'ionic' || s.water > 0 || options.hideCrystal) return undefined;
   const cache = dataset.cache<string, Estimate | null>('cycle.latticeCache', CACHE_LIMIT);
   let hit = cache.get(s.formula);

@@ -9,7 +9,7 @@
  * @module
  */
 import { saltArgument } from '../chem/saltArgument.js';
-import { describeValue, numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
+import { describeValue, numberArgument, optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -20,6 +20,9 @@ import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { calibrationChargeType, calibrationGroups, calibrationStats, saltCationCore, saltIonKind, type CalibrationStats } from './latticeCalibration.js';
 import { latticeModels, PointFailure, prepareLatticeSalt, tryLatticeModelPoint, type LatticeModel, type LatticeModelOptions, type ModelPoint } from './latticeModel.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+
+/** The option names of the lattice estimates. @internal */
+export const LATTICE_ESTIMATE_OPTIONS = optionNames<LatticeEstimateOptions>('latticeEstimate', { structure: true, latticeParameter: true, coordination: true, excludeSalt: true });
 
 export { cycleLatticeEnthalpy, type CycleLatticeOptions } from '../cycle/cycleLatticeEnthalpy.js';
 export type { LatticeModel, LatticeModelOptions } from './latticeModel.js';
@@ -48,7 +51,7 @@ const CORRECTED = '-corrected';
  * `coordination` are finite numbers, else `INVALID_ARGUMENT` naming the field.
  */
 function latticeOptions(options: LatticeEstimateOptions | undefined): LatticeEstimateOptions {
-  const o = optionsArgument(options);
+  const o = optionsArgument(options, LATTICE_ESTIMATE_OPTIONS);
   for (const k of ['structure', 'excludeSalt'] as const) {
     if (o[k] !== undefined && typeof o[k] !== 'string') throw new IonheatError('INVALID_ARGUMENT', `${k} must be text when given, got ${describeValue(o[k])}`, { field: k });
   }

@@ -6,13 +6,14 @@
  *
  * @module
  */
-import { describeValue } from '../quantity/argumentChecks.js';
+import { describeValue, checkOptionKeys, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { BoundedCache } from '../data/boundedCache.js';
 import type { HazardClass, SourceEntry } from '../data/schemas.js';
 import { hazardClassSchema } from '../data/schemas.js';
 import { parseSalt } from '../chem/parseSalt.js';
+import { typoSuspicion } from '../chem/typoSuspicion.js';
 import { findIon } from '../chem/ionIndex.js';
 import { isIssuedSalt } from '../chem/issuedSalts.js';
 import { saltRecords } from '../chem/saltRecords.js';
@@ -118,10 +119,15 @@ type Computed =
   | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; warmer: WarmerOutcome | undefined; hazards: HazardSummary }
   | { ok: false; salt?: Salt; error: IonheatError };
 
+const SCREEN_OPTIONS = optionNames<ScreenOptions>('the screen', { objective: true, direction: true, spec: true, filters: true, excludeMeasured: true, sources: true, fill: true });
+const FILTER_KEYS = optionNames<ScreenFilters>('the screen filters', { excludeSalts: true, excludeIons: true, excludeHazards: true, minMolarMass: true, maxMolarMass: true });
+const FILL_SPEC_KEYS = optionNames<FillSpec>('a standard fill', { saltMassG: true, waterMassG: true, startC: true });
+
 /** A fill as given, checked: positive masses, a start where water is liquid. */
 function checkFill(fill: FillSpec | string): FillSpec {
   if (typeof fill === 'string') return parseFillSpec(fill);
   if (fill === null || typeof fill !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'fill: a standard fill is { saltMassG, waterMassG, startC } or text such as 40:80@22', { field: 'fill' });
+  checkOptionKeys(fill, FILL_SPEC_KEYS, 'fill');
   const { saltMassG, waterMassG, startC } = fill;
   const ok = (x: unknown): x is number => typeof x === 'number' && Number.isFinite(x);
   if (!ok(saltMassG) || saltMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.saltMassG must be a positive number of grams, got ${describeValue(saltMassG)}`, { field: 'fill.saltMassG' });
@@ -184,6 +190,7 @@ function deepFreeze<T>(value: T): T {
 
 function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<string>; ions: Set<string>; hazards: Set<HazardClass> } {
   if (filters === null || typeof filters !== 'object') throw new IonheatError('INVALID_ARGUMENT', `filters must be an object, got ${describeValue(filters)}`, { field: 'filters' });
+  checkOptionKeys(filters, FILTER_KEYS, 'filters');
   for (const k of ['excludeSalts', 'excludeIons', 'excludeHazards'] as const) {
     const v: unknown = filters[k];
     if (v !== undefined && !(Array.isArray(v) && v.every((x) => typeof x === 'string'))) throw new IonheatError('INVALID_ARGUMENT', `${k} must be a list of text when given, got ${describeValue(v)}`, { field: k });
@@ -227,6 +234,7 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
 export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
   if (options === null || typeof options !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
   options = ownOptions(options);
+  checkOptionKeys(options, SCREEN_OPTIONS, 'options');
   const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
   const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
   if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: ${describeValue(options.objective)} is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
@@ -414,13 +422,16 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       const { salt, result, hazards, pack, warmer } = computed;
       const excludedBy = exclusion(salt, () => hazards);
       if (excludedBy !== undefined) {
-        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements });
+        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements, hazardData: hazards.data });
       }
       const notes: string[] = [];
       if (input.measuredEnthalpy !== undefined) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
       if (input.solubility !== undefined) notes.push(`solubility ${input.solubility} g/100 g H2O from the screening input (source ${input.source ?? 'screenInput'}), taken as the same at every temperature${fill ? '' : '; it matters only to a fill'}`);
       if (pack && excludeMeasured) notes.push('the standard fill uses the enthalpy of solution the pack model finds, measured values included: excludeMeasured hides them from dissolve only');
       if (first !== undefined) notes.push(`the same candidate as line ${first}`);
+      // A formula that reads through a likely slip is computed (both readings are real salts) but never ranked silently.
+      const typo = read.salt ? undefined : typoSuspicion(input.formula, salt, dataset);
+      if (typo) notes.push(typo.message);
       const cost = input.pricePerKg === undefined ? undefined : costPerKJ(input.pricePerKg, result.perGram.salt, direction);
       if (input.pricePerKg !== undefined && cost === undefined) notes.push(`no cost per kJ: the 95 % interval of the heat per gram reaches zero or the wrong sign for ${direction === 'cool' ? 'cooling' : 'heating'}`);
       if (warmer && !warmer.ok) notes.push(`no standard warmer (100 g triggered at 20 °C): ${warmer.why}`);
@@ -439,9 +450,11 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         notes: notes.length > 0 ? [...result.notes, ...notes] : result.notes,
         hazards: hazards.classes,
         cautions: hazards.statements,
+        hazardData: hazards.data,
         ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
         ...(warmerRow ? { warmer: warmerRow } : {}),
-        suitability: suitabilityOf(result.verdict, direction),
+        suitability: typo ? 'undetermined' : suitabilityOf(result.verdict, direction),
+        ...(typo ? { suspectedTypo: { suggestion: typo.suggestion, message: typo.message } } : {}),
         ...(objectiveValue ? { objective: objectiveValue } : {}),
         ...(cost ? { costPerKJ: cost } : {}),
       };

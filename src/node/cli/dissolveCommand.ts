@@ -3,9 +3,10 @@ import { formatSalt } from '../../chem/formatSalt.js';
 import type { Salt } from '../../chem/salt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { dissolve, type DissolveResult } from '../../solution/dissolve.js';
-import { saltHazards } from '../../pack/saltHazards.js';
+import { hazardCoverage, saltHazards } from '../../pack/saltHazards.js';
 import { integralEnthalpyOfSolution } from '../../solution/integralEnthalpy.js';
 import { numberOption, readArgs } from './args.js';
+import { userSourceOf } from '../../solution/userValueCheck.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
 
@@ -15,7 +16,10 @@ const GENERAL_CAUTION =
 
 /** Hazard statements of the salt (a hydrate shares its anhydrous salt's) and of its ions, from hazards.json. */
 function cautionsFor(salt: Salt, dataset: Dataset): string[] {
-  return saltHazards(salt, dataset).map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
+  const found = saltHazards(salt, dataset).map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
+  const coverage = hazardCoverage(salt, dataset);
+  if (coverage.status === 'no hazard data') found.push(`No hazard data: the hazards table has no record for ${coverage.missingIons.join(' or ')}, which is not a sign of safety; check the safety data sheet.`);
+  return found;
 }
 
 const rounded = (e: Estimate | undefined): Estimate | undefined => (e ? roundEstimate(e) : undefined);
@@ -41,9 +45,16 @@ function toJson(r: DissolveResult, cautions: string[], integral: { molality: num
 
 const signed = (x: number): string => (x > 0 ? `+${x}` : String(x));
 
-function line(e: Estimate): string[] {
+function line(e: Estimate, dataset: Dataset): string[] {
   const r = roundEstimate(e);
-  return [r.basis, r.method, `${signed(r.value)} ± ${r.u}`, `${signed(r.low)} … ${signed(r.high)}`];
+  const mine = userSourceOf(e, dataset);
+  return [mine ? `${r.basis} (your value)` : r.basis, r.method, `${signed(r.value)} ± ${r.u}`, `${signed(r.low)} … ${signed(r.high)}`];
+}
+
+/** `measured, table`, or `your value from my-values.json (myLab)` where a user's own value is in use. */
+function basisText(e: Estimate, dataset: Dataset): string {
+  const mine = userSourceOf(e, dataset);
+  return mine ? `${e.basis}, your value: ${e.sources.join(', ')} in ${mine}` : `${e.basis}, ${e.method}`;
 }
 
 const VERDICT_WORDS = { endothermic: 'endothermic — dissolving absorbs heat (cools)', exothermic: 'exothermic — dissolving releases heat (heats)', undetermined: 'undetermined — the 95 % interval spans zero' } as const;
@@ -79,7 +90,7 @@ export const dissolveCommand: Command = {
     const best = roundEstimate(r.best);
     const out: string[] = [];
     out.push(`${formatSalt(r.salt, { style: 'unicode' })}  (${r.salt.molarMass.toFixed(2)} g/mol)`);
-    out.push(`Enthalpy of solution at infinite dilution, ${r.temperature.celsius} °C: ${signed(best.value)} ± ${best.u} kJ/mol (${best.basis}, ${best.method}); 95 % interval ${signed(best.low)} … ${signed(best.high)}`);
+    out.push(`Enthalpy of solution at infinite dilution, ${r.temperature.celsius} °C: ${signed(best.value)} ± ${best.u} kJ/mol (${basisText(r.best, dataset)}); 95 % interval ${signed(best.low)} … ${signed(best.high)}`);
     if (integral) {
       const i = roundEstimate(integral.estimate);
       out.push(`Integral enthalpy of solution to ${integral.molality} mol/kg, ${r.temperature.celsius} °C: ${signed(i.value)} ± ${i.u} kJ/mol (${i.method}); 95 % interval ${signed(i.low)} … ${signed(i.high)}`);
@@ -93,7 +104,7 @@ export const dissolveCommand: Command = {
     }
     out.push('', 'Every estimate (kJ/mol, + = endothermic; ± is one standard uncertainty):', '');
     io.stdout(out.join('\n') + '\n');
-    io.stdout(textTable(['basis', 'method', 'value', '95 % interval'], r.estimates.map(line), new Set([2, 3])));
+    io.stdout(textTable(['basis', 'method', 'value', '95 % interval'], r.estimates.map((e) => line(e, dataset)), new Set([2, 3])));
     const tail: string[] = [];
     if (r.hydration?.absolute) {
       const h = roundEstimate(r.hydration.absolute);

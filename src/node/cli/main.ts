@@ -8,6 +8,7 @@
 import { builtinDataset } from '../../data/builtin.js';
 import { isIonheatError } from '../../error.js';
 import { loadDataset } from '../loadDataset.js';
+import { didYouMean } from '../../quantity/nearestName.js';
 import type { Command } from './command.js';
 import { demoCommand } from './demoCommand.js';
 import { processIO, type CliIO, type ProcessIO } from './io.js';
@@ -76,7 +77,7 @@ function takeDataFiles(argv: readonly string[]): { files: string[]; rest: string
  * await runCli(['salt', 'NaCl'], io); // 0
  * out.includes('58.44'); // true (g/mol)
  * await runCli(['salt', 'NaXy'], io); // 2
- * err; // 'ionheat: "Xy" at position 2 is not a chemical element\n'
+ * err; // 'ionheat: "Xy" at position 3 is not a chemical element\n'
  * ```
  */
 export async function runCli(argv: readonly string[], io?: CliIO): Promise<number> {
@@ -101,7 +102,7 @@ async function dispatch(argv: readonly string[], io: CliIO): Promise<number> {
     if (name === undefined || name === 'help' || name === '--help' || name === '-h') {
       const topic = name === 'help' ? commands.find((c) => c.name === args[0]) : undefined;
       if (name === 'help' && args[0] !== undefined && !topic) {
-        io.stderr(`ionheat: no command "${escapeControls(args[0])}"; try: ionheat help\n`);
+        io.stderr(`ionheat: no command "${escapeControls(args[0])}"${didYouMean(args[0], commands.map((c) => c.name))}; try: ionheat help\n`);
         return 2;
       }
       io.stdout(topic ? `${topic.summary}\n\n${topic.usage}\n` : overview());
@@ -113,7 +114,7 @@ async function dispatch(argv: readonly string[], io: CliIO): Promise<number> {
     }
     const command = commands.find((c) => c.name === name);
     if (!command) {
-      io.stderr(`ionheat: no command "${escapeControls(name)}"; the commands are ${commands.map((c) => c.name).join(', ')} (ionheat help)\n`);
+      io.stderr(`ionheat: no command "${escapeControls(name)}"${didYouMean(name, [...commands.map((c) => c.name), 'help'])}; the commands are ${commands.map((c) => c.name).join(', ')} (ionheat help)\n`);
       return 2;
     }
     if (args.includes('--help') || args.includes('-h')) {

@@ -47,6 +47,7 @@ ionheat screen --enumerate [options]
   --spec "<condition>"   a condition every row must meet, on the fields of the JSON output,
                          e.g. "best.low > 0 and not ('oxidizer' in hazards)"
   --format <f>           table (default), csv, json or md; csv and json stream in input order
+  --json                 the same as --format json
   --svg <file>           also write the ranked interval chart as SVG
   --exclude-measured     hide each salt's own measured values (see how the estimates do)
 
@@ -77,13 +78,15 @@ export const screenCommand: Command = {
         format: { type: 'string' },
         svg: { type: 'string' },
         'exclude-measured': { type: 'boolean' },
+        json: { type: 'boolean' },
       },
       { min: 0, max: 1, names: 'the candidate file (or - for standard input, or --enumerate)' },
     );
     const path = positionals[0];
     if (path === undefined && !values.enumerate) throw new IonheatError('INVALID_ARGUMENT', 'missing the candidate file (a .csv or .json file, - for standard input, or --enumerate)', {});
     if (path !== undefined && values.enumerate) throw new IonheatError('INVALID_ARGUMENT', 'give either a candidate file or --enumerate, not both', {});
-    const format = (values.format ?? 'table') as Format;
+    if (values.json && values.format !== undefined && values.format !== 'json') throw new IonheatError('INVALID_ARGUMENT', `--json asks for JSON output but --format asks for ${values.format}; give one of them`, { field: 'format' });
+    const format = (values.format ?? (values.json ? 'json' : 'table')) as Format;
     if (!FORMATS.includes(format)) throw new IonheatError('INVALID_ARGUMENT', `--format must be one of ${FORMATS.join(', ')}, got "${values.format}"`, { field: 'format' });
     if (values.objective !== undefined && !objectiveNameSchema.safeParse(values.objective).success) {
       throw new IonheatError('INVALID_ARGUMENT', `--objective must be one of ${objectiveNameSchema.options.join(', ')}, got "${values.objective}"`, { field: 'objective' });
@@ -92,6 +95,9 @@ export const screenCommand: Command = {
       throw new IonheatError('INVALID_ARGUMENT', `--direction must be cool or heat, got "${values.direction}"`, { field: 'direction' });
     }
     if (values.svg !== undefined && values.svg.trim() === '') throw new IonheatError('INVALID_ARGUMENT', '--svg needs a file name', { field: 'svg' });
+    if (values.objective === 'cost-per-kj' && path === undefined) {
+      throw new IonheatError('INVALID_ARGUMENT', '--objective cost-per-kj ranks by price, and --enumerate has no prices: give a candidate file with a pricePerKg column', { field: 'objective' });
+    }
     const fill = values.fill !== undefined ? parseFillSpec(values.fill) : undefined;
     const objective = (values.objective as ObjectiveName | undefined) ?? (fill ? 'fill-temperature' : 'enthalpy');
     const screener = createScreener(
@@ -157,6 +163,7 @@ export const screenCommand: Command = {
 
     let count = 0;
     let fatal: unknown;
+    let pricedAny = false;
     try {
       for await (const batch of records as AsyncIterable<InputRecord[]>) {
         if (io.interrupted?.()) break;
@@ -167,6 +174,7 @@ export const screenCommand: Command = {
           }
           startWriter();
           const row = record.kind === 'candidate' ? screener.row(record.candidate, record.line) : screener.unreadable(record.line, { formula: record.formula ?? '' }, record.error);
+          if (row.costPerKJ !== undefined) pricedAny = true;
           // With the reader gone the rows are still computed (the exit status depends on them), but not written.
           if (!gone()) {
             if (writer) pending += writer.row(row);
@@ -224,6 +232,10 @@ export const screenCommand: Command = {
       return signal !== undefined ? 128 + (osConstants.signals[signal] ?? 0) : 2;
     }
     if (chartFailure) io.stderr(`ionheat: ${escapeControls(chartFailure.message)}\n`);
+    if (settings.objective === 'cost-per-kj' && !pricedAny) {
+      io.stderr('ionheat: --objective cost-per-kj needs a pricePerKg for the candidates, and no row had one; nothing was ranked (add a pricePerKg column, or rank by another objective)\n');
+      return 2;
+    }
     if (summary.failed > 0) return 2;
     if (summary.specFailed > 0) return 1;
     return chartFailure ? 2 : 0;

@@ -68,7 +68,7 @@ function cellsOf(row: ScreenRow, settings: ScreenSettings, withCost: boolean): s
     row.status === 'computed' ? (row.verdict ?? '') : '',
   ];
   if (withCost) cells.push(estimateText(row.costPerKJ));
-  cells.push(row.hazards && row.hazards.length > 0 ? row.hazards.join(', ') : '');
+  cells.push(row.hazards && row.hazards.length > 0 ? row.hazards.join(', ') : row.hazardData === 'no hazard data' ? 'no hazard data' : row.hazardData === 'not classified' ? 'none classified' : '');
   if (settings.spec !== null) cells.push(row.spec ? (row.spec.holds ? 'holds' : `fails: ${row.spec.reason ?? ''}`) : '');
   const notes = [status, row.duplicateOf !== undefined ? `same as line ${row.duplicateOf}` : '', row.input.note ?? ''].filter((s) => s !== '');
   cells.push(notes.join('; '));
