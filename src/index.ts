@@ -67,7 +67,9 @@ export { gaseousIonFormationEnthalpy } from './hydration/gaseousIonFormation.js'
 export { solubilityFromProduct, type SolubilityFromProduct } from './brine/solubilityFromProduct.js';
 
 // The enthalpy of solution
+export { brineFreezingPoint } from './brine/brineFreezingPoint.js';
 export { dissolve, type DissolveOptions, type DissolveResult } from './solution/dissolve.js';
+export { integralEnthalpyOfSolution } from './solution/integralEnthalpy.js';
 export { solutionVerdict, type Verdict } from './solution/verdict.js';
 export { measuredSolutionEnthalpy } from './solution/measuredSolution.js';
 export { solutionEnthalpyFromCycle } from './solution/cycleSolution.js';

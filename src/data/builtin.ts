@@ -32,6 +32,7 @@ import madelungConstants from '../../data/madelung-constants.json';
 import bornExponents from '../../data/born-exponents.json';
 import volumeCoefficients from '../../data/volume-coefficients.json';
 import hazards from '../../data/hazards.json';
+import brinePitzer from '../../data/brine-pitzer.json';
 import warmerMelts from '../../data/warmer-melts.json';
 
 let builtin: Dataset | undefined;
@@ -74,6 +75,7 @@ export function builtinDataset(): Dataset {
       'born-exponents.json': bornExponents,
       'volume-coefficients.json': volumeCoefficients,
       'hazards.json': hazards,
+      'brine-pitzer.json': brinePitzer,
       'warmer-melts.json': warmerMelts,
     } as unknown as Tables,
     sources.sources as Record<string, SourceEntry>,

@@ -234,6 +234,23 @@ export const heatCapacityRecordSchema = z.strictObject({
   ...provenance,
 });
 
+/** Coefficients A0…A5 of a Pitzer parameter's temperature function (see data/brine-pitzer.json). */
+const pitzerCoefficients = z.array(finite).min(1).max(6);
+export const brinePitzerRecordSchema = z.strictObject({
+  /** The salt, anhydrous. */
+  formula: formulaTextSchema,
+  beta0: pitzerCoefficients,
+  beta1: pitzerCoefficients,
+  beta2: pitzerCoefficients.optional(),
+  cphi: pitzerCoefficients,
+  alpha1: positive,
+  alpha2: positive.optional(),
+  /** Highest molality of the fit, mol/kg. */
+  maxMolality: positive,
+  ...provenance,
+});
+const waterConstant = z.strictObject({ value: positive, unit: z.string().min(1), ...provenance });
+
 export const ionizationRecordSchema = z.strictObject({
   element: z.string().regex(/^[A-Z][a-z]?$/),
   /** 1 for M → M⁺, 2 for M⁺ → M²⁺, … */
@@ -387,6 +404,16 @@ export const tableSchemas = {
   'born-exponents.json': table(bornExponentRecordSchema),
   'volume-coefficients.json': table(volumeCoefficientRecordSchema),
   'hazards.json': table(hazardRecordSchema),
+  'brine-pitzer.json': table(brinePitzerRecordSchema, {
+    /** Constants of water and ice the brine module needs. */
+    water: z.strictObject({
+      fusionEnthalpy: waterConstant,
+      fusionHeatCapacity: waterConstant,
+      iceSpecificHeat: waterConstant,
+      vaporizationEnthalpy: waterConstant,
+      molarMass: waterConstant,
+    }),
+  }),
   'warmer-melts.json': table(warmerMeltRecordSchema),
 } as const;
 
@@ -406,6 +433,7 @@ export type CrystalRecord = z.infer<typeof crystalRecordSchema>;
 export type SolubilityRecord = z.infer<typeof solubilityRecordSchema>;
 export type SolubilityProductRecord = z.infer<typeof solubilityProductRecordSchema>;
 export type HeatCapacityRecord = z.infer<typeof heatCapacityRecordSchema>;
+export type BrinePitzerRecord = z.infer<typeof brinePitzerRecordSchema>;
 export type IonizationRecord = z.infer<typeof ionizationRecordSchema>;
 export type ElectronAffinityRecord = z.infer<typeof electronAffinityRecordSchema>;
 export type AtomizationRecord = z.infer<typeof atomizationRecordSchema>;

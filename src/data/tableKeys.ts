@@ -28,5 +28,6 @@ export const tableKeys: { [N in TableName]: (record: TableRecord<N>) => string }
   'born-exponents.json': (r) => r.core,
   'volume-coefficients.json': (r) => r.chargeType,
   'hazards.json': (r) => r.subject,
+  'brine-pitzer.json': (r) => r.formula,
   'warmer-melts.json': (r) => r.formula,
 };

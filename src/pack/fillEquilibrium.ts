@@ -8,8 +8,10 @@
  *
  * @module
  */
-import { freezingPointOfSolution } from './freezingPoint.js';
 import type { PreparedFill, PreparedPhase } from './packFill.js';
+import { brineApparentTerms, brineApparentWith, brineHeatCapacityU, brineOsmoticTerms, brineOsmoticU, brineOsmoticWith, enthalpyAllowance } from '../brine/brineProperties.js';
+import { boilingWaterActivityLn, fusionEnthalpyAt, iceWaterActivityLn } from '../brine/waterPhases.js';
+import { ZERO_CELSIUS_K } from '../brine/debyeHuckelSlopes.js';
 import { solubilityAt, type SolubilityAt } from './solubilityCurve.js';
 
 /**
@@ -22,6 +24,10 @@ export interface Perturbation {
   enthalpyShift?: readonly number[];
   phaseShift?: readonly number[];
   heatCapacityRelative?: number;
+  /** Standard normal shifts of each solid's φL, of its φJ, and of every osmotic coefficient (in units of their standard uncertainties). */
+  brineEnthalpyZ?: readonly number[];
+  brineHeatCapacityZ?: readonly number[];
+  osmoticZ?: number;
 }
 
 /** One solid in the state at T. @internal */
@@ -38,11 +44,17 @@ export interface SolidEquilibrium {
   undissolvedWater: number;
   /** True when the undissolved solid takes up (or gives off) water to become the equilibrium solid. */
   converts: boolean;
+  /** Molality of this salt in the final liquid, mol/kg. */
+  molality: number;
+  /** The integral enthalpy of solution to that molality used, kJ/mol of the loaded formula: ΔsolH°(∞) + φL. */
+  integralEnthalpy: number;
+  /** Its standard uncertainty from φL, kJ/mol. */
+  integralEnthalpyU: number;
   /** J absorbed by dissolving. */
   dissolutionJ: number;
   /** J absorbed by the conversion of the undissolved solid. */
   conversionJ: number;
-  /** J/(K) this solid adds: dissolved part (crystal Cp°) plus undissolved part. */
+  /** J/K this solid adds: dissolved part (φCp° + φJ) plus undissolved part. */
   heatCapacityDissolved: number;
   heatCapacityUndissolved: number;
 }
@@ -59,12 +71,19 @@ export interface FillEquilibrium {
   heatJ: number;
   /** J/K. */
   heatCapacity: number;
-  heatCapacityParts: { water: number; dissolved: number; undissolved: number; container: number };
-  /** Lowest temperature the solution stays liquid at, °C, and what sets it. */
-  floorC: number;
-  floorKind: 'freezing' | 'eutectic' | 'none';
-  /** Ideal freezing point of the solution, °C (undefined without liquid water). */
-  freezingPointC: number | undefined;
+  heatCapacityParts: { water: number; dissolved: number; undissolved: number; container: number; ice: number };
+  /** Grams of ice. */
+  iceG: number;
+  /** J absorbed by the ice that formed (negative: freezing releases heat). */
+  iceJ: number;
+  /** True when no liquid can exist at this temperature (below the salt–ice eutectic). */
+  frozen: boolean;
+  /** True when the brine would boil at this temperature. */
+  boiling: boolean;
+  /** Share of the brine frozen out together with salt at the eutectic (0 elsewhere). */
+  eutecticFraction: number;
+  /** ln a_w of the liquid (computed only below 0 °C and above 99 °C; NaN between). */
+  waterActivityLn: number;
 }
 
 /** xᵢ = min(1, W/W*ᵢ): the share of salt i that W grams of water dissolve (1 without solubility data). */
@@ -111,9 +130,26 @@ export interface FillScratch {
   waterCp: number;
   dissolvedCp: number;
   undissolvedCp: number;
-  floorC: number;
-  floorKind: 'freezing' | 'eutectic' | 'none';
-  freezingPointC: number | undefined;
+  iceCp: number;
+  iceG: number;
+  iceJ: number;
+  frozen: boolean;
+  boiling: boolean;
+  /** Set by the solver at a eutectic hold: the share of the brine frozen out with salt. */
+  holdFraction: number;
+  waterActivityLn: number;
+  /** Loaded plus crystal water, water the loaded solids hold, and the water their conversion to the equilibrium hydrate needs, g. */
+  totalWater: number;
+  heldAsLoaded: number;
+  hydrationNeed: number;
+  molality: number[];
+  /** Per solid, the temperature-dependent terms of φ at the temperature of this evaluation. */
+  osmoticTerms: Float64Array[];
+  /** Per solid, the terms of φL and of φJ at the start temperature (fixed for the solve). */
+  enthalpyTerms: Float64Array[];
+  heatCapacityTerms: Float64Array[];
+  integralEnthalpy: number[];
+  integralEnthalpyU: number[];
 }
 
 /** n zeros in a plain array (small typed arrays cost more to allocate than they save here). */
@@ -146,44 +182,41 @@ export function fillScratch(fill: PreparedFill): FillScratch {
     waterCp: 0,
     dissolvedCp: 0,
     undissolvedCp: 0,
-    floorC: 0,
-    floorKind: 'none',
-    freezingPointC: undefined,
+    iceCp: 0,
+    iceG: 0,
+    iceJ: 0,
+    frozen: false,
+    boiling: false,
+    holdFraction: 0,
+    waterActivityLn: 0,
+    totalWater: 0,
+    heldAsLoaded: 0,
+    hydrationNeed: 0,
+    molality: zeros(n),
+    osmoticTerms: Array.from({ length: n }, () => new Float64Array(5)),
+    enthalpyTerms: fill.solids.map((s) => {
+      const out = new Float64Array(5);
+      brineApparentTerms(s.brine, 'enthalpy', fill.startC + ZERO_CELSIUS_K, out);
+      return out;
+    }),
+    heatCapacityTerms: fill.solids.map((s) => {
+      const out = new Float64Array(5);
+      brineApparentTerms(s.brine, 'heatCapacity', fill.startC + ZERO_CELSIUS_K, out);
+      return out;
+    }),
+    integralEnthalpy: zeros(n),
+    integralEnthalpyU: zeros(n),
   };
 }
 
-/**
- * The state of the fill held at temperature t (°C), written into `w`.
- *
- * Solubility: salt i dissolves up to Sᵢ(t)·W/100 grams of anhydrous salt in
- * W grams of liquid water. W is the loaded water plus the crystal water of
- * everything loaded, less the water the undissolved solid holds as its
- * equilibrium hydrate; it is solved exactly (the balance is piecewise linear
- * in W). A salt without solubility data dissolves completely.
- *
- * Heat: Σ nᵢ·[xᵢ·ΔsolHᵢ + (1 − xᵢ)·(ΔsolHᵢ − ΔsolH(equilibrium solid))], the
- * second term being the heat of the undissolved solid turning into the
- * equilibrium hydrate (or losing water) where that solid differs from the
- * loaded one and its enthalpy of solution is known.
- *
- * Heat capacity from the parts: liquid water × c(water) + dissolved salt ×
- * Cp°(anhydrous crystal) + undissolved solid × its Cp° + container (Kopp-style
- * additivity; good to a few per cent for concentrated solutions, an
- * overestimate for dilute ones, allowed for in the uncertainty).
- *
- * Floor: the ideal freezing point of the solution, and the salt–ice eutectic
- * of a salt that is alone in the fill or saturated.
- *
- * @internal
- */
-export function evaluateFill(fill: PreparedFill, t: number, perturbation: Perturbation, w: FillScratch): void {
+/** Solubility, equilibrium solid and water need of each salt at t, into `w`; the water totals into `needs`. */
+function solubilityState(fill: PreparedFill, t: number, w: FillScratch): void {
   const mw = fill.waterMolarMass;
   const list = fill.solids;
-  const n = list.length;
   let totalWater = fill.waterG;
   let heldAsLoaded = 0;
   let hydrationNeed = 0;
-  for (let i = 0; i < n; i++) {
+  for (let i = 0; i < list.length; i++) {
     const s = list[i]!;
     totalWater += s.moles * s.salt.water * mw;
     if (!s.curve) {
@@ -207,85 +240,241 @@ export function evaluateFill(fill: PreparedFill, t: number, perturbation: Pertur
     heldAsLoaded += s.moles * s.salt.water * mw;
     if (c) hydrationNeed += s.moles * (w.phaseWater[i]! - s.salt.water) * mw;
   }
+  w.totalWater = totalWater;
+  w.heldAsLoaded = heldAsLoaded;
+  w.hydrationNeed = hydrationNeed;
+}
 
-  // Liquid water W solves g(W) = W − Wtot + Σ bᵢ·(1 − xᵢ(W)) = 0 with xᵢ = min(1, W/W*ᵢ) and
-  // bᵢ = nᵢ·sᵢ·M(H2O) the water salt i holds when undissolved: piecewise linear, solved exactly.
-  let liquid = totalWater;
+/**
+ * Liquid water W and the dissolved shares when `available` grams of water
+ * (loaded and crystal water, less any ice) are shared between solution and
+ * undissolved hydrate: W solves g(W) = W − available + Σ bᵢ·(1 − xᵢ(W)) = 0
+ * with xᵢ = min(1, W/W*ᵢ), piecewise linear, solved exactly.
+ */
+function shareWater(fill: PreparedFill, available: number, w: FillScratch): void {
+  const n = fill.solids.length;
+  let liquid = available;
   let hydrationFraction = 1;
-  const g0 = waterBalance(0, totalWater, w.limited, w.waterToDissolve, w.holds);
+  const g0 = waterBalance(0, available, w.limited, w.waterToDissolve, w.holds);
   if (g0 >= 0) {
     // Too little water to hydrate all the undissolved solid: it all goes into hydrate, none is left liquid.
     liquid = 0;
-    hydrationFraction = hydrationNeed > 0 ? Math.min(1, Math.max(0, (totalWater - heldAsLoaded) / hydrationNeed)) : 1;
+    hydrationFraction = w.hydrationNeed > 0 ? Math.min(1, Math.max(0, (available - w.heldAsLoaded) / w.hydrationNeed)) : 1;
   } else {
     let w0 = 0;
     let gw0 = g0;
     for (;;) {
-      // The next breakpoint above w0 (or the total water).
-      let w1 = totalWater;
+      let w1 = available;
       for (let i = 0; i < n; i++) {
         const b = w.waterToDissolve[i]!;
         if (w.limited[i] === 1 && b > w0 && b < w1) w1 = b;
       }
-      const gw1 = waterBalance(w1, totalWater, w.limited, w.waterToDissolve, w.holds);
+      const gw1 = waterBalance(w1, available, w.limited, w.waterToDissolve, w.holds);
       if (gw1 >= 0) {
         liquid = gw1 === gw0 ? w1 : w0 - (gw0 * (w1 - w0)) / (gw1 - gw0);
         break;
       }
-      if (w1 >= totalWater) break;
+      if (w1 >= available) break;
       w0 = w1;
       gw0 = gw1;
     }
   }
+  w.liquidWaterG = liquid;
+  w.hydrationFraction = hydrationFraction;
+  for (let i = 0; i < n; i++) {
+    w.fraction[i] = dissolvedFraction(liquid, w.limited[i]!, w.waterToDissolve[i]!);
+    const s = fill.solids[i]!;
+    w.molality[i] = liquid > 0 ? (1000 * s.moles * w.fraction[i]!) / liquid : Infinity;
+  }
+}
 
+/** ln a_w = −Mw·Σνᵢmᵢφᵢ of the liquid at tK (each salt's φ at its own molality; mixing ignored). */
+function waterActivityLn(fill: PreparedFill, tK: number, perturbation: Perturbation, w: FillScratch): number {
+  if (!(w.liquidWaterG > 0)) return -Infinity;
+  const z = perturbation.osmoticZ ?? 0;
+  let sum = 0;
+  for (let i = 0; i < fill.solids.length; i++) {
+    const m = w.molality[i]!;
+    if (!(m > 0)) continue;
+    const b = fill.solids[i]!.brine;
+    let phi = brineOsmoticWith(b, m, w.osmoticTerms[i]!);
+    if (z !== 0) phi += z * brineOsmoticU(b, m, tK);
+    sum += b.particles * m * Math.max(phi, 0.05);
+  }
+  return -fill.water.molarMass * sum;
+}
+
+/** Most steps of the ice balance, and its tolerance as a share of the water. */
+const ICE_STEPS = 100;
+const ICE_TOLERANCE = 1e-12;
+/** Share of the water taken as the last liquid when testing for the eutectic. */
+const MIN_LIQUID_SHARE = 1e-9;
+
+/**
+ * How far the fill at t lies below its eutectic: ln a_w of the brine left
+ * when nearly all water has frozen (saturated where the salts have
+ * solubility data) less ln a_w over ice; positive where no liquid can exist
+ * (the `frozen` of {@link evaluateFill}, computed the same way).
+ * @internal
+ */
+export function frozenMargin(fill: PreparedFill, t: number, perturbation: Perturbation, w: FillScratch): number {
+  const tK = t + ZERO_CELSIUS_K;
+  for (let i = 0; i < fill.solids.length; i++) brineOsmoticTerms(fill.solids[i]!.brine, tK, w.osmoticTerms[i]!);
+  solubilityState(fill, t, w);
+  shareWater(fill, w.totalWater * MIN_LIQUID_SHARE, w);
+  return waterActivityLn(fill, tK, perturbation, w) - iceWaterActivityLn(fill.water, tK);
+}
+
+/**
+ * The state of the fill held at temperature t (°C), written into `w`.
+ *
+ * Solubility: salt i dissolves up to Sᵢ(t)·W/100 grams of anhydrous salt in
+ * W grams of liquid water. W is the loaded water plus the crystal water of
+ * everything loaded, less the water the undissolved solid holds as its
+ * equilibrium hydrate, less any ice; it is solved exactly (the balance is
+ * piecewise linear in W). A salt without solubility data dissolves completely.
+ *
+ * Ice: below 0 °C, where the brine's water activity (Pitzer osmotic
+ * coefficient, brine module) exceeds that of water over ice at t, ice forms
+ * until the concentrated brine's activity equals it (bisection on the ice
+ * mass, the solubility rechecked at each step). When even a saturated brine
+ * cannot reach it, no liquid exists at t (`frozen`: below the eutectic).
+ *
+ * Heat (enthalpy conservation, reaction at the start temperature T₀, then
+ * the final state taken to t): Σ nᵢ·xᵢ·[ΔsolH°ᵢ(∞, T₀) + φLᵢ(mᵢ, T₀)] +
+ * conversion of undissolved solid − n_ice·ΔfusH(T₀).
+ *
+ * Heat capacity of the final state: liquid water × c(water) + Σ dissolved
+ * nᵢ·(φCp°ᵢ + φJᵢ(mᵢ)) + undissolved solid × its Cp° + ice × c(ice) + container.
+ *
+ * @internal
+ */
+export function evaluateFill(fill: PreparedFill, t: number, perturbation: Perturbation, w: FillScratch): void {
+  const list = fill.solids;
+  const n = list.length;
+  const tK = t + ZERO_CELSIUS_K;
+  const water = fill.water;
+  // The water activity matters only where ice or vapour can form; between 0 and 99 °C it is left uncomputed (NaN).
+  const phases = t < 0 || t > 99;
+  if (phases) for (let i = 0; i < n; i++) brineOsmoticTerms(list[i]!.brine, tK, w.osmoticTerms[i]!);
+  solubilityState(fill, t, w);
+  const totalWater = w.totalWater;
+  shareWater(fill, totalWater, w);
+  let lnAw = phases ? waterActivityLn(fill, tK, perturbation, w) : NaN;
+  let ice = 0;
+  let frozen = false;
+  if (t < 0) {
+    const target = iceWaterActivityLn(water, tK);
+    // Below the eutectic even the brine left when nearly all water has frozen lies above the ice line.
+    const top = totalWater * (1 - MIN_LIQUID_SHARE);
+    shareWater(fill, totalWater - top, w);
+    let gHi = waterActivityLn(fill, tK, perturbation, w) - target;
+    if (gHi > 0) {
+      frozen = true;
+      ice = totalWater;
+    } else if (lnAw > target) {
+      // Ice forms: find the ice mass whose removal brings the brine to the ice line
+      // (regula falsi, Illinois variant: g(ice) = ln a_w − target falls as ice forms).
+      let lo = 0;
+      let gLo = lnAw - target;
+      let hi = top;
+      let side = 0;
+      ice = lo;
+      for (let k = 0; k < ICE_STEPS && hi - lo > ICE_TOLERANCE * totalWater; k++) {
+        const x = gHi === -Infinity ? 0.5 * (lo + hi) : (lo * gHi - hi * gLo) / (gHi - gLo);
+        shareWater(fill, totalWater - x, w);
+        const gx = waterActivityLn(fill, tK, perturbation, w) - target;
+        ice = x;
+        if (gx === 0) break;
+        if (gx > 0) {
+          lo = x;
+          gLo = gx;
+          if (side === 1) gHi /= 2;
+          side = 1;
+        } else {
+          hi = x;
+          gHi = gx;
+          if (side === -1) gLo /= 2;
+          side = -1;
+        }
+      }
+    }
+    if (frozen || ice > 0) {
+      shareWater(fill, totalWater - ice, w);
+      lnAw = frozen ? target : waterActivityLn(fill, tK, perturbation, w);
+    } else shareWater(fill, totalWater, w);
+  }
+  // A eutectic hold freezes out a share of the brine together with its salt.
+  const hold = w.holdFraction;
+  if (hold > 0) {
+    ice += hold * w.liquidWaterG;
+    w.liquidWaterG *= 1 - hold;
+    for (let i = 0; i < n; i++) w.fraction[i]! *= 1 - hold;
+  }
+  const liquid = w.liquidWaterG;
+  const hydrationFraction = w.hydrationFraction;
+  const boiling = t > 99 && lnAw >= boilingWaterActivityLn(water, tK);
+
+  const t0K = fill.startC + ZERO_CELSIUS_K;
   const shifts = perturbation.enthalpyShift;
   const phaseShifts = perturbation.phaseShift;
+  const zL = perturbation.brineEnthalpyZ;
+  const zJ = perturbation.brineHeatCapacityZ;
   let heatJ = 0;
-  let particles = 0;
   let dissolvedCp = 0;
   let undissolvedCp = 0;
   for (let i = 0; i < n; i++) {
     const s = list[i]!;
-    const x = dissolvedFraction(liquid, w.limited[i]!, w.waterToDissolve[i]!);
-    const dH = s.enthalpy.value + (shifts?.[i] ?? 0);
+    const x = w.fraction[i]!;
+    const m = w.molality[i]!;
+    let phiL = 0;
+    let phiLU = 0;
+    let phiJ = 0;
+    if (x > 0 && m > 0 && Number.isFinite(m)) {
+      const b = s.brine;
+      const lTerms = w.enthalpyTerms[i]!;
+      phiL = brineApparentWith(b, m, t0K, lTerms);
+      phiLU = enthalpyAllowance(b, m, b.own.enthalpy && m > b.maxMolality ? brineApparentWith(b, b.maxMolality, t0K, lTerms) : phiL);
+      // φJ at the start temperature: the final state's heat capacity over T₀ → T (its change with T is a second-order term).
+      phiJ = brineApparentWith(b, m, t0K, w.heatCapacityTerms[i]!);
+      const zj = zJ?.[i] ?? 0;
+      if (zj !== 0) phiJ += zj * brineHeatCapacityU(b, m, t0K);
+    }
+    const zl = zL?.[i] ?? 0;
+    const integral = s.enthalpy.value + (shifts?.[i] ?? 0) + (phiL + zl * phiLU) / 1000;
     const c = w.converts[i] === 1;
     const phi = c ? hydrationFraction : 1;
-    const dissolutionJ = 1000 * s.moles * x * dH;
+    const dH = s.enthalpy.value + (shifts?.[i] ?? 0);
+    const dissolutionJ = 1000 * s.moles * x * integral;
     const conversionJ = c ? 1000 * s.moles * (1 - x) * phi * (dH - (w.phase[i]!.enthalpy!.value + (phaseShifts?.[i] ?? 0))) : 0;
     heatJ += dissolutionJ + conversionJ;
-    particles += s.moles * x * s.particles;
     const cpSolid = c ? s.heatCapacityLoaded.value + phi * (w.phase[i]!.heatCapacity.value - s.heatCapacityLoaded.value) : s.heatCapacityLoaded.value;
-    w.fraction[i] = x;
+    w.integralEnthalpy[i] = integral;
+    w.integralEnthalpyU[i] = phiLU / 1000;
     w.dissolutionJ[i] = dissolutionJ;
     w.conversionJ[i] = conversionJ;
-    w.cpDissolved[i] = s.moles * x * s.heatCapacityAnhydrous.value;
+    w.cpDissolved[i] = s.moles * x * (s.heatCapacityInfinite + phiJ);
     w.cpUndissolved[i] = s.moles * (1 - x) * cpSolid;
     dissolvedCp += w.cpDissolved[i]!;
     undissolvedCp += w.cpUndissolved[i]!;
   }
+  const iceJ = ice > 0 ? -(ice / (1000 * water.molarMass)) * fusionEnthalpyAt(water, t0K) : 0;
+  heatJ += iceJ;
 
   const scale = 1 + (perturbation.heatCapacityRelative ?? 0);
   w.waterCp = liquid * fill.waterSpecificHeat.value * scale;
   w.dissolvedCp = dissolvedCp * scale;
   w.undissolvedCp = undissolvedCp * scale;
-  w.heatCapacity = fill.heatCapacityOverride ? fill.heatCapacityOverride.value * scale : w.waterCp + w.dissolvedCp + w.undissolvedCp + fill.containerJPerK;
-  w.liquidWaterG = liquid;
-  w.hydrationFraction = hydrationFraction;
+  w.iceCp = ice * water.iceSpecificHeat * scale;
+  const parts = w.waterCp + w.dissolvedCp + w.undissolvedCp + w.iceCp;
+  // The dissolved salt's φCp may be negative; the whole stays positive (a floor for pathological fills only).
+  w.heatCapacity = fill.heatCapacityOverride ? fill.heatCapacityOverride.value * scale : Math.max(parts, 1e-3 * (w.waterCp + w.undissolvedCp + w.iceCp) + 1e-9) + fill.containerJPerK;
   w.heatJ = heatJ;
-
-  const freezingPointC = freezingPointOfSolution(particles, liquid);
-  let floorC = freezingPointC ?? -Infinity;
-  let floorKind: FillScratch['floorKind'] = freezingPointC === undefined ? 'none' : 'freezing';
-  for (let i = 0; i < n; i++) {
-    const e = list[i]!.curve?.eutectic;
-    if (e && (n === 1 || w.fraction[i]! < 1) && e.temperature > floorC) {
-      floorC = e.temperature;
-      floorKind = 'eutectic';
-    }
-  }
-  w.freezingPointC = freezingPointC;
-  w.floorC = floorC;
-  w.floorKind = floorKind;
+  w.iceG = ice;
+  w.iceJ = iceJ;
+  w.frozen = frozen;
+  w.boiling = boiling;
+  w.waterActivityLn = lnAw;
 }
 
 /**
@@ -306,6 +495,9 @@ export function fillEquilibrium(fill: PreparedFill, t: number, perturbation: Per
       undissolvedPhase: c ? w.phase[i]!.formula : s.salt.formula,
       undissolvedWater: s.salt.water + phi * (w.phaseWater[i]! - s.salt.water),
       converts: c,
+      molality: Number.isFinite(w.molality[i]!) ? w.molality[i]! : 0,
+      integralEnthalpy: w.integralEnthalpy[i]!,
+      integralEnthalpyU: w.integralEnthalpyU[i]!,
       dissolutionJ: w.dissolutionJ[i]!,
       conversionJ: w.conversionJ[i]!,
       heatCapacityDissolved: w.cpDissolved[i]!,
@@ -319,9 +511,12 @@ export function fillEquilibrium(fill: PreparedFill, t: number, perturbation: Per
     hydrationFraction: w.hydrationFraction,
     heatJ: w.heatJ,
     heatCapacity: w.heatCapacity,
-    heatCapacityParts: { water: w.waterCp, dissolved: w.dissolvedCp, undissolved: w.undissolvedCp, container: fill.containerJPerK },
-    floorC: w.floorC,
-    floorKind: w.floorKind,
-    freezingPointC: w.freezingPointC,
+    heatCapacityParts: { water: w.waterCp, dissolved: w.dissolvedCp, undissolved: w.undissolvedCp, container: fill.containerJPerK, ice: w.iceCp },
+    iceG: w.iceG,
+    iceJ: w.iceJ,
+    frozen: w.frozen,
+    boiling: w.boiling,
+    eutecticFraction: w.holdFraction,
+    waterActivityLn: w.waterActivityLn,
   };
 }

@@ -7,7 +7,9 @@
  */
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { quadrature } from '../quantity/propagate.js';
-import { fillEquilibrium, type Perturbation } from './fillEquilibrium.js';
+import type { Perturbation } from './fillEquilibrium.js';
+import { brineHeatCapacityU } from '../brine/brineProperties.js';
+import { ZERO_CELSIUS_K } from '../brine/debyeHuckelSlopes.js';
 import type { PackIntervalOptions, PreparedFill } from './packFill.js';
 import { seededNormal } from './seededNormal.js';
 import { withSolubilityBounds } from './solubilityBounds.js';
@@ -52,10 +54,11 @@ export const DEFAULT_SEED = 1;
  * solution (kJ/mol), that of each equilibrium solid an undissolved salt
  * turns into, and the heat capacity (relative).
  *
- * Heat capacity from the parts: u² = (W·u(c_w))² + Σ(nᵢ,dissolved)²·(u(Cp°ᵢ)² + aᵢ²)
- * + Σ(nᵢ,undissolved·u(Cp°solid))², where aᵢ = |Cp°(crystal) − Σν·Cp°(aq)|/√3
- * allows for the dissolved salt's true heat capacity lying anywhere between
- * the concentrated (crystal, additive) and the infinitely dilute limit.
+ * Heat capacity from the parts: u² = (W·u(c_w))² + Σ(nᵢ,dissolved)²·(u(φCp°ᵢ)² + u(φJᵢ)²)
+ * + Σ(nᵢ,undissolved·u(Cp°solid))², u(φJ) being the brine module's fit
+ * allowance or model discrepancy at the final molality. The integral
+ * enthalpy's input combines the interval of ΔsolH°(∞) with u(φL) at the final
+ * molality; the osmotic coefficients are an input where ice or boiling is involved.
  * @internal
  */
 export function uncertainInputs(fill: PreparedFill, solution: FillSolution): UncertainInput[] {
@@ -63,7 +66,11 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
   const n = fill.solids.length;
   const shiftAt = (i: number, shift: number): number[] => Array.from({ length: n }, (_, k) => (k === i ? shift : 0));
   fill.solids.forEach((s, i) => {
-    inputs.push({ label: `enthalpy of solution of ${s.salt.formula}`, ...ownInterval(s.enthalpy), perturb: (shift) => ({ enthalpyShift: shiftAt(i, shift) }) });
+    // ΔsolH°(∞) and φL at the final molality are independent; their spreads add in quadrature on each side.
+    const own = ownInterval(s.enthalpy);
+    const uL = solution.state.solids[i]!.integralEnthalpyU;
+    const spread = { u: Math.hypot(own.u, uL), up: Math.hypot(own.up, COVERAGE_95 * uL), down: Math.hypot(own.down, COVERAGE_95 * uL) };
+    inputs.push({ label: `integral enthalpy of solution of ${s.salt.formula} (ΔsolH°(∞) and φL)`, ...spread, perturb: (shift) => ({ enthalpyShift: shiftAt(i, shift) }) });
     const state = solution.state.solids[i]!;
     if (state.converts && state.fraction < 1) {
       const phase = s.phases.get(state.undissolvedPhase);
@@ -71,6 +78,8 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
       inputs.push({ label: `enthalpy of solution of ${state.undissolvedPhase}`, ...spread, perturb: (shift) => ({ phaseShift: shiftAt(i, shift) }) });
     }
   });
+  // The osmotic coefficients set where ice forms and where the brine boils: an input wherever either happens.
+  if (solution.state.iceG > 0 || solution.clamp) inputs.push({ label: 'osmotic coefficients (freezing and boiling points)', u: 1, perturb: (shift) => ({ osmoticZ: shift }) });
   if (fill.heatCapacityOverride) {
     const { value, u } = fill.heatCapacityOverride;
     inputs.push({ label: 'your heat capacity', u: u / value, perturb: (shift) => ({ heatCapacityRelative: shift }) });
@@ -104,7 +113,7 @@ export function heatCapacityRelativeU(fill: PreparedFill, solution: FillSolution
   const terms = [state.liquidWaterG * fill.waterSpecificHeat.u];
   fill.solids.forEach((s, i) => {
     const e = state.solids[i]!;
-    terms.push(s.moles * e.fraction * quadrature(s.heatCapacityAnhydrous.u, s.additivityU));
+    terms.push(s.moles * e.fraction * quadrature(s.additivityU, e.molality > 0 ? brineHeatCapacityU(s.brine, e.molality, fill.startC + ZERO_CELSIUS_K) : 0));
     const solidCp = e.converts ? (s.phases.get(e.undissolvedPhase)?.heatCapacity.u ?? 0) : s.heatCapacityLoaded.u;
     terms.push(s.moles * (1 - e.fraction) * solidCp);
   });
@@ -151,15 +160,21 @@ function propagatedInterval(fill: PreparedFill, solution: FillSolution, options:
     for (let k = 0; k < samples; k++) {
       const enthalpyShift = new Array<number>(n).fill(0);
       const phaseShift = new Array<number>(n).fill(0);
+      const brineEnthalpyZ = new Array<number>(n).fill(0);
+      const brineHeatCapacityZ = new Array<number>(n).fill(0);
       let heatCapacityRelative = 0;
+      let osmoticZ = 0;
       for (const input of inputs) {
         const p = input.perturb(1);
         const z = draw() * input.u;
         if (p.enthalpyShift) p.enthalpyShift.forEach((v, i) => (enthalpyShift[i]! += v * z));
         if (p.phaseShift) p.phaseShift.forEach((v, i) => (phaseShift[i]! += v * z));
+        if (p.brineEnthalpyZ) p.brineEnthalpyZ.forEach((v, i) => (brineEnthalpyZ[i]! += v * z));
+        if (p.brineHeatCapacityZ) p.brineHeatCapacityZ.forEach((v, i) => (brineHeatCapacityZ[i]! += v * z));
+        if (p.osmoticZ) osmoticZ += p.osmoticZ * z;
         if (p.heatCapacityRelative) heatCapacityRelative += p.heatCapacityRelative * z;
       }
-      results[k] = solveFillTemperature(fill, { enthalpyShift, phaseShift, heatCapacityRelative: Math.max(-0.9, heatCapacityRelative) }).temperature;
+      results[k] = solveFillTemperature(fill, { enthalpyShift, phaseShift, brineEnthalpyZ, brineHeatCapacityZ, osmoticZ, heatCapacityRelative: Math.max(-0.9, heatCapacityRelative) }).temperature;
     }
     results.sort();
     const quantile = (q: number): number => {
@@ -204,12 +219,7 @@ function propagatedInterval(fill: PreparedFill, solution: FillSolution, options:
     // sensitivity (plus − minus)/(up + down) times the input's u, (up + down)/(2·1.96)
     central += ((plus - minus) / (2 * COVERAGE_95)) ** 2;
   }
-  let low = Math.min(t, Math.max(floor, t - Math.sqrt(down)));
-  // Shifts combined in quadrature can overshoot a floor that no single re-solve
-  // reached: the solution the fill would hold at the low end still sets a floor
-  // (its freezing point, or the salt–ice eutectic once saturated).
-  const floorAtLow = fillEquilibrium(fill, low).floorC;
-  if (low < floorAtLow) low = Math.min(t, floorAtLow);
+  const low = Math.min(t, Math.max(floor, t - Math.sqrt(down)));
   return {
     low,
     high: Math.max(t, Math.min(ceiling, t + Math.sqrt(up))),

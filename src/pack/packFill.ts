@@ -14,10 +14,11 @@ import { molarMass } from '../chem/molarMass.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { quadrature } from '../quantity/propagate.js';
+import { KIRCHHOFF_RANGE_C, kirchhoffShifted, solutionHeatCapacity, typicalSolutionHeatCapacity } from '../solution/solutionHeatCapacity.js';
+import { waterSpecificHeat } from './solidHeatCapacity.js';
+import { brineModel, type BrineModel } from '../brine/brineModel.js';
+import { waterConstants } from '../brine/brineParameterSets.js';
 import { checkOptionKeys, optionNames } from '../quantity/argumentChecks.js';
-import { KIRCHHOFF_RANGE_C } from '../solution/solutionHeatCapacity.js';
-import { widenEstimate } from '../solution/widenEstimate.js';
-import { aqueousHeatCapacity, waterSpecificHeat } from './solidHeatCapacity.js';
 import type { SolubilityCurve } from './solubilityCurve.js';
 import { packSaltData, type PackSaltData } from './packSaltData.js';
 import type { SolubilityStatus } from './saltSolubility.js';
@@ -63,9 +64,9 @@ export interface PackOptions {
   /** Standard uncertainty of your heat capacity, J/K (default 0). */
   heatCapacityUJPerK?: number;
   /**
-   * Correct each enthalpy of solution from 25 °C to the start temperature with
-   * ΔsolCp° at infinite dilution (Kirchhoff), where the tables give it.
-   * Default false: the 25 °C values are used as they are.
+   * Kept for callers of earlier versions: the enthalpy balance now always
+   * takes ΔsolH°(∞) at the start temperature (Kirchhoff, with the typical
+   * ΔsolCp° and a wider interval where the salt's own is unknown).
    */
   kirchhoff?: boolean;
   /** Default `{ method: 'bounds' }`. */
@@ -100,8 +101,12 @@ export interface PreparedSolid {
   heatCapacityLoaded: Estimate;
   /** Cp° of the anhydrous crystal, J/(mol·K): its contribution to the solution's heat capacity. */
   heatCapacityAnhydrous: Estimate;
-  /** Standard uncertainty allowed for using the crystal's Cp° for the dissolved salt, J/(mol·K). */
+  /** φCp° of the dissolved salt at infinite dilution, J/(mol·K): Σν·Cp°(ion, aq), or the anhydrous crystal's Cp° where an ion is not tabulated. */
+  heatCapacityInfinite: number;
+  /** Standard uncertainty of φCp°, J/(mol·K) (wide where the crystal value stands in). */
   additivityU: number;
+  /** The brine model of the dissolved salt: φ, φL, φJ. */
+  brine: BrineModel;
   curve: SolubilityCurve | undefined;
   /** How well the solubility is known. */
   solubilityStatus: SolubilityStatus;
@@ -121,6 +126,8 @@ export interface PreparedFill {
   waterSpecificHeat: Estimate;
   /** g/mol. */
   waterMolarMass: number;
+  /** Constants of water, ice and vapour (molar mass in kg/mol, enthalpies in J/mol, ice in J/(g·K)). */
+  water: ReturnType<typeof waterConstants>;
   /** The user's heat capacity, J/K, when given. */
   heatCapacityOverride: { value: number; u: number } | undefined;
   /** Temperatures (°C, ascending) where a solid's equilibrium solid changes in its solubility table: the balance may jump there. */
@@ -164,20 +171,11 @@ function checkPositive(value: unknown, field: string, what: string, unit: string
   return value;
 }
 
-/** Kirchhoff: ΔH(T) = ΔH(25 °C) + ΔCp·(T − 25 °C), with ΔCp = Σν·Cp°(aq) + n·Cp°(H2O, l) − Cp°(solid). */
-function kirchhoff(h25: Estimate, solid: Salt, solidCp: Estimate, startC: number, dataset: Dataset): Estimate | undefined {
-  const aq = aqueousHeatCapacity(solid, dataset);
-  if (!aq) return undefined;
-  const water = saltRecords('heat-capacities.json', { formula: WATER }, dataset).find((r) => r.phase === 'l');
-  if (!water) return undefined;
-  const dCp = aq.value + solid.water * water.value - solidCp.value; // J/(mol·K)
-  const uCp = quadrature(aq.u, solidCp.u, solid.water * (dataset.uncertaintyOf('heat-capacities.json', water) ?? 0));
-  const dT = startC - 25;
-  const notes = [`corrected from 25 °C to ${startC} °C with ΔsolCp° = ${dCp.toFixed(1)} J/(mol·K) at infinite dilution (Kirchhoff)`];
-  if (startC < KIRCHHOFF_RANGE_C.min || startC > KIRCHHOFF_RANGE_C.max) notes.push(`the Kirchhoff correction is extrapolated to ${startC} °C, outside the ${KIRCHHOFF_RANGE_C.min}–${KIRCHHOFF_RANGE_C.max} °C over which ΔsolCp° may be taken as constant`);
-  // widenEstimate keeps an interval wider than ±1.96·u at least as wide.
-  const corrected = widenEstimate(h25, (uCp * Math.abs(dT)) / 1000, (dCp * dT) / 1000, notes);
-  return makeEstimate({ ...corrected, sources: [...h25.sources, ...aq.sources, water.source] });
+/** ΔsolH°(∞) at the start temperature, by the one Kirchhoff correction of the solution layer. */
+function kirchhoff(h25: Estimate, solid: Salt, startC: number, dataset: Dataset): Estimate {
+  const corrected = kirchhoffShifted(h25, startC, solutionHeatCapacity(solid, dataset), typicalSolutionHeatCapacity(dataset).rms);
+  if (startC < KIRCHHOFF_RANGE_C.min || startC > KIRCHHOFF_RANGE_C.max) return makeEstimate({ ...corrected, notes: [...corrected.notes, `the Kirchhoff correction is extrapolated to ${startC} °C, outside the ${KIRCHHOFF_RANGE_C.min}–${KIRCHHOFF_RANGE_C.max} °C over which ΔsolCp° may be taken as constant`] });
+  return corrected;
 }
 
 /** Formula texts kept per dataset once read (up to this many, so that odd inputs cannot grow the cache without bound). */
@@ -276,16 +274,14 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
     const anhydrousSalt = data.anhydrousSalt;
     const heatCapacityAnhydrous = data.heatCapacityAnhydrous;
     const aq = data.aqueousHeatCapacity;
-    const additivityU = aq
-      ? Math.hypot(Math.abs(heatCapacityAnhydrous.value - aq.value) / Math.sqrt(3), aq.u)
-      : ADDITIVITY_FALLBACK_RELATIVE * heatCapacityAnhydrous.value;
+    const heatCapacityInfinite = aq ? aq.value : heatCapacityAnhydrous.value;
+    const additivityU = aq ? aq.u : ADDITIVITY_FALLBACK_RELATIVE * heatCapacityAnhydrous.value;
+    if (!aq) notes.push(`no infinite-dilution heat capacity for ${salt.anhydrous}: the crystal's Cp° stands in for φCp°, with a wide allowance`);
+    const brine = brineModel(salt, dataset);
+    for (const note of brine.notes) notes.push(note);
+    for (const source of brine.sources) sources.add(source);
 
-    let enthalpy = h25;
-    if (options.kirchhoff) {
-      const corrected = kirchhoff(h25, salt, heatCapacityLoaded, startC, dataset);
-      if (corrected) enthalpy = corrected;
-      else notes.push(`no Kirchhoff correction for ${salt.formula}: the tables lack the heat capacity of one of its aqueous ions; its 25 °C enthalpy of solution is used`);
-    }
+    const enthalpy = kirchhoff(h25, salt, startC, dataset);
 
     const curve = data.curve;
     const phases = new Map<string, PreparedPhase>();
@@ -295,7 +291,7 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
         continue;
       }
       let phaseEnthalpy = phase.enthalpy;
-      if (phaseEnthalpy && options.kirchhoff) phaseEnthalpy = kirchhoff(phaseEnthalpy, phase.salt, phase.heatCapacity, startC, dataset) ?? phaseEnthalpy;
+      if (phaseEnthalpy) phaseEnthalpy = kirchhoff(phaseEnthalpy, phase.salt, startC, dataset);
       phases.set(formula, { formula, water: phase.salt.water, enthalpy: phaseEnthalpy, heatCapacity: phase.heatCapacity });
     }
     if (curve) sources.add(curve.source);
@@ -314,7 +310,9 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
       enthalpy,
       heatCapacityLoaded,
       heatCapacityAnhydrous,
+      heatCapacityInfinite,
       additivityU,
+      brine,
       curve,
       solubilityStatus: data.solubility.status,
       solubilityBounds: solubilityBoundsOf(salt, data.solubility),
@@ -328,7 +326,9 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
     const pts = s.curve?.points ?? [];
     for (let k = 0; k + 1 < pts.length; k++) if (pts[k]!.phase !== pts[k + 1]!.phase) phaseChanges.add((pts[k]!.t + pts[k + 1]!.t) / 2);
   }
-  return { solids, waterG, startC, containerJPerK, waterSpecificHeat: water, waterMolarMass, heatCapacityOverride, phaseChanges: [...phaseChanges].sort((a, b) => a - b), notes, sources: [...sources], dataset };
+  const waterData = waterConstants(dataset);
+  for (const source of waterData.sources) sources.add(source);
+  return { solids, waterG, startC, containerJPerK, waterSpecificHeat: water, waterMolarMass, water: waterData, heatCapacityOverride, phaseChanges: [...phaseChanges].sort((a, b) => a - b), notes, sources: [...sources], dataset };
 }
 
 /**

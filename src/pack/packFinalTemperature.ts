@@ -8,6 +8,7 @@
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { basisOrder, makeEstimate, type Basis, type Estimate } from '../quantity/estimate.js';
+import { COVERAGE_95 } from '../quantity/constants.js';
 import { finalTemperatureInterval, heatCapacityRelativeU, type TemperatureInterval } from './finalTemperatureInterval.js';
 import type { FillEquilibrium } from './fillEquilibrium.js';
 import { packCautions } from './packCautions.js';
@@ -30,8 +31,12 @@ export interface PackDissolvedSolid {
   solubilityStatus: SolubilityStatus;
   /** Solubility at the final temperature, or null when unknown (the value is then the one with the solid all dissolved). */
   solubility: { value: number; unit: 'g/100 g H2O'; solidPhase: string; extrapolated: boolean; source: string; fromMemory: boolean } | null;
-  /** The enthalpy of solution used, kJ/mol of the loaded formula, positive = endothermic. */
+  /** The enthalpy of solution at infinite dilution and the start temperature, kJ/mol of the loaded formula, positive = endothermic. */
   enthalpyOfSolution: Estimate;
+  /** The integral enthalpy of solution used, to the molality reached (ΔsolH°(∞) + φL at the start temperature), kJ/mol of the loaded formula. */
+  integralEnthalpy: Estimate;
+  /** Molality of this salt in the final liquid, mol of anhydrous salt per kg of liquid water (0 when none dissolved). */
+  molality: number;
   /** kJ absorbed by this solid (dissolving, plus any conversion of what stays undissolved); negative = released. */
   heat: number;
 }
@@ -46,9 +51,13 @@ export interface PackHeat {
   dissolution: number;
   /** Part taken up by undissolved solid turning into its equilibrium hydrate (negative when binding water releases heat). */
   solidConversion: number;
+  /** Part taken up by ice forming (negative: freezing releases heat), ΔfusH at the start temperature. */
+  iceFormation: number;
+  /** Part taken up by water boiling off at a boiling hold. */
+  boiling: number;
   /** Change of the fill's sensible heat, C·(T_final − T_start). */
   sensible: number;
-  /** Relative imbalance |absorbed + sensible| / |absorbed| (0 when nothing is absorbed); large only when the fill was clamped. */
+  /** Relative imbalance |absorbed + sensible| / |absorbed| (0 when nothing is absorbed): the energy residual; it exceeds 1e-6 only where even the whole brine freezing at the eutectic cannot close the balance. */
   imbalance: number;
 }
 
@@ -60,7 +69,7 @@ export interface PackHeatCapacity {
   unit: 'J/K';
   basis: 'parts' | 'override';
   /** The parts at the final state, J/K (the override replaces their sum). */
-  parts: { water: number; dissolvedSalt: number; undissolvedSolid: number; container: number };
+  parts: { water: number; dissolvedSalt: number; undissolvedSolid: number; container: number; ice: number };
 }
 
 /** Where the heat balance was cut short. */
@@ -82,6 +91,10 @@ export interface PackResult {
   dissolved: PackDissolvedSolid[];
   /** Grams of liquid water in the final solution. */
   liquidWater: number;
+  /** Grams of ice in the final state (0 when none). */
+  iceMass: number;
+  /** Grams of water boiled off at a boiling hold (0 when none). */
+  vaporMass: number;
   heat: PackHeat;
   heatCapacity: PackHeatCapacity;
   clamp: PackClamp | null;
@@ -95,10 +108,32 @@ function weakestBasis(estimates: readonly Estimate[]): Basis {
   return estimates.reduce<Basis>((worst, e) => (basisOrder.indexOf(e.basis) > basisOrder.indexOf(worst) ? e.basis : worst), 'measured');
 }
 
-function clampMessage(kind: PackClamp['kind'], t: number): string {
-  if (kind === 'boiling') return `the heat balance would carry the fill past boiling; it is reported at ${t} °C, where the water would boil (the rise of the boiling point by dissolved salt is ignored)`;
-  if (kind === 'eutectic') return `the heat balance would go below the salt–ice eutectic (${t.toFixed(2)} °C): ice and salt crystals would form together and hold the fill there`;
-  return `the heat balance would go below the freezing point of the solution (${t.toFixed(2)} °C, ideal freezing-point depression): ice would form and hold the fill near that temperature`;
+function clampMessage(kind: PackClamp['kind'], t: number, solution: FillSolution): string {
+  if (kind === 'boiling') return `the heat balance would carry the fill past the boiling point of its brine (${t.toFixed(2)} °C at 1 atm, raised by the dissolved salt): it holds there while about ${solution.vaporG.toFixed(1)} g of water boils off`;
+  if (kind === 'eutectic') {
+    const share = solution.state.eutecticFraction;
+    return share < 1
+      ? `the fill reaches the salt–ice eutectic of its brine (${t.toFixed(2)} °C) and holds there: ${(100 * share).toFixed(0)} % of the brine freezes out as ice and salt together, which closes the heat balance`
+      : `the fill reaches the salt–ice eutectic of its brine (${t.toFixed(2)} °C) and all its brine freezes there; the heat balance still does not close (see heat.imbalance)`;
+  }
+  return `the scan reached ${t} °C without a balance; the result there is not a pack temperature`;
+}
+
+/** The integral enthalpy used for one solid, as an estimate: ΔsolH°(∞, T₀)'s interval widened by u(φL). */
+function integralEstimate(infinite: Estimate, value: number, uL: number, molality: number, basis: string, sources: readonly string[]): Estimate {
+  const shift = value - infinite.value;
+  return makeEstimate({
+    quantity: 'integral enthalpy of solution',
+    value,
+    u: Math.hypot(infinite.u, uL),
+    low: value - Math.hypot(infinite.value - infinite.low, COVERAGE_95 * uL),
+    high: value + Math.hypot(infinite.high - infinite.value, COVERAGE_95 * uL),
+    unit: 'kJ/mol',
+    basis: infinite.basis,
+    method: `infinite-dilution+${basis}`,
+    sources: [...infinite.sources, ...sources],
+    notes: [`to ${molality.toFixed(3)} mol/kg: φL = ${shift.toFixed(3)} kJ/mol`],
+  });
 }
 
 /**
@@ -137,20 +172,23 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
         ? { value: e.solubility.value, unit: 'g/100 g H2O', solidPhase: e.solubility.phase, extrapolated: e.solubility.extrapolated, source: s.curve!.source, fromMemory: s.curve!.fromMemory }
         : null,
       enthalpyOfSolution: s.enthalpy,
+      integralEnthalpy: integralEstimate(s.enthalpy, e.integralEnthalpy, e.integralEnthalpyU, e.molality, s.brine.basis, s.brine.sources),
+      molality: e.molality,
       heat: (e.dissolutionJ + e.conversionJ) / 1000,
     };
   });
 
   const absorbed = state.heatJ / 1000;
   const sensible = (state.heatCapacity * (t - fill.startC)) / 1000;
-  const clamp: PackClamp | null = solution.clamp ? { ...solution.clamp, message: clampMessage(solution.clamp.kind, solution.clamp.temperature) } : null;
+  const vaporJ = (solution.vaporG / (1000 * fill.water.molarMass)) * fill.water.vaporizationEnthalpy;
+  const absorbedAll = absorbed + vaporJ / 1000;
+  const clamp: PackClamp | null = solution.clamp ? { ...solution.clamp, message: clampMessage(solution.clamp.kind, solution.clamp.temperature, solution) } : null;
+  if (state.iceG > 0) notes.push(`${state.iceG.toFixed(1)} g of ice forms: below 0 °C the brine concentrates until its water activity (Pitzer osmotic coefficient) equals that over ice; the latent heat, ΔfusH(T₀) = ΔfusH(0 °C) + ΔfusCp·T₀, is counted`);
   if (clamp) notes.push(clamp.message);
   if (solution.jump) notes.push(`the balance is pinned at ${t.toFixed(2)} °C, where the equilibrium solid changes in the solubility table; the true temperature lies near it`);
   if (fill.heatCapacityOverride) notes.push('heat capacity: your value replaces the sum of parts (solution, undissolved solid and container)');
-  else notes.push('heat capacity from the parts: liquid water, plus the crystal Cp° of the dissolved salt (additivity, closer for concentrated than for dilute solutions; allowed for in the uncertainty), plus the undissolved solid, plus the container');
-  const kirchhoff = fill.solids.some((s) => s.enthalpy.notes.some((n) => n.includes('Kirchhoff')));
-  if (!kirchhoff) notes.push('enthalpies of solution are the 25 °C values, used at every temperature (no Kirchhoff correction)');
-  notes.push('enthalpies of solution are infinite-dilution values; at pack concentrations the integral enthalpy of solution differs, often by several per cent, and the interval does not include that difference');
+  else notes.push('heat capacity from the parts: liquid water, the dissolved salt as its apparent molar heat capacity φCp = φCp°(∞) + φJ(m) (Pitzer), the undissolved solid, any ice, and the container');
+  notes.push('heat balance: the enthalpy of the final state equals that of the start; each salt dissolves with its integral enthalpy of solution to the molality it reaches, ΔsolH°(∞, T₀) + φL(m, T₀) (brine module), and the interval carries the uncertainty of φL and φCp');
   for (const s of fill.solids) for (const n of s.enthalpy.notes) notes.push(`${s.salt.formula}: ${n}`);
   const enthalpies = fill.solids.map((s) => s.enthalpy);
 
@@ -176,21 +214,25 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
     interval,
     dissolved,
     liquidWater: state.liquidWaterG,
+    iceMass: state.iceG,
+    vaporMass: solution.vaporG,
     heat: {
       unit: 'kJ',
       absorbed,
       direction: absorbed > 0 ? 'absorbed' : absorbed < 0 ? 'released' : 'none',
       dissolution: state.solids.reduce((sum, e) => sum + e.dissolutionJ, 0) / 1000,
       solidConversion: state.solids.reduce((sum, e) => sum + e.conversionJ, 0) / 1000,
+      iceFormation: state.iceJ / 1000,
+      boiling: vaporJ === 0 ? 0 : vaporJ / 1000,
       sensible,
-      imbalance: absorbed === 0 ? 0 : Math.abs(absorbed + sensible) / Math.abs(absorbed),
+      imbalance: absorbedAll === 0 ? 0 : Math.abs(absorbedAll + sensible) / Math.abs(absorbedAll),
     },
     heatCapacity: {
       value: state.heatCapacity,
       u: heatCapacityU,
       unit: 'J/K',
       basis: fill.heatCapacityOverride ? 'override' : 'parts',
-      parts: { water: state.heatCapacityParts.water, dissolvedSalt: state.heatCapacityParts.dissolved, undissolvedSolid: state.heatCapacityParts.undissolved, container: state.heatCapacityParts.container },
+      parts: { water: state.heatCapacityParts.water, dissolvedSalt: state.heatCapacityParts.dissolved, undissolvedSolid: state.heatCapacityParts.undissolved, container: state.heatCapacityParts.container, ice: state.heatCapacityParts.ice },
     },
     clamp,
     cautions: packCautions({ startC: fill.startC, final: finalTemperature, clamp: clamp?.kind, salts: fill.solids.map((s) => s.salt) }, dataset),
@@ -226,14 +268,15 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
  * @throws IonheatError `INVALID_ARGUMENT` naming the field for bad input; parser errors or `MISSING_DATA` for an unknown salt
  * @example
  * ```ts
- * // 10 g KNO3 in 100 g water at 20 °C: 0.0989 mol × 34.89 kJ/mol over 427.5 J/K
+ * // 10 g KNO3 in 100 g water at 20 °C: 0.0989 mol × 35.51 kJ/mol (integral, to 0.99 mol/kg) over 413.7 J/K
  * const r = packFinalTemperature({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 });
- * r.finalTemperature.value; // 11.93
+ * r.finalTemperature.value; // 11.51
  * r.dissolved[0].undissolvedMass; // 0
- * r.heatCapacity.value; // ≈ 427.5 J/K
+ * r.heatCapacity.value; // ≈ 413.7 J/K
+ * r.iceMass; // 0
  * // 30 g CaCl2 in 100 g water: a hot pack, with the contact-burn caution first
  * const hot = packFinalTemperature({ solids: [{ formula: 'CaCl2', massG: 30 }], waterG: 100, startC: 20 });
- * hot.finalTemperature.value; // ≈ 70.3 °C
+ * hot.finalTemperature.value; // ≈ 62.6 °C
  * hot.cautions[0].startsWith('Contact-burn risk'); // true
  * ```
  */

@@ -152,7 +152,7 @@ const MAX_RATIO = 1000;
  * ```ts
  * const curve = packRatioCurve({ solids: [{ formula: 'KNO3', massG: 1 }], waterG: 100, startC: 20 }, { points: 50, targetC: 12 });
  * curve.points.length; // 50
- * curve.target.design.ratio; // ≈ 0.0990 (10 g of KNO3 per 100 g of water gives 11.93 °C)
+ * curve.target.design.ratio; // ≈ 0.0942 (9.4 g of KNO3 per 100 g of water gives 12 °C)
  * ```
  */
 export function packRatioCurve(fill: PackFill, options: PackCurveOptions = {}, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackRatioCurve {
@@ -288,7 +288,7 @@ function designForTarget(s: Sweeper, targetC: number, extremeRatio: number): Pac
  * @example
  * ```ts
  * const design = ratioForTargetTemperature({ solids: [{ formula: 'NH4NO3', massG: 1 }], waterG: 100, startC: 20 }, 5);
- * design.design.ratio; // ≈ 0.2126 (21.3 g of NH4NO3 per 100 g of water)
+ * design.design.ratio; // ≈ 0.1992 (19.9 g of NH4NO3 per 100 g of water)
  * ```
  */
 export function ratioForTargetTemperature(fill: PackFill, targetC: number, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackTargetDesign {
@@ -311,7 +311,7 @@ export function ratioForTargetTemperature(fill: PackFill, targetC: number, packO
  *
  * @example
  * ```ts
- * ratioForLargestChangePerGram({ solids: [{ formula: 'KNO3', massG: 1 }], waterG: 100, startC: 20 }).ratio; // ≈ 0.180 (where KNO3 just saturates, at 5.7 °C)
+ * ratioForLargestChangePerGram({ solids: [{ formula: 'KNO3', massG: 1 }], waterG: 100, startC: 20 }).ratio; // ≈ 0.176 (where KNO3 just saturates, at 5.1 °C)
  * ```
  */
 export function ratioForLargestChangePerGram(fill: PackFill, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackDesignPoint {

@@ -160,7 +160,7 @@ export function parameter(options: TimeCourseOptions, key: keyof typeof DEFAULTS
  * @example
  * ```ts
  * const course = packTimeCourse({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 }, { ambientConductanceWPerK: 0, skinConductanceWPerK: 0 });
- * course.points[course.points.length - 1].temperature; // ≈ 11.93 (the adiabatic final temperature)
+ * course.points[course.points.length - 1].temperature; // ≈ 11.51 (the adiabatic final temperature)
  * // with the default (assumed) exchange with air and skin the pack warms back up within the hour
  * const held = packTimeCourse({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 });
  * held.points[held.points.length - 1].t; // 3600 s
@@ -223,11 +223,12 @@ export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, 
     if (g > 0) T = tEnv + (T - tEnv) * exchange;
     if (T > BOILING_C) T = BOILING_C;
     evaluateFill(prepared, T, {}, w);
-    if (T < w.floorC) {
-      T = w.floorC;
-      frozeAt ??= k * h;
+    if (w.frozen) {
+      // Below the eutectic no liquid is left: the fill holds where it was.
+      T = before;
       evaluateFill(prepared, T, {}, w);
     }
+    if (w.iceG > 0) frozeAt ??= k * h;
     const t = k * h;
     if (band) {
       const share = shareInside(before, T, band.lowC, band.highC);

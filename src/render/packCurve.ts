@@ -110,7 +110,7 @@ function draw(curve: PackRatioCurve, options: PackCurveChartOptions): string {
   body.push(el('polyline', { points: pts.map((p) => `${x(p.ratio).toFixed(2)},${y(p.temperature).toFixed(2)}`).join(' '), fill: 'none', stroke: colour, 'stroke-width': 2.4, 'stroke-linejoin': 'round' }));
   const clamped = pts.find((p) => p.clamp !== null);
   if (clamped) {
-    const what = clamped.clamp === 'boiling' ? 'boiling: the balance stops at 100 °C' : clamped.clamp === 'eutectic' ? 'salt–ice eutectic: ice and crystals form' : 'freezing point: ice forms';
+    const what = clamped.clamp === 'boiling' ? 'boiling: the brine boils at its raised boiling point' : clamped.clamp === 'eutectic' ? 'salt–ice eutectic: brine freezes out as ice and salt' : 'no balance found in range';
     body.push(text(x(clamped.ratio) + 6, y(clamped.temperature) + (cools ? 16 : -8), what, { class: 'small', fill: colour }));
   }
 

@@ -28,7 +28,8 @@ import type { Salt } from '../chem/salt.js';
 import { IonheatError } from '../error.js';
 import type { Estimate } from '../quantity/estimate.js';
 import type { DissolveResult } from '../solution/dissolve.js';
-import { heatPerGramOfFill, heatPerGramOfSalt, saturatedFill } from '../solution/heatPerGram.js';
+import { saturatedFill } from '../solution/heatPerGram.js';
+import { perGramOf } from '../solution/dissolve.js';
 import { measuredSolutionEnthalpy } from '../solution/measuredSolution.js';
 import { solutionVerdict } from '../solution/verdict.js';
 
@@ -78,7 +79,6 @@ export function ownMeasuredEstimate(salt: Salt, tableFormula: string, own: OwnMe
 export function withOwnMeasurement(result: DissolveResult, measured: Estimate, dataset: Dataset): DissolveResult {
   const salt = result.salt;
   const others = result.estimates.filter((e) => !(e.basis === 'measured' && e.method === measured.method));
-  const fill = saturatedFill(salt, dataset);
   // As dissolve over a merged dataset would say it: the candidate's value against the other bases.
   const disagreement = measuredValueDisagreement(measured, others, OWN_MEASUREMENT_LABEL);
   return {
@@ -87,6 +87,6 @@ export function withOwnMeasurement(result: DissolveResult, measured: Estimate, d
     best: measured,
     estimates: [measured, ...others],
     ...solutionVerdict(measured),
-    perGram: { salt: heatPerGramOfSalt(measured, salt), ...(fill ? { saturatedFill: heatPerGramOfFill(measured, fill) } : {}) },
+    perGram: perGramOf(measured, salt, saturatedFill(salt, dataset), dataset),
   };
 }

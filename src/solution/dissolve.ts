@@ -22,6 +22,8 @@ import { measuredSolutionEnthalpy } from './measuredSolution.js';
 import { solutionEnthalpyFromCycle } from './cycleSolution.js';
 import { hydrateFromParent, hydrateRuleFamily, hydrateRuleScatter, saltFormIndex } from './hydrateRule.js';
 import { heatPerGramOfFill, heatPerGramOfSalt, saturatedFill, type SaturatedFill } from './heatPerGram.js';
+import { toMolality } from './toMolality.js';
+import { molarMass } from '../chem/molarMass.js';
 import { checkKirchhoffTemperature, kirchhoffCorrection, solutionHeatCapacity, TABLE_TEMPERATURE_C, typicalSolutionHeatCapacity } from './solutionHeatCapacity.js';
 import { solutionVerdict, type Verdict } from './verdict.js';
 import { anchoredEstimates } from './anchoredSolution.js';
@@ -264,8 +266,17 @@ function frozen<E extends Estimate | undefined>(e: E): E {
   return e;
 }
 
-function perGramOf(best: Estimate, salt: Salt, profile: SaltProfile): DissolveResult['perGram'] {
-  return { salt: heatPerGramOfSalt(best, salt), ...(profile.fill ? { saturatedFill: heatPerGramOfFill(best, profile.fill) } : {}) };
+/**
+ * Per gram of salt at infinite dilution; per gram of a saturated fill with the integral enthalpy to saturation
+ * (25 °C, where the fill is defined). Shared with the screen's own-measurement path.
+ * @internal
+ */
+export function perGramOf(best: Estimate, salt: Salt, fill: SaturatedFill | undefined, dataset: Dataset): DissolveResult['perGram'] {
+  if (!fill) return { salt: heatPerGramOfSalt(best, salt) };
+  // Water per mole of salt in the fill: its own crystal water plus the water added to saturate it.
+  const waterG = salt.water * molarMass({ H: 2, O: 1 }, dataset) + fill.waterPerGramSalt * salt.molarMass;
+  const atSaturation = waterG > 0 ? toMolality(best, salt, Math.min(30, 1000 / waterG), TABLE_TEMPERATURE_C, dataset) : best;
+  return { salt: heatPerGramOfSalt(best, salt), saturatedFill: heatPerGramOfFill(atSaturation, fill) };
 }
 
 /** The text that flags a hypothetical hydrate, in the result's notes and in each of its estimates. */
@@ -297,7 +308,7 @@ function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
     estimates.sort(rank);
     let perGram: DissolveResult['perGram'] | undefined;
     if (estimates[0]) {
-      const p = perGramOf(estimates[0], salt, profile);
+      const p = perGramOf(estimates[0], salt, profile.fill, dataset);
       perGram = profile.kept ? { salt: frozen(p.salt), ...(p.saturatedFill ? { saturatedFill: frozen(p.saturatedFill) } : {}) } : p;
     }
     profile.ranked[key] = found = { estimates: profile.kept ? Object.freeze(estimates) : estimates, perGram };
@@ -400,7 +411,7 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
   if (disagreement) notes.push(disagreement);
   const best = estimates[0];
   if (!best) throw (profile.failure[hide ? 'hidden' : 'open'] ??= failure(salt, hide, dataset));
-  const perGram = celsius === TABLE_TEMPERATURE_C && at25.perGram ? { ...at25.perGram } : perGramOf(best, salt, profile);
+  const perGram = celsius === TABLE_TEMPERATURE_C && at25.perGram ? { ...at25.perGram } : perGramOf(best, salt, profile.fill, dataset);
   let hydration: DissolveResult['hydration'];
   if (profile.hydration) {
     hydration = {};

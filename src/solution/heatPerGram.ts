@@ -132,7 +132,7 @@ export function saturatedFill(salt: Salt, dataset: Dataset = builtinDataset()): 
     source: s.source,
     notes: [
       `fill = salt + ${fixedDecimal(added / salt.molarMass, 3)} g water per g salt, saturated at 25 °C (solubility ${fixedDecimal(s.value, 2)} g ${salt.anhydrous} per 100 g water, ${s.how}${s.fromMemory ? ', from memory' : ''})`,
-      'uses the enthalpy of solution at infinite dilution; the heat of dissolving to saturation differs by the heat of dilution',
+      'the heat per gram of this fill uses the integral enthalpy of solution to saturation, ΔsolH°(∞) + φL(m_sat) (brine module)',
     ],
   };
 }

@@ -136,6 +136,16 @@ export function kirchhoffCorrection(e: Estimate, temperatureC: number, heatCapac
   if (heatCapacity !== undefined) heatCapacity = estimateArgument(heatCapacity, 'heatCapacity');
   numberArgument(typical, 'typical', 'the typical |ΔsolCp°| in J/(mol·K)', { min: 0, max: 1e6 });
   checkKirchhoffTemperature(temperatureC);
+  return kirchhoffShifted(e, temperatureC, heatCapacity, typical);
+}
+
+/**
+ * The one Kirchhoff correction of ionheat, without the range check: used by
+ * {@link kirchhoffCorrection} and by the pack model (which notes when the
+ * temperature lies outside 0–40 °C).
+ * @internal
+ */
+export function kirchhoffShifted(e: Estimate, temperatureC: number, heatCapacity: Estimate | undefined, typical: number): Estimate {
   const dT = temperatureC - TABLE_TEMPERATURE_C;
   if (dT === 0) return e;
   if (heatCapacity) {

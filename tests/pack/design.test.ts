@@ -18,10 +18,11 @@ describe('ratio for a target temperature', () => {
     }
   });
   it('matches the hand calculation for KNO3 to 12 °C', () => {
-    // Unsaturated: 8 K = m/101.1023 × 34 890 / (417.935 + m/101.1023 × 96.4)
-    //   → n = 8 × 417.935 / (34 890 − 8 × 96.4) = 0.098013 mol → m = 9.9094 g per 100 g water
-    const n = (8 * ((100 * 75.291) / 18.015)) / (34890 - 8 * 96.4);
-    expect(ratioForTargetTemperature(kno3, 12).design!.saltMass).toBeCloseTo(n * 101.1023, 3);
+    // Unsaturated: 8 K = n·ΔsolH(m)·1000 / C(n), ΔsolH(m) ≈ 35.5 kJ/mol and C ≈ 413.7 J/K near 10 g (handFills.test.ts)
+    //   → n ≈ 8 × 413.7 / 35 500 = 0.0932 mol ≈ 9.4 g; the design fill, solved forward, reaches 12 °C.
+    const mass = ratioForTargetTemperature(kno3, 12).design!.saltMass;
+    expect(mass).toBeCloseTo((8 * 413.7 * 101.1023) / 35500, 1);
+    expect(packFinalTemperature({ ...kno3, solids: [{ formula: 'KNO3', massG: mass }] }).finalTemperature.value).toBeCloseTo(12, 4);
   });
   it('says when a target is out of reach, and why', () => {
     const cold = ratioForTargetTemperature(kno3, 0); // KNO3 saturates near 5.7 °C from 20 °C

@@ -1,17 +1,20 @@
 // Parts of the fill model beyond the single-salt hand fills.
 import { describe, expect, it } from 'vitest';
+import { parseSalt } from '../../src/chem/parseSalt.js';
+import { integralEnthalpyOfSolution } from '../../src/solution/integralEnthalpy.js';
 import { packFinalTemperature } from '../../src/index.js';
 
 const WATER_100G = (100 * 75.291) / 18.015; // J/K, NBS 1982 Cp°(H2O, l)
 
 describe('container heat capacity', () => {
-  // 10 g KNO3 in 100 g water with a 200 J/K container: C = 427.470 + 200 = 627.470 J/K,
-  // ΔT = −3451.0 J / 627.470 J/K = −5.4998 K (ΔsolH 34.89 kJ/mol CRC; Cp° 96.4 J/(mol·K) NBS, from memory).
+  // 10 g KNO3 in 100 g water with a 200 J/K container: all dissolves either way, so Q and the parts are the same;
+  // without it C = 413.692 J/K and ΔT = −8.490 K (handFills.test.ts): Q = 3512.2 J; with it ΔT = −Q/(413.692 + 200).
   it('adds to the heat capacity from the parts', () => {
-    const n = 10 / 101.1023;
+    const bare = packFinalTemperature({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 });
     const r = packFinalTemperature({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20, containerJPerK: 200 });
+    const Q = -(bare.finalTemperature.value - 20) * bare.heatCapacity.value;
     expect(r.heatCapacity.parts.container).toBe(200);
-    expect(r.finalTemperature.value).toBeCloseTo(20 - (n * 34890) / (WATER_100G + n * 96.4 + 200), 6);
+    expect(r.finalTemperature.value).toBeCloseTo(20 - Q / (bare.heatCapacity.value + 200), 6);
   });
 });
 
@@ -30,14 +33,17 @@ describe('several solids', () => {
   // 20 g NH4Cl + 10 g urea in 100 g water at 20 °C, both unsaturated: heats add.
   //   NH4Cl: 20/53.489 = 0.37391 mol × 14.78 kJ/mol (CRC, checked by the data helper) = 5526.4 J; Cp° 84.1 J/(mol·K) (NBS, from memory)
   //   urea:  10/60.056 = 0.16651 mol × 15.1 kJ/mol (Egan & Luff 1966; from memory) = 2514.3 J; Cp° 93.14 (NBS, from memory)
-  //   C = 417.935 + 0.37391 × 84.1 + 0.16651 × 93.14 = 417.935 + 31.446 + 15.509 = 464.890 J/K
-  //   ΔT = −8040.7 / 464.890 = −17.296 K → 2.704 °C
+  //   (infinite-dilution values at 25 °C; the balance takes them at 20 °C and to the molality reached)
   const r = packFinalTemperature({ solids: [{ formula: 'NH4Cl', massG: 20 }, { formula: 'CO(NH2)2', massG: 10 }], waterG: 100, startC: 20 });
   const a = 20 / 53.489;
   const b = 10 / 60.056;
   it('adds their heats and heat capacities, ignoring mixing effects, and says so', () => {
-    expect(r.finalTemperature.value).toBeCloseTo(20 - (a * 14780 + b * 15100) / (WATER_100G + a * 84.1 + b * 93.14), 6);
-    expect(r.dissolved.map((d) => d.heat)).toEqual([expect.closeTo(a * 14.78, 6), expect.closeTo(b * 15.1, 6)]);
+    // Each dissolves with its own integral enthalpy to its own molality (mixing ignored): NH4Cl at 3.739 mol/kg,
+    // urea at 1.665 mol/kg, both at 20 °C; the heats add and the balance is T = 20 − ΣQ/C.
+    const qa = a * integralEnthalpyOfSolution(parseSalt('NH4Cl'), (1000 * a) / 100, 20).value;
+    const qb = b * integralEnthalpyOfSolution(parseSalt('CO(NH2)2'), (1000 * b) / 100, 20).value;
+    expect(r.dissolved.map((d) => d.heat)).toEqual([expect.closeTo(qa, 6), expect.closeTo(qb, 6)]);
+    expect(r.finalTemperature.value).toBeCloseTo(20 - ((qa + qb) * 1000) / r.heatCapacity.value, 6);
     expect(r.notes.some((n) => n.includes('mixing effects'))).toBe(true);
     expect(r.heat.imbalance).toBeLessThan(0.001);
   });

@@ -12,16 +12,16 @@ function bruteForce(fill: ReturnType<typeof preparePackFill>): number {
   const t0 = fill.startC;
   const f = (t: number) => {
     const s = fillEquilibrium(fill, t);
-    return { f: s.heatCapacity * (t - t0) + s.heatJ, floor: s.floorC };
+    return { f: s.heatCapacity * (t - t0) + s.heatJ, frozen: s.frozen, boiling: s.boiling };
   };
   const q0 = fillEquilibrium(fill, t0).heatJ;
   const dir = q0 > 0 ? -1 : 1;
-  for (let t = t0 + dir * STEP; t > -100 && t < 100; t += dir * STEP) {
-    const { f: v, floor } = f(t);
-    if (dir < 0 && t <= floor) return t;
+  for (let t = t0 + dir * STEP; t > -100 && t < 200; t += dir * STEP) {
+    const { f: v, frozen, boiling } = f(t);
+    if (frozen || boiling) return t;
     if (dir * v >= 0) return t;
   }
-  return dir > 0 ? 100 : -100;
+  return dir > 0 ? 200 : -100;
 }
 
 describe('first crossing', () => {

@@ -3,6 +3,8 @@
 // of electrolytes' (after Parker 1965) as entered in solution-enthalpies.json,
 // and the NBS tables (Wagman et al. 1982).
 import { describe, expect, it } from 'vitest';
+import { integralEnthalpyOfSolution } from '../../src/solution/integralEnthalpy.js';
+import { parseSalt } from '../../src/chem/parseSalt.js';
 import { builtinDataset } from '../../src/data/builtin.js';
 import { dissolve } from '../../src/solution/dissolve.js';
 import { IonheatError } from '../../src/error.js';
@@ -64,8 +66,12 @@ describe('dissolve: the result', () => {
     const r = dissolve('NH4NO3');
     // 25.69 kJ/mol (CRC) / 80.043 g/mol = 320.9 J/g
     expect(r.perGram.salt.value).toBeCloseTo(25690 / 80.043, 0);
-    // solubility 212.5 g per 100 g water at 25 °C (CRC): 80.043 + 37.667 g per mole
-    expect(r.perGram.saturatedFill!.value).toBeCloseTo(25690 / (80.043 + (80.043 * 100) / 212.5), 0);
+    // solubility 212.5 g per 100 g water at 25 °C (CRC): 80.043 + 37.667 g per mole, m_sat = 1000/37.667 = 26.55 mol/kg;
+    // the integral enthalpy to saturation is ΔsolH°(∞) + φL(m_sat) (brine module), taken here from integralEnthalpyOfSolution.
+    const mSat = 1000 / ((80.043 * 100) / 212.5);
+    const integral = integralEnthalpyOfSolution(parseSalt('NH4NO3'), mSat).value;
+    expect(r.perGram.saturatedFill!.value).toBeCloseTo((integral * 1000) / (80.043 + (80.043 * 100) / 212.5), 0);
+    expect(r.perGram.saturatedFill!.notes.join(' ')).toMatch(/integral enthalpy of solution to saturation/);
     expect(r.perGram.saturatedFill!.unit).toBe('J/g');
   });
   it('gives both hydration sums of an ionic salt and none for urea', () => {

@@ -4,6 +4,7 @@ import type { Salt } from '../../chem/salt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { dissolve, type DissolveResult } from '../../solution/dissolve.js';
 import { hazardCoverage, saltHazards } from '../../pack/saltHazards.js';
+import { integralEnthalpyOfSolution } from '../../solution/integralEnthalpy.js';
 import { numberOption, readArgs } from './args.js';
 import { userSourceOf } from '../../solution/userValueCheck.js';
 import type { Command } from './command.js';
@@ -24,7 +25,8 @@ function cautionsFor(salt: Salt, dataset: Dataset): string[] {
 const rounded = (e: Estimate | undefined): Estimate | undefined => (e ? roundEstimate(e) : undefined);
 
 /** The JSON contract of `ionheat dissolve --json`. */
-function toJson(r: DissolveResult, cautions: string[]) {
+function toJson(r: DissolveResult, cautions: string[], integral: { molality: number; estimate: Estimate } | undefined) {
+  const i = integral ? roundEstimate(integral.estimate) : undefined;
   return {
     formula: r.formula,
     best: rounded(r.best),
@@ -34,6 +36,7 @@ function toJson(r: DissolveResult, cautions: string[]) {
     perGram: { salt: rounded(r.perGram.salt), ...(r.perGram.saturatedFill ? { saturatedFill: rounded(r.perGram.saturatedFill) } : {}) },
     ...(r.hydration ? { hydration: { absolute: rounded(r.hydration.absolute) ?? null, conventional: rounded(r.hydration.conventional) ?? null } } : {}),
     temperature: { celsius: r.temperature.celsius, heatCapacityOfSolution: rounded(r.temperature.heatCapacityOfSolution) ?? null },
+    ...(integral && i ? { integral: { molality: integral.molality, value: i.value, low: i.low, high: i.high, unit: 'kJ/mol', basis: i.basis, method: i.method, sources: i.sources } } : {}),
     molarMass: r.salt.molarMass,
     notes: r.notes,
     cautions,
@@ -61,30 +64,37 @@ export const dissolveCommand: Command = {
   name: 'dissolve',
   summary: 'enthalpy of solution of a salt: best estimate, every basis, verdict, heat per gram',
   usage: [
-    'ionheat dissolve <formula> [--exclude-measured] [--temperature <°C>] [--json]',
+    'ionheat dissolve <formula> [--exclude-measured] [--temperature <°C>] [--molality <mol/kg>] [--json]',
     '',
     '  <formula>            e.g. "NH4NO3", "CaCl2·6H2O", "urea"',
     "  --exclude-measured   hide the salt's own measured enthalpy of solution and crystal formation enthalpy",
     '  --temperature <°C>   give values at this temperature, 0–40 °C (default 25), by a Kirchhoff correction',
+    '  --molality <mol/kg>  also give the integral enthalpy of solution to this molality (0–30; mol of salt per kg of water)',
     '  --json               print one JSON object: formula, best, estimates, verdict, probabilityEndothermic, perGram, …',
   ].join('\n'),
   async run(argv, { io, dataset }) {
     const { values, positionals } = readArgs(
       argv,
-      { json: { type: 'boolean' }, 'exclude-measured': { type: 'boolean' }, temperature: { type: 'string' } },
+      { json: { type: 'boolean' }, 'exclude-measured': { type: 'boolean' }, temperature: { type: 'string' }, molality: { type: 'string' } },
       { min: 1, max: 1, names: 'the formula' },
     );
     const temperatureC = numberOption(values.temperature, 'temperature');
     const r = dissolve(positionals[0]!, { excludeMeasured: values['exclude-measured'] === true, ...(temperatureC !== undefined ? { temperatureC } : {}) }, dataset);
     const cautions = [...cautionsFor(r.salt, dataset), GENERAL_CAUTION];
+    const molality = numberOption(values.molality, 'molality');
+    const integral = molality !== undefined ? { molality, estimate: integralEnthalpyOfSolution(r.salt, molality, temperatureC ?? 25, dataset) } : undefined;
     if (values.json) {
-      io.stdout(JSON.stringify(toJson(r, cautions), null, 2) + '\n');
+      io.stdout(JSON.stringify(toJson(r, cautions, integral), null, 2) + '\n');
       return 0;
     }
     const best = roundEstimate(r.best);
     const out: string[] = [];
     out.push(`${formatSalt(r.salt, { style: 'unicode' })}  (${r.salt.molarMass.toFixed(2)} g/mol)`);
     out.push(`Enthalpy of solution at infinite dilution, ${r.temperature.celsius} °C: ${signed(best.value)} ± ${best.u} kJ/mol (${basisText(r.best, dataset)}); 95 % interval ${signed(best.low)} … ${signed(best.high)}`);
+    if (integral) {
+      const i = roundEstimate(integral.estimate);
+      out.push(`Integral enthalpy of solution to ${integral.molality} mol/kg, ${r.temperature.celsius} °C: ${signed(i.value)} ± ${i.u} kJ/mol (${i.method}); 95 % interval ${signed(i.low)} … ${signed(i.high)}`);
+    }
     out.push(`Verdict: ${VERDICT_WORDS[r.verdict]}; P(endothermic) = ${r.probabilityEndothermic.toFixed(3)}`);
     const pg = roundEstimate(r.perGram.salt);
     out.push(`Heat absorbed per gram of salt: ${signed(pg.value)} ± ${pg.u} J/g`);

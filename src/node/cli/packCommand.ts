@@ -130,10 +130,14 @@ function jsonReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
       // three decimals, or three significant digits for a sparingly soluble salt
       solubility: d.solubility ? { ...d.solubility, value: d.solubility.value < 1 ? Number(d.solubility.value.toPrecision(3)) : r(d.solubility.value, 3) } : null,
       enthalpyOfSolution: { value: d.enthalpyOfSolution.value, u: d.enthalpyOfSolution.u, unit: 'kJ/mol', basis: d.enthalpyOfSolution.basis, sources: d.enthalpyOfSolution.sources },
+      integralEnthalpy: { value: r(d.integralEnthalpy.value, 4), low: r(d.integralEnthalpy.low, 4), high: r(d.integralEnthalpy.high, 4), u: r(d.integralEnthalpy.u, 4), unit: 'kJ/mol', basis: d.integralEnthalpy.basis, method: d.integralEnthalpy.method, sources: d.integralEnthalpy.sources },
+      molality: r(d.molality, 4),
       heat: r(d.heat, 4),
     })),
     liquidWater: r(result.liquidWater, 4),
-    heat: { ...result.heat, absorbed: r(result.heat.absorbed, 4), dissolution: r(result.heat.dissolution, 4), solidConversion: r(result.heat.solidConversion, 4), sensible: r(result.heat.sensible, 4), imbalance: Number(result.heat.imbalance.toPrecision(3)) },
+    iceMass: r(result.iceMass, 4),
+    vaporMass: r(result.vaporMass, 4),
+    heat: { ...result.heat, absorbed: r(result.heat.absorbed, 4), dissolution: r(result.heat.dissolution, 4), solidConversion: r(result.heat.solidConversion, 4), iceFormation: r(result.heat.iceFormation, 4), boiling: r(result.heat.boiling, 4), sensible: r(result.heat.sensible, 4), imbalance: Number(result.heat.imbalance.toPrecision(3)) },
     heatCapacity: {
       value: r(result.heatCapacity.value, 2),
       u: r(result.heatCapacity.u, 2),
@@ -195,20 +199,21 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
   out.push(`change              ${result.temperatureChange >= 0 ? '+' : '−'}${Math.abs(r(result.temperatureChange, 2))} K${result.clamp ? `   (${result.clamp.kind} clamp)` : ''}\n`);
   out.push(
     textTable(
-      ['solid', 'loaded g', 'dissolved g', 'undissolved g', 'ΔsolH kJ/mol', 'heat kJ'],
+      ['solid', 'loaded g', 'dissolved g', 'undissolved g', 'mol/kg', 'ΔsolH(m) kJ/mol', 'heat kJ'],
       result.dissolved.map((d) => [
         d.formula,
         d.loadedMass.toFixed(2),
         d.dissolvedMass.toFixed(2),
         d.undissolvedMass.toFixed(2) + (d.undissolvedSolid && d.undissolvedSolid.formula !== d.formula ? ` (as ${d.undissolvedSolid.formula})` : ''),
-        `${d.enthalpyOfSolution.value.toFixed(2)} ± ${d.enthalpyOfSolution.u.toPrecision(2)} (${userSourceOf(d.enthalpyOfSolution as Estimate, dataset) ? 'your value' : d.enthalpyOfSolution.basis})`,
+        d.molality.toFixed(2),
+        `${d.integralEnthalpy.value.toFixed(2)} ± ${d.integralEnthalpy.u.toPrecision(2)} (∞: ${d.enthalpyOfSolution.value.toFixed(2)}${userSourceOf(d.enthalpyOfSolution as Estimate, dataset) ? ', your value' : ''})`,
         d.heat.toFixed(3),
       ]),
-      new Set([1, 2, 3, 5]),
+      new Set([1, 2, 3, 4, 6]),
     ),
   );
   const h = result.heat;
-  out.push(`heat ${h.direction === 'released' ? 'released' : 'absorbed'} by dissolution ${Math.abs(h.absorbed).toFixed(3)} kJ; heat capacity ${result.heatCapacity.value.toFixed(1)} ± ${result.heatCapacity.u.toPrecision(2)} J/K (${result.heatCapacity.basis === 'parts' ? 'from the parts' : 'your value'}); ${result.liquidWater.toFixed(2)} g of liquid water at the end`);
+  out.push(`heat ${h.direction === 'released' ? 'released' : 'absorbed'} by dissolution ${Math.abs(h.absorbed).toFixed(3)} kJ; heat capacity ${result.heatCapacity.value.toFixed(1)} ± ${result.heatCapacity.u.toPrecision(2)} J/K (${result.heatCapacity.basis === 'parts' ? 'from the parts' : 'your value'}); ${result.liquidWater.toFixed(2)} g of liquid water${result.iceMass > 0 ? ` and ${result.iceMass.toFixed(2)} g of ice` : ''} at the end`);
   const lc = curve.largestChange;
   const bp = curve.bestPerGram;
   out.push(`\ndesign (this water and start): ${lc.temperature < f.startC ? 'coldest' : 'hottest'} ${lc.temperature.toFixed(2)} °C at ${lc.ratio.toFixed(4)} g solid per g water (${lc.saltMass.toFixed(2)} g); most change per gram of fill at ${bp.ratio.toFixed(4)} g/g (${bp.temperature.toFixed(2)} °C)`);
