@@ -16,7 +16,8 @@ import { quadrature } from '../quantity/propagate.js';
 import { makeEstimate, type Basis, type Estimate } from '../quantity/estimate.js';
 import type { CycleStep } from './cycleStep.js';
 import { elementSteps, gaseousIon } from './gaseousIon.js';
-import { ionText, subscriptFormula } from './ionText.js';
+import { ionText } from '../notation/charge.js';
+import { formulaText } from '../notation/formula.js';
 import { thermalElectronEnthalpy } from './thermalElectronEnthalpy.js';
 
 /** What a cycle can be solved for. */
@@ -165,7 +166,7 @@ export function bornHaberCycle(salt: Salt | string, options: BornHaberOptions = 
   path.sort((a, b) => ORDER[a.kind] - ORDER[b.kind]);
 
   const gasIons = s.ions.map((i) => `${i.count > 1 ? i.count + ' ' : ''}${ionText(i.ion)}(g)`).join(' + ');
-  const crystal = `${subscriptFormula(s.formula)}(s)`;
+  const crystal = `${formulaText(s.formula)}(s)`;
   const tabulated = saltRecords('compound-formation.json', s, dataset).find((r) => r.phase === 'cr');
   const formationKnown: KnownValue | undefined =
     options.formationEnthalpy ?? (tabulated ? { value: tabulated.value, u: dataset.uncertaintyOf('compound-formation.json', tabulated) ?? 0, source: tabulated.source } : undefined);

@@ -9,7 +9,7 @@ import { builtinDataset } from '../data/builtin.js';
 import { exactSum } from '../quantity/exactSum.js';
 import { quadrature } from '../quantity/propagate.js';
 import type { CycleStep } from './cycleStep.js';
-import { ionText } from './ionText.js';
+import { ionText } from '../notation/charge.js';
 import { thermalElectronEnthalpy } from './thermalElectronEnthalpy.js';
 
 /** A gaseous ion's formation enthalpy with the steps behind it. */

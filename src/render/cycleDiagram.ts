@@ -6,7 +6,8 @@
 import { drawChecked } from './chartInput.js';
 import type { BornHaberCycle } from '../cycle/bornHaberCycle.js';
 import type { CycleStep } from '../cycle/cycleStep.js';
-import { el, linearScale, niceTicks, num, svgDocument, text, theme, tickLabel } from './svg.js';
+import { el, linearScale, niceTicks, num, svgDocument, text, tickLabel } from './svg.js';
+import { palette } from './palette.js';
 
 /** Options of {@link cycleDiagram}. */
 export interface CycleDiagramOptions {
@@ -109,16 +110,16 @@ function draw(cycle: BornHaberCycle, options: CycleDiagramOptions): string {
   // Axis with ticks and grid.
   for (const t of ticks) {
     const yy = y(t);
-    body.push(el('line', { x1: left, y1: yy, x2: right, y2: yy, stroke: theme.grid, 'stroke-width': 1 }));
+    body.push(el('line', { x1: left, y1: yy, x2: right, y2: yy, stroke: palette.grid, 'stroke-width': 1 }));
     body.push(text(left - 8, yy + 4, tickLabel(t), { class: 'small muted', 'text-anchor': 'end' }));
   }
-  body.push(el('line', { x1: left, y1: top, x2: left, y2: top + plotHeight, stroke: theme.muted, 'stroke-width': 1 }));
+  body.push(el('line', { x1: left, y1: top, x2: left, y2: top + plotHeight, stroke: palette.muted, 'stroke-width': 1 }));
   const axisX = 22;
   const axisY = top + plotHeight / 2;
   body.push(text(axisX, axisY, 'enthalpy, kJ/mol', { class: 'small muted', 'text-anchor': 'middle', transform: `rotate(-90 ${num(axisX)} ${num(axisY)})` }));
 
   const levelLine = (x1: number, x2: number, value: number, strong = false) =>
-    el('line', { x1, y1: y(value), x2, y2: y(value), stroke: theme.ink, 'stroke-width': strong ? 2 : 1.2, 'stroke-linecap': 'round' });
+    el('line', { x1, y1: y(value), x2, y2: y(value), stroke: palette.ink, 'stroke-width': strong ? 2 : 1.2, 'stroke-linecap': 'round' });
 
   // Elements level (0) across to the first arrow, and across to the formation arrow.
   body.push(levelLine(left, cx(0) + colW * 0.35, 0, true));
@@ -137,7 +138,7 @@ function draw(cycle: BornHaberCycle, options: CycleDiagramOptions): string {
       to = levels[k + 1]!;
     }
     const x = cx(k);
-    const colour = s.solved ? theme.accent : s.value > 0 ? theme.heat : s.value < 0 ? theme.cool : theme.neutral;
+    const colour = s.solved ? palette.solved : s.value > 0 ? palette.cold : s.value < 0 ? palette.hot : palette.neutral;
     if (Math.abs(y(to) - y(from)) >= 1) body.push(arrow(x, y(from), y(to), colour, s.solved));
     else body.push(el('circle', { cx: x, cy: y(to), r: 3, fill: colour }));
     // Beside the arrow's middle, or above a short arrow so that the label does not cross the levels.
@@ -160,18 +161,18 @@ function draw(cycle: BornHaberCycle, options: CycleDiagramOptions): string {
   body.push(levelLine(cx(Math.max(path.length, 0)) - colW * 0.35, lastX, crystal, true));
   body.push(text(right + 8, y(crystal) + 4, `${pretty(cycle.formula)}(s)`, { class: 'small' }));
   if (formation) {
-    body.push(el('line', { x1: cx(0) + colW * 0.35, y1: y(0), x2: lastX, y2: y(0), stroke: theme.ink, 'stroke-width': 1.2, 'stroke-dasharray': '2 3' }));
+    body.push(el('line', { x1: cx(0) + colW * 0.35, y1: y(0), x2: lastX, y2: y(0), stroke: palette.ink, 'stroke-width': 1.2, 'stroke-dasharray': '2 3' }));
     body.push(text(right + 8, y(0) + 4, 'elements', { class: 'small' }));
   }
 
   // Key: arrows' colours, then one line per step.
   let ky = top + plotHeight + 34;
   const key = [
-    el('line', { x1: 24, y1: ky - 4, x2: 44, y2: ky - 4, stroke: theme.heat, 'stroke-width': 2.2 }),
+    el('line', { x1: 24, y1: ky - 4, x2: 44, y2: ky - 4, stroke: palette.cold, 'stroke-width': 2.2 }),
     text(50, ky, 'up: endothermic (heat taken in)', { class: 'small' }),
-    el('line', { x1: 250, y1: ky - 4, x2: 270, y2: ky - 4, stroke: theme.cool, 'stroke-width': 2.2 }),
+    el('line', { x1: 250, y1: ky - 4, x2: 270, y2: ky - 4, stroke: palette.hot, 'stroke-width': 2.2 }),
     text(276, ky, 'down: exothermic (heat given out)', { class: 'small' }),
-    el('line', { x1: 490, y1: ky - 4, x2: 510, y2: ky - 4, stroke: theme.accent, 'stroke-width': 2.2, 'stroke-dasharray': '6 4' }),
+    el('line', { x1: 490, y1: ky - 4, x2: 510, y2: ky - 4, stroke: palette.solved, 'stroke-width': 2.2, 'stroke-dasharray': '6 4' }),
     text(516, ky, 'the step solved for', { class: 'small' }),
   ];
   body.push(...key);

@@ -10,7 +10,8 @@ import { drawChecked } from './chartInput.js';
 import type { Basis, Estimate } from '../quantity/estimate.js';
 import { formatEstimate } from '../quantity/formatEstimate.js';
 import type { Direction, ObjectiveName, ScreenRow, Suitability } from '../screen/screenRow.js';
-import { el, linearScale, niceTicks, num, svgDocument, text, theme, tickLabel } from './svg.js';
+import { el, linearScale, niceTicks, num, svgDocument, text, tickLabel } from './svg.js';
+import { palette } from './palette.js';
 
 /** A vertical line to draw across the chart, such as a target temperature. */
 export interface ChartMark {
@@ -191,12 +192,12 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
   parts.push(text(lx, y + 4, 'Basis:', { class: 'label' }));
   lx += 48;
   for (const b of legendBases) {
-    parts.push(marker(b, lx + 5, y, 5, theme.ink, theme.ink));
+    parts.push(marker(b, lx + 5, y, 5, palette.ink, palette.ink));
     parts.push(text(lx + 15, y + 4, BASIS_LABEL[b], { class: 'label' }));
     lx += 28 + textWidth(BASIS_LABEL[b], 12);
   }
   lx += 10;
-  parts.push(el('rect', { x: lx, y: y - 6, width: 26, height: 12, fill: '#fdf3d7', stroke: '#e0b64a', 'stroke-dasharray': '3 2' }));
+  parts.push(el('rect', { x: lx, y: y - 6, width: 26, height: 12, fill: palette.unsureTint, stroke: palette.unsure, 'stroke-dasharray': '3 2' }));
   parts.push(text(lx + 32, y + 4, 'undetermined: interval spans zero', { class: 'label' }));
   y += 22;
 
@@ -220,15 +221,15 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
     const rows = shown.map((r, i) => ({ r, i })).filter(({ r }) => r.suitability === group);
     if (rows.length === 0) continue;
     rowY += 6;
-    body.push(text(12, rowY + 12, groupTitle[group], { class: 'label', 'font-weight': '600', fill: group === 'undetermined' ? '#9a6b00' : theme.ink }));
+    body.push(text(12, rowY + 12, groupTitle[group], { class: 'label', 'font-weight': '600', fill: group === 'undetermined' ? palette.unsure : palette.ink }));
     rowY += 20;
     const y0 = rowY;
     for (const { r, i } of rows) {
       const e = r.objective!;
       const cy = rowY + rowH / 2;
-      if (group === 'undetermined') shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: '#fdf3d7' }));
-      else if (index % 2 === 1) shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: '#f5f7fa' }));
-      const colour = group === 'suitable' ? (cool ? theme.cool : theme.heat) : group === 'undetermined' ? '#b7791f' : theme.neutral;
+      if (group === 'undetermined') shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: palette.unsureTint }));
+      else if (index % 2 === 1) shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: palette.zebra }));
+      const colour = group === 'suitable' ? (cool ? palette.cold : palette.hot) : group === 'undetermined' ? palette.unsure : palette.neutral;
       body.push(text(left - 10, cy + font * 0.36, labels[i]!, { 'text-anchor': 'end', 'font-size': font, ...(group === 'unsuitable' ? { class: 'muted' } : {}), ...(group === 'undetermined' ? { 'font-style': 'italic' } : {}) }));
       const x0 = Math.max(left, Math.min(right, x(e.low)));
       const x1 = Math.max(left, Math.min(right, x(e.high)));
@@ -239,7 +240,7 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
         else body.push(el('line', { x1: end, y1: cy - h, x2: end, y2: cy + h, stroke: colour, 'stroke-width': 1.2 }));
       }
       const hollow = group === 'undetermined';
-      body.push(marker(e.basis, Math.max(left, Math.min(right, x(e.value))), cy, markerR, hollow ? '#ffffff' : colour, group === 'suitable' ? theme.ink : colour));
+      body.push(marker(e.basis, Math.max(left, Math.min(right, x(e.value))), cy, markerR, hollow ? palette.background : colour, group === 'suitable' ? palette.ink : colour));
       body.push(text(right + 12, cy + font * 0.36, valueTexts[i]!, { 'font-size': font, class: group === 'unsuitable' ? 'muted' : '' }));
       rowY += rowH;
       index++;
@@ -249,21 +250,21 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
   const bodyBottom = rowY + 6;
 
   // Grid, zero and marks, drawn under the rows' markers but over the shading.
-  const grid: string[] = ticks.map((t) => el('line', { x1: x(t), y1: axisTop, x2: x(t), y2: bodyBottom, stroke: theme.grid, 'stroke-width': 1 }));
+  const grid: string[] = ticks.map((t) => el('line', { x1: x(t), y1: axisTop, x2: x(t), y2: bodyBottom, stroke: palette.grid, 'stroke-width': 1 }));
   const overlay: string[] = [];
   const hintY = axisTop - 20;
   if (domain[0] <= 0 && domain[1] >= 0) {
-    overlay.push(el('line', { x1: x(0), y1: axisTop - 2, x2: x(0), y2: bodyBottom, stroke: theme.ink, 'stroke-width': 1.5 }));
+    overlay.push(el('line', { x1: x(0), y1: axisTop - 2, x2: x(0), y2: bodyBottom, stroke: palette.ink, 'stroke-width': 1.5 }));
     if (objective === 'enthalpy' || objective === 'heat-per-gram') {
       const heats = '← heats (exothermic)';
       const cools = 'cools (endothermic) →';
-      if (x(0) - left > textWidth(heats, 11) + 8) overlay.push(text(x(0) - 6, hintY, heats, { class: 'small', 'text-anchor': 'end', fill: theme.heat }));
-      if (right - x(0) > textWidth(cools, 11) + 8) overlay.push(text(x(0) + 6, hintY, cools, { class: 'small', fill: theme.cool }));
+      if (x(0) - left > textWidth(heats, 11) + 8) overlay.push(text(x(0) - 6, hintY, heats, { class: 'small', 'text-anchor': 'end', fill: palette.hot }));
+      if (right - x(0) > textWidth(cools, 11) + 8) overlay.push(text(x(0) + 6, hintY, cools, { class: 'small', fill: palette.cold }));
     } else overlay.push(text(x(0) + 4, hintY, objective === 'fill-temperature' ? '0 °C' : 'zero', { class: 'small', 'font-weight': '600' }));
   }
   marks.forEach((m, i) => {
-    overlay.push(el('line', { x1: x(m.at), y1: hintY - 10 - 12 * i, x2: x(m.at), y2: bodyBottom, stroke: theme.accent, 'stroke-width': 1.5, 'stroke-dasharray': '6 3' }));
-    overlay.push(text(x(m.at) + 4, hintY - 12 * i - 2, m.label, { class: 'small', fill: theme.accent }));
+    overlay.push(el('line', { x1: x(m.at), y1: hintY - 10 - 12 * i, x2: x(m.at), y2: bodyBottom, stroke: palette.solved, 'stroke-width': 1.5, 'stroke-dasharray': '6 3' }));
+    overlay.push(text(x(m.at) + 4, hintY - 12 * i - 2, m.label, { class: 'small', fill: palette.solved }));
   });
 
   // Footer: axis title, what is not shown, the caution.

@@ -8,7 +8,8 @@
 import { drawChecked } from './chartInput.js';
 import type { PackRatioCurve } from '../pack/packRatioCurve.js';
 import { CONTACT_BURN_THRESHOLD_C } from '../pack/packCautions.js';
-import { el, linearScale, niceTicks, svgDocument, text, theme, tickLabel } from './svg.js';
+import { el, linearScale, niceTicks, svgDocument, text, tickLabel } from './svg.js';
+import { palette } from './palette.js';
 
 /** Options of {@link packCurveSvg}. */
 export interface PackCurveChartOptions {
@@ -65,7 +66,7 @@ function draw(curve: PackRatioCurve, options: PackCurveChartOptions): string {
   const xTicks = niceTicks(0, last.ratio, 8);
   const x = linearScale([0, last.ratio], [plot.x0, plot.x1]);
   const y = linearScale(yTicks.domain, [plot.y1, plot.y0]);
-  const colour = cools ? theme.cool : theme.heat;
+  const colour = cools ? palette.cold : palette.hot;
   const body: string[] = [];
 
   body.push(text(margin.left, 28, title, { class: 'heading' }));
@@ -74,20 +75,20 @@ function draw(curve: PackRatioCurve, options: PackCurveChartOptions): string {
   // Beyond saturation: shade and say what happens there.
   if (curve.saturationRatio !== null && curve.saturationRatio < last.ratio) {
     const xs = x(curve.saturationRatio);
-    body.push(el('rect', { x: xs, y: plot.y0, width: plot.x1 - xs, height: plot.y1 - plot.y0, fill: theme.grid, opacity: 0.55 }));
+    body.push(el('rect', { x: xs, y: plot.y0, width: plot.x1 - xs, height: plot.y1 - plot.y0, fill: palette.grid, opacity: 0.55 }));
     body.push(text(xs + 6, plot.y0 + 16, 'undissolved solid remains', { class: 'small muted' }));
   }
 
   // Grid and axes.
   for (const t of yTicks.ticks) {
-    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(t), y2: y(t), stroke: theme.grid, 'stroke-width': 1 }));
+    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(t), y2: y(t), stroke: palette.grid, 'stroke-width': 1 }));
     body.push(text(plot.x0 - 8, y(t) + 4, tickLabel(t), { class: 'small', 'text-anchor': 'end' }));
   }
   for (const t of xTicks.ticks.filter((v) => v <= last.ratio * (1 + 1e-9))) {
-    body.push(el('line', { x1: x(t), x2: x(t), y1: plot.y1, y2: plot.y1 + 5, stroke: theme.muted }));
+    body.push(el('line', { x1: x(t), x2: x(t), y1: plot.y1, y2: plot.y1 + 5, stroke: palette.muted }));
     body.push(text(x(t), plot.y1 + 19, tickLabel(t), { class: 'small', 'text-anchor': 'middle' }));
   }
-  body.push(el('rect', { x: plot.x0, y: plot.y0, width: plot.x1 - plot.x0, height: plot.y1 - plot.y0, fill: 'none', stroke: theme.muted, 'stroke-width': 1 }));
+  body.push(el('rect', { x: plot.x0, y: plot.y0, width: plot.x1 - plot.x0, height: plot.y1 - plot.y0, fill: 'none', stroke: palette.muted, 'stroke-width': 1 }));
   body.push(text((plot.x0 + plot.x1) / 2, height - 18, 'ratio: grams of solid per gram of water', { class: 'label', 'text-anchor': 'middle' }));
   body.push(text(18, (plot.y0 + plot.y1) / 2, 'final temperature (°C)', { class: 'label', 'text-anchor': 'middle', transform: `rotate(-90 18 ${(plot.y0 + plot.y1) / 2})` }));
 
@@ -96,9 +97,9 @@ function draw(curve: PackRatioCurve, options: PackCurveChartOptions): string {
     body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(value), y2: y(value), stroke, 'stroke-width': 1.2, 'stroke-dasharray': dash }));
     body.push(text(anchorEnd ? plot.x1 - 6 : plot.x0 + 6, y(value) - 5, label, { class: 'small', fill: stroke, 'text-anchor': anchorEnd ? 'end' : 'start' }));
   };
-  hline(t0, theme.muted, '5 4', `start ${fmt(t0)} °C`);
-  if (showBurn) hline(CONTACT_BURN_THRESHOLD_C, theme.heat, '2 3', `${CONTACT_BURN_THRESHOLD_C} °C: contact-burn threshold for long contact (ISO 13732-1)`);
-  if (showZero && curve.target?.target !== 0) hline(0, theme.cool, '2 3', '0 °C');
+  hline(t0, palette.muted, '5 4', `start ${fmt(t0)} °C`);
+  if (showBurn) hline(CONTACT_BURN_THRESHOLD_C, palette.hot, '2 3', `${CONTACT_BURN_THRESHOLD_C} °C: contact-burn threshold for long contact (ISO 13732-1)`);
+  if (showZero && curve.target?.target !== 0) hline(0, palette.cold, '2 3', '0 °C');
 
   // Band and curve.
   const banded = pts.filter((p) => p.low !== undefined && p.high !== undefined);
@@ -127,24 +128,24 @@ function draw(curve: PackRatioCurve, options: PackCurveChartOptions): string {
     marks.push({ ratio: bp.ratio, temperature: bp.temperature, label: `most change per gram of fill: ${fmt(bp.ratio, 3)} g/g`, shape: 'diamond' });
   }
   if (curve.target) {
-    hline(curve.target.target, theme.accent, '6 3', `target ${fmt(curve.target.target)} °C${curve.target.reachable ? '' : ' (out of reach)'}`, false);
+    hline(curve.target.target, palette.solved, '6 3', `target ${fmt(curve.target.target)} °C${curve.target.reachable ? '' : ' (out of reach)'}`, false);
     const d = curve.target.design;
     if (d && d.ratio > 0) marks.push({ ratio: d.ratio, temperature: d.temperature, label: `target reached at ${fmt(d.ratio, 3)} g/g (${fmt(d.saltMass, 1)} g)`, shape: 'square' });
   }
   marks.forEach((m, i) => {
     const cx = x(m.ratio);
     const cy = y(m.temperature);
-    const fill = m.shape === 'square' ? theme.accent : colour;
-    if (m.shape === 'circle') body.push(el('circle', { cx, cy, r: 5.5, fill: theme.background, stroke: fill, 'stroke-width': 2.2 }));
-    else if (m.shape === 'diamond') body.push(el('polygon', { points: `${cx},${cy - 7} ${cx + 7},${cy} ${cx},${cy + 7} ${cx - 7},${cy}`, fill: theme.background, stroke: fill, 'stroke-width': 2 }));
-    else body.push(el('rect', { x: cx - 5, y: cy - 5, width: 10, height: 10, fill, stroke: theme.background, 'stroke-width': 1 }));
+    const fill = m.shape === 'square' ? palette.solved : colour;
+    if (m.shape === 'circle') body.push(el('circle', { cx, cy, r: 5.5, fill: palette.background, stroke: fill, 'stroke-width': 2.2 }));
+    else if (m.shape === 'diamond') body.push(el('polygon', { points: `${cx},${cy - 7} ${cx + 7},${cy} ${cx},${cy + 7} ${cx - 7},${cy}`, fill: palette.background, stroke: fill, 'stroke-width': 2 }));
+    else body.push(el('rect', { x: cx - 5, y: cy - 5, width: 10, height: 10, fill, stroke: palette.background, 'stroke-width': 1 }));
     // Labels stack in the emptier half of the plot, away from the curve.
     const ly = cools ? plot.y1 - 16 - 18 * i : plot.y1 - 16 - 18 * (marks.length - 1 - i) - (showBurn ? 0 : 0);
     const lx = Math.min(cx + 10, plot.x1 - 6);
     const anchor = cx > (plot.x0 + plot.x1) / 2 ? 'end' : 'start';
     const labelY = cools ? plot.y0 + 34 + 18 * i : ly;
     body.push(el('line', { x1: cx, x2: cx, y1: cy, y2: labelY + (cools ? -12 : 4), stroke: fill, 'stroke-width': 0.8, 'stroke-dasharray': '1 2' }));
-    body.push(text(anchor === 'end' ? cx - 6 : lx, labelY, m.label, { class: 'small', fill: theme.ink, 'text-anchor': anchor }));
+    body.push(text(anchor === 'end' ? cx - 6 : lx, labelY, m.label, { class: 'small', fill: palette.ink, 'text-anchor': anchor }));
   });
 
   return svgDocument(width, height, title, body, `${subtitle}. ${marks.map((m) => m.label).join('; ')}`);

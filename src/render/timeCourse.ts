@@ -7,7 +7,8 @@
 import { drawChecked } from './chartInput.js';
 import type { PackTimeCourse } from '../pack/packTimeCourse.js';
 import { CONTACT_BURN_THRESHOLD_C } from '../pack/packCautions.js';
-import { el, linearScale, niceTicks, svgDocument, text, theme, tickLabel } from './svg.js';
+import { el, linearScale, niceTicks, svgDocument, text, tickLabel } from './svg.js';
+import { palette } from './palette.js';
 
 /** Options of {@link timeCourseSvg}. */
 export interface TimeCourseChartOptions {
@@ -56,7 +57,7 @@ function draw(course: PackTimeCourse, options: TimeCourseChartOptions): string {
   const tEnd = pts[pts.length - 1]!.t;
   const minutes = tEnd / 60;
   const cools = course.adiabaticFinal.value < course.startC;
-  const colour = cools ? theme.cool : theme.heat;
+  const colour = cools ? palette.cold : palette.hot;
   const ys = [...pts.map((q) => q.temperature), course.startC, course.adiabaticFinal.value, p.ambientC.value, p.skinC.value];
   if (course.band) ys.push(course.band.lowC, course.band.highC);
   let yLo = Math.min(...ys);
@@ -77,18 +78,18 @@ function draw(course: PackTimeCourse, options: TimeCourseChartOptions): string {
 
   if (course.band) {
     const b = course.band;
-    body.push(el('rect', { x: plot.x0, y: y(b.highC), width: plot.x1 - plot.x0, height: y(b.lowC) - y(b.highC), fill: '#3e9e6b', opacity: 0.13 }));
-    body.push(text(plot.x1 - 8, y(b.highC) + 15, `target band ${fmt(b.lowC)}–${fmt(b.highC)} °C: ${fmt(b.secondsInside / 60)} min inside`, { class: 'small', fill: '#2f7a52', 'text-anchor': 'end' }));
+    body.push(el('rect', { x: plot.x0, y: y(b.highC), width: plot.x1 - plot.x0, height: y(b.lowC) - y(b.highC), fill: palette.band }));
+    body.push(text(plot.x1 - 8, y(b.highC) + 15, `target band ${fmt(b.lowC)}–${fmt(b.highC)} °C: ${fmt(b.secondsInside / 60)} min inside`, { class: 'small', fill: palette.bandInk, 'text-anchor': 'end' }));
   }
   for (const t of yTicks.ticks) {
-    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(t), y2: y(t), stroke: theme.grid, 'stroke-width': 1 }));
+    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(t), y2: y(t), stroke: palette.grid, 'stroke-width': 1 }));
     body.push(text(plot.x0 - 8, y(t) + 4, tickLabel(t), { class: 'small', 'text-anchor': 'end' }));
   }
   for (const t of xTicks.ticks.filter((v) => v <= minutes * (1 + 1e-9))) {
-    body.push(el('line', { x1: x(t), x2: x(t), y1: plot.y1, y2: plot.y1 + 5, stroke: theme.muted }));
+    body.push(el('line', { x1: x(t), x2: x(t), y1: plot.y1, y2: plot.y1 + 5, stroke: palette.muted }));
     body.push(text(x(t), plot.y1 + 19, tickLabel(t), { class: 'small', 'text-anchor': 'middle' }));
   }
-  body.push(el('rect', { x: plot.x0, y: plot.y0, width: plot.x1 - plot.x0, height: plot.y1 - plot.y0, fill: 'none', stroke: theme.muted, 'stroke-width': 1 }));
+  body.push(el('rect', { x: plot.x0, y: plot.y0, width: plot.x1 - plot.x0, height: plot.y1 - plot.y0, fill: 'none', stroke: palette.muted, 'stroke-width': 1 }));
   body.push(text((plot.x0 + plot.x1) / 2, height - 18, 'time since the salt met the water (min)', { class: 'label', 'text-anchor': 'middle' }));
   body.push(text(18, (plot.y0 + plot.y1) / 2, 'pack temperature (°C)', { class: 'label', 'text-anchor': 'middle', transform: `rotate(-90 18 ${(plot.y0 + plot.y1) / 2})` }));
 
@@ -98,17 +99,17 @@ function draw(course: PackTimeCourse, options: TimeCourseChartOptions): string {
   };
   const air = p.ambientC.value;
   const skin = p.skinC.value;
-  hline(air, theme.neutral, '5 4', `air ${fmt(air)} °C`, air < skin);
-  hline(skin, theme.accent, '5 4', `skin ${fmt(skin)} °C`, skin < air);
+  hline(air, palette.neutral, '5 4', `air ${fmt(air)} °C`, air < skin);
+  hline(skin, palette.solved, '5 4', `skin ${fmt(skin)} °C`, skin < air);
   hline(course.adiabaticFinal.value, colour, '1 3', `adiabatic final ${fmt(course.adiabaticFinal.value)} °C (no heat exchange)`, !cools);
-  if (showBurn) hline(CONTACT_BURN_THRESHOLD_C, theme.heat, '2 3', `${CONTACT_BURN_THRESHOLD_C} °C contact-burn threshold for long contact (ISO 13732-1): ${fmt(course.secondsAboveBurnThreshold / 60)} min above`, true);
-  if (showZero) hline(0, theme.cool, '2 3', '0 °C');
+  if (showBurn) hline(CONTACT_BURN_THRESHOLD_C, palette.hot, '2 3', `${CONTACT_BURN_THRESHOLD_C} °C contact-burn threshold for long contact (ISO 13732-1): ${fmt(course.secondsAboveBurnThreshold / 60)} min above`, true);
+  if (showZero) hline(0, palette.cold, '2 3', '0 °C');
 
   body.push(el('polyline', { points: pts.map((q) => `${x(q.t / 60).toFixed(2)},${y(q.temperature).toFixed(2)}`).join(' '), fill: 'none', stroke: colour, 'stroke-width': 2.4, 'stroke-linejoin': 'round' }));
   const ex = course.extreme;
   const cx = x(ex.timeS / 60);
   const cy = y(ex.temperature);
-  body.push(el('circle', { cx, cy, r: 5, fill: theme.background, stroke: colour, 'stroke-width': 2 }));
+  body.push(el('circle', { cx, cy, r: 5, fill: palette.background, stroke: colour, 'stroke-width': 2 }));
   const label = `${cools ? 'coldest' : 'hottest'} ${fmt(ex.temperature)} °C after ${fmt(ex.timeS / 60)} min`;
   const right = cx < (plot.x0 + plot.x1) * 0.6;
   body.push(text(right ? cx + 10 : cx - 10, cy + (cools ? 18 : -10), label, { class: 'small', 'text-anchor': right ? 'start' : 'end' }));
