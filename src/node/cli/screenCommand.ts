@@ -9,6 +9,7 @@ import { writeFileSync } from 'node:fs';
 import { Readable } from 'node:stream';
 import { IonheatError } from '../../error.js';
 import { intervalChart } from '../../render/intervalChart.js';
+import { specThresholds } from '../../screen/specThresholds.js';
 import { createScreener } from '../../screen/createScreener.js';
 import { enumerate } from '../../screen/enumerate.js';
 import { parseFillSpec } from '../../screen/parseFillSpec.js';
@@ -175,7 +176,7 @@ export const screenCommand: Command = {
 
     if (values.svg !== undefined) {
       const rows = streaming ? rankRows(best.sort((a, b) => compareRanked(a, b, settings.objective, settings.direction)).slice(0, CHART_ROWS), settings.objective, settings.direction) : best;
-      const svg = intervalChart({ settings, rows, ...(streaming ? { summary } : {}) }, { maxRows: CHART_ROWS });
+      const svg = intervalChart({ settings, rows, ...(streaming ? { summary } : {}) }, { maxRows: CHART_ROWS, marks: specThresholds(settings.spec, settings.objective) });
       const target = values.svg.startsWith('/') ? values.svg : `${io.cwd}/${values.svg}`;
       try {
         writeFileSync(target, svg);
