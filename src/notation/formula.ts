@@ -29,3 +29,15 @@ export function formulaText(formula: string): string {
   }
   return out;
 }
+
+/**
+ * Free text with the formulas in it written for display: each word that
+ * starts with a capital letter or a parenthesis and holds a digit is taken
+ * for a formula (`40 g CaCl2 in 100 g water` → `40 g CaCl₂ in 100 g water`).
+ */
+export function formulasInText(text: string): string {
+  return text
+    .split(' ')
+    .map((w) => (/^[A-Z(][A-Za-z0-9()·.]*$/.test(w) && /[0-9]/.test(w) ? formulaText(w) : w))
+    .join(' ');
+}

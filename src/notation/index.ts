@@ -8,6 +8,6 @@
  */
 export { MINUS, formatNumber, withTrueMinus } from './minus.js';
 export { chargeText, chargeNumber, ionText } from './charge.js';
-export { formulaText } from './formula.js';
+export { formulaText, formulasInText } from './formula.js';
 export { UNIT, withUnit } from './units.js';
 export { wrapText } from './wrapText.js';

@@ -128,7 +128,7 @@ function draw(cycle: BornHaberCycle, options: CycleDiagramOptions): string {
     return el('line', { x1, y1: y(value), x2, y2: y(value), stroke: palette.ink, 'stroke-width': strong ? 2 : 1.2, 'stroke-linecap': 'round' });
   };
   const levelLabels: [number, string][] = [[ions, 'gaseous ions'], [crystal, `${formulaText(cycle.formula)}(s)`], [0, 'elements']];
-  for (const [value, words] of levelLabels) placer.reserve(textBox(right + 8, y(value) + 4, words, 11));
+  for (const [value, words] of levelLabels) placer.reserve(textBox(right + 8, y(value) + 4, words, 11), 'label');
 
   // Elements level (0) across to the first arrow, and across to the formation arrow.
   body.push(levelLine(left, cx(0) + colW * 0.35, 0, true));

@@ -60,33 +60,53 @@ export interface LabelSpot {
  * the bounds, else the last spot.
  */
 export class LabelPlacer {
-  private readonly taken: TextBox[] = [];
+  /** Taken boxes, each with the cost per px² of covering it: a label costs far more than a line or a curve. */
+  private readonly taken: { box: TextBox; weight: number }[] = [];
 
   constructor(private readonly bounds: TextBox) {}
 
-  /** Marks a box as taken. */
-  reserve(box: TextBox): void {
-    this.taken.push(box);
+  /** Marks a box as taken: `label` for text (never to be covered), else a line, curve or marker (better not). */
+  reserve(box: TextBox, kind: 'label' | 'drawing' = 'drawing'): void {
+    this.taken.push({ box, weight: kind === 'label' ? 1000 : 1 });
+  }
+
+  /** What covering `box` would cost: 0 when it is free and inside the bounds. */
+  private cost(box: TextBox): number {
+    const b = this.bounds;
+    const outside = box.x0 < b.x0 || box.x1 > b.x1 || box.y0 < b.y0 || box.y1 > b.y1 ? 1e9 : 0;
+    let sum = outside;
+    for (const t of this.taken) {
+      if (!boxesOverlap(t.box, box)) continue;
+      const w = Math.min(t.box.x1, box.x1) - Math.max(t.box.x0, box.x0);
+      const h = Math.min(t.box.y1, box.y1) - Math.max(t.box.y0, box.y0);
+      sum += t.weight * (1 + w * h);
+    }
+    return sum;
   }
 
   /** Whether a box is free of every taken box and inside the bounds. */
   fits(box: TextBox): boolean {
-    const b = this.bounds;
-    return box.x0 >= b.x0 && box.x1 <= b.x1 && box.y0 >= b.y0 && box.y1 <= b.y1 && this.taken.every((t) => !boxesOverlap(t, box));
+    return this.cost(box) === 0;
   }
 
-  /** Picks the first free spot for `content` at `size` px, reserves it and returns it. */
+  /**
+   * Picks the first free spot for `content` at `size` px (else the spot that covers least, never another label
+   * where that can be helped), reserves it as a label and returns it.
+   */
   place(content: string, size: number, spots: readonly LabelSpot[]): Required<LabelSpot> {
-    let chosen: Required<LabelSpot> | undefined;
+    let best: Required<LabelSpot> | undefined;
+    let bestCost = Infinity;
     for (const s of spots) {
       const spot = { x: s.x, y: s.y, anchor: s.anchor ?? 'start' };
-      if (this.fits(textBox(spot.x, spot.y, content, size, spot.anchor))) {
-        chosen = spot;
-        break;
+      const cost = this.cost(textBox(spot.x, spot.y, content, size, spot.anchor));
+      if (cost < bestCost) {
+        best = spot;
+        bestCost = cost;
+        if (cost === 0) break;
       }
     }
-    chosen ??= { x: spots[spots.length - 1]!.x, y: spots[spots.length - 1]!.y, anchor: spots[spots.length - 1]!.anchor ?? 'start' };
-    this.reserve(textBox(chosen.x, chosen.y, content, size, chosen.anchor));
+    const chosen = best!;
+    this.reserve(textBox(chosen.x, chosen.y, content, size, chosen.anchor), 'label');
     return chosen;
   }
 }
