@@ -38,6 +38,9 @@ export function formulaText(formula: string): string {
 export function formulasInText(text: string): string {
   return text
     .split(' ')
-    .map((w) => (/^[A-Z(][A-Za-z0-9()·.]*$/.test(w) && /[0-9]/.test(w) ? formulaText(w) : w))
+    .map((w) => {
+      const m = /^([A-Z(][A-Za-z0-9()·.]*?)([.,;:)]*)$/.exec(w);
+      return m && /[0-9]/.test(m[1]!) && /[a-z)]|[A-Z][0-9]/.test(m[1]!) ? formulaText(m[1]!) + m[2]! : w;
+    })
     .join(' ');
 }

@@ -15,6 +15,12 @@ export function wrapText(text: string, width: number, first = '', rest = ' '.rep
   const lines: string[] = [];
   let lead = first;
   for (const paragraph of text.split('\n')) {
+    if ([...lead].length + [...paragraph].length <= width) {
+      // Short enough: kept as written, spacing and all.
+      lines.push((lead + paragraph).trimEnd());
+      lead = rest;
+      continue;
+    }
     let line = lead;
     let empty = true;
     for (const word of paragraph.split(' ')) {

@@ -46,3 +46,12 @@ describe('notation: one way to write signs, charges, formulas and units', () => 
     expect(wrapText('a\nb', 80, '- ')).toEqual(['- a', '  b']);
   });
 });
+
+describe('formulas inside free text', () => {
+  it('writes the formulas of a sentence with subscripts and leaves other words alone', async () => {
+    const { formulasInText } = await import('../../src/notation/formula.js');
+    expect(formulasInText('40 g CaCl2 in 100 g water')).toBe('40 g CaCl₂ in 100 g water');
+    expect(formulasInText('KNO3 (oxidizer): see ISO 13732-1, NH4[+] and CaCl2·6H2O.')).toBe('KNO₃ (oxidizer): see ISO 13732-1, NH4[+] and CaCl₂·6H₂O.');
+    expect(formulasInText('ΔsolH of NaCl, 2 H2O')).toBe('ΔsolH of NaCl, 2 H₂O');
+  });
+});

@@ -8,6 +8,8 @@ export interface CliIO {
   readStdin(): Promise<string>;
   /** Working directory for relative paths. */
   cwd: string;
+  /** Width text output wraps to, in characters (see {@link outputWidth}); 100 when not given. */
+  columns?: number;
   /** Standard input as a stream, for inputs read record by record (optional: commands fall back to readStdin). */
   stdinStream?(): NodeJS.ReadableStream;
 }
@@ -32,6 +34,24 @@ function onStderrError(e: NodeJS.ErrnoException): void {
   process.exit(e.code === 'EPIPE' || e.code === 'ERR_STREAM_DESTROYED' ? 0 : 2);
 }
 
+/** Width of text output when standard output is not a terminal and `COLUMNS` is not set. */
+export const DEFAULT_COLUMNS = 100;
+
+/**
+ * The width text output wraps to: `COLUMNS` when set to a sensible number, else the terminal's width when standard
+ * output is a terminal, else {@link DEFAULT_COLUMNS}.
+ */
+export function terminalColumns(env: Record<string, string | undefined>, ttyColumns: number | undefined): number {
+  const fromEnv = Number(env.COLUMNS);
+  if (Number.isInteger(fromEnv) && fromEnv >= 20 && fromEnv <= 1000) return fromEnv;
+  return ttyColumns !== undefined && ttyColumns >= 20 ? ttyColumns : DEFAULT_COLUMNS;
+}
+
+/** The width a command's text wraps to. */
+export function outputWidth(io: Pick<CliIO, 'columns'>): number {
+  return io.columns ?? DEFAULT_COLUMNS;
+}
+
 /** The process's own streams. */
 export function processIO(): CliIO {
   // Attached once per process, however often processIO is called.
@@ -41,6 +61,7 @@ export function processIO(): CliIO {
     stdout: (t) => void process.stdout.write(t),
     stderr: (t) => void process.stderr.write(t),
     stderrIsTTY: Boolean(process.stderr.isTTY),
+    columns: terminalColumns(process.env, process.stdout.isTTY ? process.stdout.columns : undefined),
     cwd: process.cwd(),
     stdinStream: () => process.stdin,
     readStdin: async () => {

@@ -5,6 +5,7 @@
  *
  * @module
  */
+import { withTrueMinus } from '../../notation/minus.js';
 import { builtinDataset } from '../../data/builtin.js';
 import { isIonheatError } from '../../error.js';
 import { loadDataset } from '../loadDataset.js';
@@ -105,11 +106,11 @@ export async function runCli(argv: readonly string[], io: CliIO = processIO()): 
     return await command.run(args, { io, dataset });
   } catch (e) {
     if (isIonheatError(e)) {
-      io.stderr(`ionheat: ${e.message}\n`);
+      io.stderr(`ionheat: ${withTrueMinus(e.message)}\n`);
       return 2;
     }
     if (e instanceof Error && (e as { usage?: boolean }).usage) {
-      io.stderr(`ionheat: ${e.message}\n`);
+      io.stderr(`ionheat: ${withTrueMinus(e.message)}\n`);
       return 2;
     }
     // A defect in ionheat itself: say so in one line, without a stack trace.

@@ -16,6 +16,7 @@ import { parseFillSpec } from '../../screen/parseFillSpec.js';
 import { compareRanked, isRankable, rankRows } from '../../screen/rankRows.js';
 import { objectiveNameSchema, type ObjectiveName, type ScreenRow } from '../../screen/screenRow.js';
 import { readArgs } from './args.js';
+import { outputWidth } from './io.js';
 import type { Command } from './command.js';
 import { openCandidates, type InputRecord } from '../table/readCandidateRows.js';
 import { csvWriter, jsonWriter, markdownTableOf, summaryLine, textTableOf, type StreamWriter } from '../table/screenWriters.js';
@@ -167,7 +168,7 @@ export const screenCommand: Command = {
     if (writer) emit(writer.end(summary));
     else {
       const ranked = rankRows(collected, settings.objective, settings.direction);
-      emit(format === 'md' ? markdownTableOf(ranked, settings) : textTableOf(ranked, settings));
+      emit(format === 'md' ? markdownTableOf(ranked, settings) : textTableOf(ranked, settings, outputWidth(io)));
       collected.length = 0;
       best = ranked;
     }

@@ -6,6 +6,9 @@
  * @module
  */
 import type { Estimate } from '../../quantity/estimate.js';
+import { formulaText, formulasInText } from '../../notation/formula.js';
+import { withTrueMinus } from '../../notation/minus.js';
+import { wrapText } from '../../notation/wrapText.js';
 import { formatEstimate } from '../../quantity/formatEstimate.js';
 import type { ScreenRow, ScreenSettings, ScreenSummary } from '../../screen/screenRow.js';
 import { textTable } from '../cli/textTable.js';
@@ -85,13 +88,54 @@ function headerOf(settings: ScreenSettings, rows: readonly ScreenRow[], withCost
 
 const CAUTION = 'Screening estimates: confirm by measurement; they defer to local codes, product-safety regulation and licensed practice. Hazard classes are from the hazards table; the safety data sheet of the material used takes precedence.';
 
-/** A plain-text table of collected rows (in the order given), with a heading and the caution. */
-export function textTableOf(rows: readonly ScreenRow[], settings: ScreenSettings): string {
+/** Widest a screen's text table may be, characters: long cells are moved to notes below it. */
+export const SCREEN_TABLE_COLUMNS = 120;
+
+/** Longest cell kept in the table for the salt, the hazards and the spec; longer text becomes a numbered note. */
+const CELL_LIMIT = { salt: 16, hazards: 22, spec: 6 } as const;
+
+/**
+ * A plain-text table of collected rows (in the order given), no wider than {@link SCREEN_TABLE_COLUMNS}: formulas
+ * with subscripts, and every cell too long for its column (a long hazard list, why a spec fails, an error, a note)
+ * moved below the table as a numbered note wrapped to `width`; then the caution.
+ */
+export function textTableOf(rows: readonly ScreenRow[], settings: ScreenSettings, width = 100): string {
   const withCost = rows.some((r) => r.input.pricePerKg !== undefined);
   const header = headerOf(settings, rows, withCost);
+  header[header.length - 1] = 'see';
   const right = new Set([0, 1]);
-  const body = rows.map((r) => cellsOf(r, settings, withCost));
-  return `${textTable(header, body, right)}\n${CAUTION}\n`;
+  const notes: string[] = [];
+  const hazardsAt = header.indexOf('hazards');
+  const specAt = settings.spec !== null ? header.indexOf('spec') : -1;
+  const body = rows.map((r) => {
+    const cells = cellsOf(r, settings, withCost).map((c) => withTrueMinus(c));
+    const moved: string[] = [];
+    const salt = cells[2]!;
+    cells[2] = formulaText(salt);
+    if ([...salt].length > CELL_LIMIT.salt) {
+      moved.push(`salt ${salt}`);
+      cells[2] = `${[...salt].slice(0, CELL_LIMIT.salt - 1).join('')}…`;
+    }
+    if ([...cells[hazardsAt]!].length > CELL_LIMIT.hazards) {
+      moved.push(`hazards: ${cells[hazardsAt]}`);
+      cells[hazardsAt] = `${cells[hazardsAt]!.split(', ')[0]}, …`;
+    }
+    if (specAt >= 0 && [...cells[specAt]!].length > CELL_LIMIT.spec) {
+      moved.push(`spec ${cells[specAt]}`);
+      cells[specAt] = cells[specAt]!.startsWith('fails') ? 'fails' : cells[specAt]!.slice(0, CELL_LIMIT.spec);
+    }
+    const last = cells.length - 1;
+    if (cells[last] !== '') moved.push(cells[last]!);
+    cells[last] = '';
+    if (moved.length > 0) {
+      notes.push(`[${notes.length + 1}] line ${r.line}: ${moved.join('; ')}`);
+      cells[last] = `[${notes.length}]`;
+    }
+    return cells;
+  });
+  const table = textTable(header, body, right);
+  const below = notes.length > 0 ? `\n${notes.flatMap((n) => wrapText(formulasInText(n), width, '', '    ')).join('\n')}\n` : '';
+  return `${table}${below}\n${wrapText(CAUTION, width).join('\n')}\n`;
 }
 
 /** A Markdown table of collected rows, with the caution below it. */
