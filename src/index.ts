@@ -9,7 +9,7 @@
  * The public face, in the order of the flow of one question: errors and
  * the shared result shape; data; the salt model; lattice enthalpies and the
  * Born–Haber cycle; hydration; the enthalpy of solution; pack design;
- * screening; charts.
+ * latent-heat warmers; screening; charts.
  *
  * @packageDocumentation
  */
@@ -85,6 +85,9 @@ export { saltHazards } from './pack/saltHazards.js';
 export { solubilityCurve, solubilityAt, type SolubilityCurve, type SolubilityPoint, type SolubilityAt } from './pack/solubilityCurve.js';
 export { freezingPointOfSolution, WATER_CRYOSCOPIC_CONSTANT } from './pack/freezingPoint.js';
 
+// Latent-heat warmers (supercooled salt-hydrate melts)
+export { latentWarmer, type WarmerFill, type WarmerOptions, type WarmerResult, type WarmerPoint } from './warmer/latentWarmer.js';
+
 // Screening
 export { screen, type ScreenResult } from './screen/screen.js';
 export { screenStream } from './screen/screenStream.js';
@@ -103,4 +106,5 @@ export { screenRowSchema, screenSummarySchema, screenDocumentSchema, screenSetti
 export { cycleDiagram, type CycleDiagramOptions } from './render/cycleDiagram.js';
 export { packCurveSvg, type PackCurveChartOptions } from './render/packCurve.js';
 export { timeCourseSvg, type TimeCourseChartOptions } from './render/timeCourse.js';
+export { warmerCourseSvg, type WarmerChartOptions } from './render/warmerCourse.js';
 export { intervalChart, type IntervalChartOptions, type ChartMark, type ChartableScreen } from './render/intervalChart.js';

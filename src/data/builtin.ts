@@ -31,6 +31,7 @@ import madelungConstants from '../../data/madelung-constants.json';
 import bornExponents from '../../data/born-exponents.json';
 import volumeCoefficients from '../../data/volume-coefficients.json';
 import hazards from '../../data/hazards.json';
+import warmerMelts from '../../data/warmer-melts.json';
 
 let builtin: Dataset | undefined;
 
@@ -71,6 +72,7 @@ export function builtinDataset(): Dataset {
       'born-exponents.json': bornExponents,
       'volume-coefficients.json': volumeCoefficients,
       'hazards.json': hazards,
+      'warmer-melts.json': warmerMelts,
     } as unknown as Tables,
     sources.sources as Record<string, SourceEntry>,
   );

@@ -26,6 +26,8 @@ const provenance = {
   source: z.string().min(1).max(80),
   /** True where the number was typed from memory and not checked against a copy of the source. */
   fromMemory: z.boolean(),
+  /** The open copy the value was matched with, e.g. `tests/reference/chemicals-crc-thermo.json` (see docs/provenance.md); absent where none was. */
+  checkedAgainst: z.string().min(1).max(300).optional(),
   note: z.string().max(2000).optional(),
 };
 
@@ -297,6 +299,41 @@ export const hazardRecordSchema = z.strictObject({
   ...provenance,
 });
 
+/** One measured property of a salt-hydrate melt, with its own source and a standard uncertainty above zero. */
+const meltQuantity = <U extends string>(unit: U) =>
+  z.strictObject({
+    value: finite,
+    unit: z.literal(unit),
+    /** Standard uncertainty, never zero: the warmer's intervals are built from it. */
+    uncertainty: positive,
+    ...provenance,
+  });
+
+/** How a salt hydrate melts: to a liquid of its own composition, or leaving another solid behind. */
+export const meltingBehaviourSchema = z.enum(['congruent', 'semi-congruent', 'incongruent']);
+
+/** A salt hydrate that can be kept as a supercooled melt and crystallised on demand (a latent-heat warmer). */
+export const warmerMeltRecordSchema = z.strictObject({
+  /** The hydrate, as a person writes it (`NaCH3COO·3H2O`). */
+  formula: formulaTextSchema,
+  melting: meltingBehaviourSchema,
+  /** The solid that separates on incongruent (or semi-congruent) melting. */
+  solidOnMelting: formulaTextSchema.optional(),
+  /** The composition of the melt, in words. */
+  meltComposition: z.string().min(1),
+  /** What incongruent melting does over repeated cycles, in words. */
+  consequence: z.string().min(1).optional(),
+  /** Melting (or peritectic) temperature, °C. */
+  meltingPoint: meltQuantity('°C'),
+  /** Latent heat of fusion per gram of hydrate, J/g. */
+  latentHeat: meltQuantity('J/g'),
+  /** Specific heat capacity of the solid hydrate, J/(g·K). */
+  solidHeatCapacity: meltQuantity('J/(g·K)'),
+  /** Specific heat capacity of the (supercooled) melt, J/(g·K). */
+  meltHeatCapacity: meltQuantity('J/(g·K)'),
+  ...provenance,
+});
+
 /** Every table the dataset knows, by file name under `data/`. */
 export const tableSchemas = {
   'elements.json': table(elementRecordSchema),
@@ -325,6 +362,7 @@ export const tableSchemas = {
   'born-exponents.json': table(bornExponentRecordSchema),
   'volume-coefficients.json': table(volumeCoefficientRecordSchema),
   'hazards.json': table(hazardRecordSchema),
+  'warmer-melts.json': table(warmerMeltRecordSchema),
 } as const;
 
 export type TableName = keyof typeof tableSchemas;
@@ -354,3 +392,4 @@ export type HazardClass = z.infer<typeof hazardClassSchema>;
 export type StructureType = z.infer<typeof structureTypeSchema>;
 export type NobleGasCore = z.infer<typeof nobleGasCoreSchema>;
 export type IonKind = z.infer<typeof ionKindSchema>;
+export type WarmerMeltRecord = z.infer<typeof warmerMeltRecordSchema>;

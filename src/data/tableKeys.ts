@@ -27,4 +27,5 @@ export const tableKeys: { [N in TableName]: (record: TableRecord<N>) => string }
   'born-exponents.json': (r) => r.core,
   'volume-coefficients.json': (r) => r.chargeType,
   'hazards.json': (r) => r.subject,
+  'warmer-melts.json': (r) => r.formula,
 };

@@ -83,7 +83,8 @@ export interface PackTimeCourse {
   notes: string[];
 }
 
-const DEFAULTS = {
+/** The assumed values of the time-course parameters (shared with the warmer model). */
+export const DEFAULTS = {
   durationS: 3600,
   dissolutionTimeConstantS: 60,
   ambientC: 22,
@@ -117,7 +118,7 @@ const MIN_STEPS = 2000;
 const MAX_STEPS = 200_000;
 
 /** Share of a straight segment from a to b that lies inside [lo, hi]. */
-function shareInside(a: number, b: number, lo: number, hi: number): number {
+export function shareInside(a: number, b: number, lo: number, hi: number): number {
   if (a === b) return a >= lo && a <= hi ? 1 : 0;
   const s0 = (lo - a) / (b - a);
   const s1 = (hi - a) / (b - a);
@@ -126,7 +127,8 @@ function shareInside(a: number, b: number, lo: number, hi: number): number {
   return Math.max(0, leave - enter);
 }
 
-function parameter(options: TimeCourseOptions, key: keyof typeof DEFAULTS, check: (v: number) => boolean, rule: string): TimeCourseParameter {
+/** A time-course parameter as given (checked) or its assumed default. */
+export function parameter(options: TimeCourseOptions, key: keyof typeof DEFAULTS, check: (v: number) => boolean, rule: string): TimeCourseParameter {
   const given = options[key];
   if (given === undefined) return { value: DEFAULTS[key], unit: UNITS[key], assumed: true };
   if (typeof given !== 'number' || !Number.isFinite(given) || !check(given)) {

@@ -59,6 +59,9 @@ const OBJECTIVE_TITLE: Record<ObjectiveName, string> = {
   'heat-per-gram': 'Heat absorbed per gram of salt',
   'fill-temperature': 'Temperature the standard fill reaches',
   'cost-per-kj': 'Cost per kJ of heat',
+  'plateau-temperature': 'Plateau temperature of the standard warmer',
+  'warmer-heat-per-gram': 'Heat per gram of the standard warmer',
+  'plateau-duration': 'Plateau duration of the standard warmer',
 };
 
 /** What the screen ran with, in words: the fill and the specification, or that there were none. */

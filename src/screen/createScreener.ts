@@ -24,7 +24,8 @@ import { readCandidate, type CandidateInput, type CandidateLike } from './candid
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
 import { costPerKJ } from './costPerKJ.js';
 import { hazardSummary, type HazardSummary } from './hazardSummary.js';
-import { screenObjective, suitabilityOf } from './screenObjective.js';
+import { screenObjective, suitabilityOf, WARMER_OBJECTIVES } from './screenObjective.js';
+import { latentWarmer } from '../warmer/latentWarmer.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
 import { screenSources } from './screenSources.js';
 import { RepeatIndex } from './repeatIndex.js';
@@ -94,8 +95,25 @@ const DATASET_CACHE_LIMIT = 32;
 /** Distinct candidates remembered for spotting repeated rows. */
 const DUPLICATE_LIMIT = 1_000_000;
 
+/** The standard warmer of a screen ranked by a warmer objective: 100 g of hydrate triggered at 20 °C, against the assumed heat loss. */
+const STANDARD_WARMER = { massG: 100, startC: 20 } as const;
+
+/** What a row keeps of the standard warmer, or why there is none. */
+type WarmerOutcome = { ok: true; row: NonNullable<ScreenRow['warmer']> } | { ok: false; why: string };
+
+function standardWarmer(salt: Salt, dataset: Dataset): WarmerOutcome {
+  try {
+    const w = latentWarmer({ salt, ...STANDARD_WARMER }, {}, dataset);
+    const { plateau, crystallisedAtPlateau, heatReleased, heatPerGram, plateauDuration, rechargeTemperature, cautions, notes } = w;
+    return { ok: true, row: { plateau, crystallisedAtPlateau, heatReleased, heatPerGram, plateauDuration, rechargeTemperature, cautions, notes } };
+  } catch (e) {
+    if (!isIonheatError(e)) throw e;
+    return { ok: false, why: e.message };
+  }
+}
+
 type Computed =
-  | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; hazards: HazardSummary }
+  | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; warmer: WarmerOutcome | undefined; hazards: HazardSummary }
   | { ok: false; salt?: Salt; error: IonheatError };
 
 /** A fill as given, checked: positive masses, a start where water is liquid. */
@@ -190,6 +208,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
   if (!directionParsed.success) throw new IonheatError('INVALID_ARGUMENT', `direction: ${describeValue(options.direction)} is not cool or heat`, { field: 'direction' });
   const objective = objectiveParsed.data;
   const direction = directionParsed.data;
+  const wantsWarmer = WARMER_OBJECTIVES.has(objective);
   if (objective === 'fill-temperature' && fill === null) throw new IonheatError('INVALID_ARGUMENT', 'the objective fill-temperature needs a standard fill (salt grams, water grams and start temperature)', { field: 'objective' });
   const excludeMeasured = options.excludeMeasured === true;
   const filters = checkFilters(options.filters ?? {}, dataset);
@@ -197,7 +216,12 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
   const maxMass = options.filters?.maxMolarMass;
   const sources: Record<string, SourceEntry> = { ...screenSources, ...(options.sources ?? {}) };
   const spec: CompiledSpec | undefined =
-    options.spec === undefined ? undefined : compileSpec(options.spec, { schema: screenSpecSchema(), unavailable: fill === null ? { fill: 'no standard fill was given' } : {} });
+    options.spec === undefined
+      ? undefined
+      : compileSpec(options.spec, {
+          schema: screenSpecSchema(),
+          unavailable: { ...(fill === null ? { fill: 'no standard fill was given' } : {}), ...(wantsWarmer ? {} : { warmer: 'the standard warmer is computed only when ranking by a warmer objective' }) },
+        });
   const settings: ScreenSettings = { objective, direction, fill, spec: spec?.text ?? null, excludeMeasured };
 
   const results = new BoundedMap<string, Computed>(CACHE_LIMIT);
@@ -290,7 +314,8 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       if (input.source !== undefined || own) sourceOf(input);
       const result = merged ? dissolve(salt, { excludeMeasured }, merged) : input.measuredEnthalpy !== undefined ? dissolveOwn(input, salt) : dissolve(salt, { excludeMeasured }, dataset);
       const pack = fill ? packFinalTemperature({ solids: [{ formula: salt.formula, massG: fill.saltMassG }], waterG: fill.waterMassG, startC: fill.startC }, {}, merged ?? dataset) : undefined;
-      computed = deepFreeze({ ok: true, salt, result, pack, hazards: hazardSummary(salt, dataset) });
+      const warmer = wantsWarmer ? standardWarmer(salt, dataset) : undefined;
+      computed = deepFreeze({ ok: true, salt, result, pack, warmer, hazards: hazardSummary(salt, dataset) });
     } catch (e) {
       if (!isIonheatError(e)) throw e;
       computed = { ok: false, ...(salt ? { salt } : {}), error: e };
@@ -354,7 +379,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         const row = failedRow(at, input, computed.error, computed.salt);
         return Object.assign(row, duplicate);
       }
-      const { salt, result, hazards, pack } = computed;
+      const { salt, result, hazards, pack, warmer } = computed;
       const excludedBy = exclusion(salt, () => hazards);
       if (excludedBy !== undefined) {
         return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements });
@@ -366,7 +391,9 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       if (first !== undefined) notes.push(`the same candidate as line ${first}`);
       const cost = input.pricePerKg === undefined ? undefined : costPerKJ(input.pricePerKg, result.perGram.salt, direction);
       if (input.pricePerKg !== undefined && cost === undefined) notes.push(`no cost per kJ: the 95 % interval of the heat per gram reaches zero or the wrong sign for ${direction === 'cool' ? 'cooling' : 'heating'}`);
-      const base = { ...result, ...(cost ? { costPerKJ: cost } : {}), ...(pack ? { fill: pack } : {}) };
+      if (warmer && !warmer.ok) notes.push(`no standard warmer (100 g triggered at 20 °C): ${warmer.why}`);
+      const warmerRow = warmer?.ok ? warmer.row : undefined;
+      const base = { ...result, ...(cost ? { costPerKJ: cost } : {}), ...(pack ? { fill: pack } : {}), ...(warmerRow ? { warmer: warmerRow } : {}) };
       const objectiveValue = screenObjective(objective, base);
       if (objective === 'cost-per-kj' && input.pricePerKg === undefined) notes.push('no price per kg given, so no cost per kJ to rank by');
       const row: ScreenRow = {
@@ -379,6 +406,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         hazards: hazards.classes,
         cautions: hazards.statements,
         ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
+        ...(warmerRow ? { warmer: warmerRow } : {}),
         suitability: suitabilityOf(result.verdict, direction),
         ...(objectiveValue ? { objective: objectiveValue } : {}),
         ...(cost ? { costPerKJ: cost } : {}),

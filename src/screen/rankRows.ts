@@ -1,5 +1,5 @@
 import type { Direction, ObjectiveName, ScreenRow, Suitability } from './screenRow.js';
-import { higherIsBetter } from './screenObjective.js';
+import { higherIsBetter, WARMER_OBJECTIVES } from './screenObjective.js';
 
 const GROUP: Record<Suitability, number> = { suitable: 0, undetermined: 1, unsuitable: 2 };
 
@@ -11,11 +11,14 @@ export function isRankable(row: ScreenRow): row is ScreenRow & { objective: NonN
 /**
  * Orders two rankable rows: salts that suit the direction first, then those
  * whose verdict is undetermined, then those that work the other way; within
- * each group by the objective value, best first; ties by input line.
+ * each group by the objective value, best first; ties by input line. A
+ * warmer objective does not group by the dissolution verdict, which says
+ * nothing about a melt that crystallises.
  */
 export function compareRanked(a: ScreenRow, b: ScreenRow, objective: ObjectiveName, direction: Direction): number {
   const sign = higherIsBetter(objective, direction) ? -1 : 1;
-  return GROUP[a.suitability!] - GROUP[b.suitability!] || sign * (a.objective!.value - b.objective!.value) || a.line - b.line;
+  const group = WARMER_OBJECTIVES.has(objective) ? 0 : GROUP[a.suitability!] - GROUP[b.suitability!];
+  return group || sign * (a.objective!.value - b.objective!.value) || a.line - b.line;
 }
 
 /**

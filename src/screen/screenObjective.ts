@@ -14,14 +14,20 @@ export interface ObjectiveSource {
   perGram: { salt: Estimate };
   fill?: { finalTemperature: { value: number; low: number; high: number } };
   costPerKJ?: Estimate;
+  warmer?: { plateau: Estimate; heatPerGram: Estimate; plateauDuration: Estimate };
 }
+
+/** The objectives read from the standard latent-heat warmer rather than from dissolution. */
+export const WARMER_OBJECTIVES: ReadonlySet<ObjectiveName> = new Set(['plateau-temperature', 'warmer-heat-per-gram', 'plateau-duration']);
 
 /**
  * The objective of one row as an {@link Estimate}: the enthalpy of solution
  * (kJ/mol), the heat per gram of salt (J/g), the temperature the standard
  * fill reaches (°C; its standard uncertainty is the 95 % half-width over
- * 1.96, the interval kept as the pack model gives it) or the cost per kJ.
- * Undefined when the row lacks what the objective needs (no fill, no price).
+ * 1.96, the interval kept as the pack model gives it), the cost per kJ, or
+ * the standard warmer's plateau temperature (°C), heat per gram of fill (J/g)
+ * or plateau duration (s). Undefined when the row lacks what the objective
+ * needs (no fill, no price, no warmer data).
  *
  * @example
  * ```ts
@@ -37,6 +43,12 @@ export function screenObjective(name: ObjectiveName, row: ObjectiveSource): Esti
       return row.perGram.salt;
     case 'cost-per-kj':
       return row.costPerKJ;
+    case 'plateau-temperature':
+      return row.warmer?.plateau;
+    case 'warmer-heat-per-gram':
+      return row.warmer?.heatPerGram;
+    case 'plateau-duration':
+      return row.warmer?.plateauDuration;
     case 'fill-temperature': {
       const t = row.fill?.finalTemperature;
       if (!t) return undefined;
@@ -59,7 +71,8 @@ export function screenObjective(name: ObjectiveName, row: ObjectiveSource): Esti
  * True when a larger objective value is better: a larger (more endothermic)
  * enthalpy or heat per gram for cooling, a more negative one for heating; a
  * lower fill temperature for cooling, a higher one for heating; a lower cost
- * always.
+ * always; a higher plateau, more heat per gram and a longer plateau for a
+ * warmer, whatever the direction.
  *
  * @example
  * ```ts
@@ -69,6 +82,7 @@ export function screenObjective(name: ObjectiveName, row: ObjectiveSource): Esti
  */
 export function higherIsBetter(name: ObjectiveName, direction: Direction): boolean {
   if (name === 'cost-per-kj') return false;
+  if (WARMER_OBJECTIVES.has(name)) return true;
   if (name === 'fill-temperature') return direction === 'heat';
   return direction === 'cool';
 }

@@ -19,10 +19,13 @@ export type Direction = z.infer<typeof directionSchema>;
 
 /**
  * What a screen ranks by: `enthalpy` (ΔsolH, kJ/mol), `heat-per-gram` (J per
- * gram of salt), `fill-temperature` (°C reached by the standard fill) or
- * `cost-per-kj` (price per kJ of heat in the chosen direction).
+ * gram of salt), `fill-temperature` (°C reached by the standard fill),
+ * `cost-per-kj` (price per kJ of heat in the chosen direction), or, for
+ * latent-heat warmers (the standard warmer: 100 g of hydrate triggered at
+ * 20 °C), `plateau-temperature` (°C), `warmer-heat-per-gram` (J per gram of
+ * fill) and `plateau-duration` (s).
  */
-export const objectiveNameSchema = z.enum(['enthalpy', 'heat-per-gram', 'fill-temperature', 'cost-per-kj']);
+export const objectiveNameSchema = z.enum(['enthalpy', 'heat-per-gram', 'fill-temperature', 'cost-per-kj', 'plateau-temperature', 'warmer-heat-per-gram', 'plateau-duration']);
 export type ObjectiveName = z.infer<typeof objectiveNameSchema>;
 
 /** Whether a salt works in the chosen direction: from its verdict; `undetermined` when the 95 % interval of ΔsolH spans zero. */
@@ -60,6 +63,20 @@ export const fillResultSchema = z
   })
   .describe('the pack model result for the standard fill');
 
+/** What the warmer model says about the standard warmer ({@link latentWarmer}: 100 g of hydrate triggered at 20 °C). */
+export const warmerRowSchema = z
+  .looseObject({
+    plateau: estimateSchema.describe('temperature right after triggering, °C, with its 95 % interval'),
+    crystallisedAtPlateau: estimateSchema.describe('fraction of the hydrate crystallised at once, 0–1'),
+    heatReleased: estimateSchema.describe('heat released back to the start temperature, kJ'),
+    heatPerGram: estimateSchema.describe('heat released per gram of fill, J/g'),
+    plateauDuration: estimateSchema.describe('time on the plateau against the assumed heat loss, s'),
+    rechargeTemperature: estimateSchema.nullable().describe('temperature at which the fill is all liquid again, °C; null when heating in water cannot melt it all'),
+    cautions: z.array(z.string()),
+    notes: z.array(z.string()),
+  })
+  .describe('the latent-heat warmer of the standard warmer fill');
+
 /** Whether the specification holds for a row, and if not, why. */
 export const specOutcomeSchema = z.strictObject({
   holds: z.boolean(),
@@ -96,6 +113,7 @@ export const screenRowSchema = z
     hazards: z.array(hazardClassSchema).optional().describe('hazard classes of the salt and its ions from the hazards table'),
     cautions: z.array(z.string()).optional().describe('the hazards table statements for the salt and its ions'),
     fill: fillResultSchema.optional(),
+    warmer: warmerRowSchema.optional(),
     suitability: suitabilitySchema.optional(),
     objective: estimateSchema.optional().describe('the value the screen ranks by'),
     costPerKJ: estimateSchema.optional().describe('price per kJ of heat in the chosen direction, where a price is given'),

@@ -15,6 +15,9 @@ const OBJECTIVE_FIELDS: Record<ObjectiveName, readonly string[]> = {
   'heat-per-gram': ['perGram.salt'],
   'fill-temperature': ['fill.finalTemperature'],
   'cost-per-kj': ['costPerKJ'],
+  'plateau-temperature': ['warmer.plateau'],
+  'warmer-heat-per-gram': ['warmer.heatPerGram'],
+  'plateau-duration': ['warmer.plateauDuration'],
 };
 
 /** One threshold: where, and the comparison as the spec wrote it. */

@@ -17,6 +17,7 @@ import { measuredSolutionEnthalpy } from './measuredSolution.js';
 import { solutionEnthalpyFromCycle } from './cycleSolution.js';
 import { saltLattice } from './saltLattice.js';
 import { tableSalts } from './tableSalts.js';
+import { saltIonClass, type SaltIonClass } from '../lattice/saltIonClass.js';
 
 /** One anchor: a salt M_aX_b with a known enthalpy of solution. */
 export interface AnchorSalt {
@@ -26,6 +27,10 @@ export interface AnchorSalt {
   /** Cations and anions per formula unit. */
   cationCount: number;
   anionCount: number;
+  /** `z+:|z−|`, e.g. `2:1` for CaCl₂. */
+  chargeType: string;
+  /** The class of its ions, by which the anchored floors are calibrated. */
+  ionClass: SaltIonClass;
   /** Enthalpy of solution, kJ/mol, and its standard uncertainty. */
   value: number;
   u: number;
@@ -84,23 +89,27 @@ export interface AnchorIndex {
 
 /**
  * Weights of the ion distance (a method choice of ionheat, not published
- * values): radius difference in units of 0.25 Å, squared; 4 for a different
- * charge; 1 for monatomic against polyatomic; 3 for a cation with a
- * noble-gas core against one without (d-block and post-transition cations
- * bond more covalently, and the ionic models miss them by more); 4 for the
- * radius term where an ion has no radius. Chosen by leave-one-out over the
- * anchor pool among a handful of settings.
+ * values): radius difference in units of 0.25 Å, squared; 6 for monatomic
+ * against polyatomic (a halide carries a covalent lattice excess with Ag⁺ or
+ * Tl⁺ that an oxoanion lacks, so AgBr is a poor stand-in for AgNO₃); 3 for a
+ * cation with a noble-gas core against one without (d-block and
+ * post-transition cations bond more covalently, and the ionic models miss
+ * them by more); 4 for the radius term where an ion has no radius. Charge
+ * comes before all of these: an ion of another charge is farther than any
+ * ion of the same charge (neighbours are ordered by charge first) and its
+ * distance carries a further `charge` term. Chosen by leave-one-out over the
+ * anchor pool among a handful of settings (kind 1, 3, 6, 10).
  */
-export const ION_DISTANCE = { radiusScale: 0.25, charge: 4, kind: 1, core: 3, noRadius: 4 } as const;
+export const ION_DISTANCE = { radiusScale: 0.25, charge: 25, kind: 6, core: 3, noRadius: 4 } as const;
 
 const NOBLE_GAS_Z = new Set([2, 10, 18, 36, 54, 86]);
 
-/** A binary salt's single cation and anion, or undefined. */
-export function binaryIons(salt: Salt): { cation: string; anion: string; cationCount: number; anionCount: number } | undefined {
+/** A binary salt's single cation and anion, and its charge type, or undefined. */
+export function binaryIons(salt: Salt): { cation: string; anion: string; cationCount: number; anionCount: number; chargeType: string } | undefined {
   if (salt.kind !== 'ionic' || salt.ions.length !== 2) return undefined;
   const [c, a] = salt.ions[0]!.charge > 0 ? [salt.ions[0]!, salt.ions[1]!] : [salt.ions[1]!, salt.ions[0]!];
   if (!(c.charge > 0 && a.charge < 0)) return undefined;
-  return { cation: c.ion, anion: a.ion, cationCount: c.count, anionCount: a.count };
+  return { cation: c.ion, anion: a.ion, cationCount: c.count, anionCount: a.count, chargeType: `${c.charge}:${-a.charge}` };
 }
 
 interface IonFeatures {
@@ -124,10 +133,6 @@ function ionFeatures(dataset: Dataset): ReadonlyMap<string, IonFeatures> {
   });
 }
 
-/** `noble-gas` for a cation with a noble-gas electron core (and polyatomic cations), else `other`. */
-export function cationCore(ion: string, dataset: Dataset): 'noble-gas' | 'other' {
-  return ionFeatures(dataset).get(ion)?.nobleCore === false ? 'other' : 'noble-gas';
-}
 
 /** The distance between two ions of one sign (see {@link ION_DISTANCE}). */
 export function ionDistance(a: string, b: string, dataset: Dataset): number {
@@ -177,6 +182,7 @@ export function anchorIndex(dataset: Dataset): AnchorIndex {
       anchors.push({
         formula: salt.formula,
         ...ions,
+        ionClass: saltIonClass(salt, dataset),
         value: known.value,
         u: known.u,
         basis: known.basis === 'measured' ? 'measured' : 'cycle',
@@ -204,7 +210,9 @@ export function anchorIndex(dataset: Dataset): AnchorIndex {
         const distance = ionDistance(ion.id, other, dataset);
         if (Number.isFinite(distance)) list.push({ ion: other, distance });
       }
-      list.sort((a, b) => a.distance - b.distance || byName(a.ion, b.ion));
+      const features = ionFeatures(dataset);
+      const otherCharge = (n: Neighbour): number => (features.get(n.ion)?.charge === ion.charge ? 0 : 1);
+      list.sort((a, b) => otherCharge(a) - otherCharge(b) || a.distance - b.distance || byName(a.ion, b.ion));
       neighbours.set(ion.id, list);
     }
     return { anchors, byIons, neighbours, grid: gridOf(anchors, inPool, neighbours) };

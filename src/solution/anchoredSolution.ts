@@ -14,7 +14,8 @@ import { saltRecords } from '../chem/saltRecords.js';
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { latticeModels, type LatticeModel } from '../lattice/latticeModel.js';
-import { anchorIndex, binaryIons, cationCore, type AnchorSalt, type IndexedAnchor } from './anchorIndex.js';
+import { anchorIndex, binaryIons, type AnchorSalt, type IndexedAnchor } from './anchorIndex.js';
+import { saltIonClass, type SaltIonClass } from '../lattice/saltIonClass.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
@@ -31,6 +32,8 @@ const STRUCTURE_PENALTY = 1;
 const SAME_STRUCTURE_ONLY: ReadonlySet<LatticeModel> = new Set(['born-lande', 'born-mayer']);
 /** Fewest calibration salts of one charge type that get their own floor; others use the pooled floor. */
 const MIN_FLOOR_GROUP = 10;
+/** Fewest pool salts of one charge type that fit their own bracket scale; others use the pooled scale. */
+const MIN_SCALE_GROUP = 5;
 /**
  * Pseudo-sets of the typical spread mixed into a target's own spread: a
  * target with one or two anchor sets (whose spread says little) is given
@@ -75,6 +78,7 @@ interface Target {
   anion: string;
   cationCount: number;
   anionCount: number;
+  chargeType: string;
   structure: string | undefined;
   lattice: ReadonlyMap<LatticeModel, number>;
 }
@@ -105,7 +109,7 @@ function sidesOf(target: Target, models: readonly number[], dataset: Dataset): S
   const withX = x === undefined ? undefined : byAnion[x]!;
   for (const n of (withX && neighbours.get(target.cation)) || []) {
     const nx = withX![n.index];
-    if (!nx || nx.anchor.formula === target.formula) continue;
+    if (!nx || nx.anchor.formula === target.formula || nx.anchor.chargeType !== target.chargeType) continue;
     let useful = false;
     for (const m of models) {
       if (Number.isNaN(nx.lattice[m]!) || found[m]! >= ANCHOR_NEIGHBOURS) continue;
@@ -122,7 +126,7 @@ function sidesOf(target: Target, models: readonly number[], dataset: Dataset): S
     found.fill(0);
     for (const y of neighbours.get(target.anion) ?? []) {
       const my = own[y.index];
-      if (!my || my.anchor.formula === target.formula) continue;
+      if (!my || my.anchor.formula === target.formula || my.anchor.chargeType !== target.chargeType) continue;
       let useful = false;
       for (const m of models) {
         if (Number.isNaN(my.lattice[m]!) || found[m]! >= ANCHOR_NEIGHBOURS) continue;
@@ -136,7 +140,27 @@ function sidesOf(target: Target, models: readonly number[], dataset: Dataset): S
   return { ns, ys };
 }
 
-type Combination = Omit<AnchorCombination, 'sets'> & { count: number; top: AnchorSet };
+/**
+ * Weighted moments of the sets' anchor sums b = α·ΔH(MY) + β·ΔH(NX) + γ·ΔH(NY)
+ * and lattice brackets r, from which the value and spread follow for any
+ * scale k of the bracket ({@link atScale}).
+ */
+interface Moments {
+  b: number;
+  r: number;
+  bb: number;
+  rr: number;
+  br: number;
+}
+
+type Combination = Omit<AnchorCombination, 'sets'> & { count: number; top: AnchorSet; moments: Moments };
+
+/** The combined value and spread of the sets with every bracket scaled by k: v = b + k·r. */
+function atScale(c: Combination, k: number): { value: number; spread: number } {
+  const m = c.moments;
+  const value = m.b + k * m.r;
+  return { value, spread: Math.sqrt(Math.max(0, m.bb + 2 * k * m.br + k * k * m.rr - value * value)) };
+}
 
 /** Slots per anchor set in the scratch of {@link combine}: state (undefined unseen, 1 no NY, 2 seen), γ, u, structure mismatches, weight (NaN until needed). */
 const PART = 5;
@@ -144,10 +168,12 @@ const PART = 5;
 /**
  * Every usable anchor set for a target and each estimator asked for,
  * combined: the nearest {@link ANCHOR_NEIGHBOURS} cations N (with NX known)
- * and anions Y (with MY known), each pair (N, Y) with NY known. For
- * MX = M_pX_q, MY = M_aY_b, NX = N_cX_d, NY = N_eY_f the coefficients
- * α = p/a, β = q/d, γ = −α·b/f make the ions of α·MY + β·NX + γ·NY those of
- * MX, so the hydration enthalpies cancel exactly for any charge types.
+ * and anions Y (with MY known), each pair (N, Y) with NY known. N has the
+ * charge of M and Y that of X, so all four salts share one charge type (see
+ * {@link anchoredSolutionEnthalpies} for why). For MX = M_pX_q, MY = M_aY_b,
+ * NX = N_cX_d, NY = N_eY_f the coefficients α = p/a, β = q/d, γ = −α·b/f make
+ * the ions of α·MY + β·NX + γ·NY those of MX, so the hydration enthalpies
+ * cancel exactly (with one charge type, α = β = −γ = 1).
  * What does not depend on the estimator (coefficients, the anchors' data
  * uncertainty, the weight) is worked out once per set and shared by the
  * estimators. `keep` collects the sets themselves (for inspection, one
@@ -168,8 +194,11 @@ function combine(target: Target, models: readonly number[], dataset: Dataset, ke
     const sameStructure = SAME_STRUCTURE_ONLY.has(latticeModels[m]!);
     let count = 0;
     let w = 0;
-    let wv = 0;
-    let wv2 = 0;
+    let wb = 0;
+    let wr = 0;
+    let wbb = 0;
+    let wrr = 0;
+    let wbr = 0;
     let wu = 0;
     let ww = 0;
     let top: AnchorSet | undefined;
@@ -218,13 +247,17 @@ function combine(target: Target, models: readonly number[], dataset: Dataset, ke
         const gamma = parts[at + 1]!;
         const u = parts[at + 2]!;
         const bracket = lt - alpha * lmy - beta * lnx - gamma * lny;
-        const value = alpha * my.anchor.value + beta * nx.anchor.value + gamma * ny.anchor.value + bracket;
+        const sum = alpha * my.anchor.value + beta * nx.anchor.value + gamma * ny.anchor.value;
+        const value = sum + bracket;
         let weight = parts[at + 4]!;
         if (Number.isNaN(weight)) parts[at + 4] = weight = Math.exp(-(n.distance + y.distance + STRUCTURE_PENALTY * mismatches));
         count++;
         w += weight;
-        wv += weight * value;
-        wv2 += weight * value * value;
+        wb += weight * sum;
+        wr += weight * bracket;
+        wbb += weight * sum * sum;
+        wrr += weight * bracket * bracket;
+        wbr += weight * sum * bracket;
         wu += weight * u;
         ww += weight * weight;
         if (!top || weight > top.weight) top = { my: my.anchor, nx: nx.anchor, ny: ny.anchor, alpha, beta, gamma, value, u, weight };
@@ -232,8 +265,10 @@ function combine(target: Target, models: readonly number[], dataset: Dataset, ke
       }
     }
     if (count === 0 || !top) continue;
-    const value = wv / w;
-    out[k] = { count, top, value, dataU: wu / w, spread: Math.sqrt(Math.max(0, wv2 / w - value * value)), effectiveSets: (w * w) / ww, lattice: lt };
+    const moments: Moments = { b: wb / w, r: wr / w, bb: wbb / w, rr: wrr / w, br: wbr / w };
+    const c: Combination = { count, top, moments, value: 0, spread: 0, dataU: wu / w, effectiveSets: (w * w) / ww, lattice: lt };
+    Object.assign(c, atScale(c, 1));
+    out[k] = c;
   }
   return out;
 }
@@ -263,10 +298,44 @@ interface FloorGroup {
   position: Map<string, number>;
 }
 
-/** One estimator's calibration: typical relative spreads and needed floors, by charge type and pooled (`*`). */
+/** Least-squares sums of the bracket scale over the pool salts of one group, and each salt's own terms (to leave it out). */
+interface ScaleSums {
+  xy: number;
+  xx: number;
+  own: Map<string, { xy: number; xx: number }>;
+}
+
+/** One estimator's calibration: bracket scales, typical relative spreads and needed floors, by charge type and pooled (`*`). */
 interface FloorCalibration {
+  scale: Map<string, ScaleSums>;
   typicalSpread: Map<string, number>;
   groups: Map<string, FloorGroup>;
+}
+
+/**
+ * The scale k of an estimator's lattice brackets for a charge type: the
+ * least-squares fit of ΔH(pool salt) − b = k·r over the pool salts of that
+ * type (b the weighted anchor sum, r the weighted bracket, each salt
+ * estimated from the others), leaving out `excludeFormula`, kept within
+ * [0, 2]. Where a model overstates the differences between salts (the
+ * volume-based equation, and Kapustinskii on 2:2 salts) k < 1 shrinks them
+ * toward ion additivity (k = 0 drops the bracket); where it understates them
+ * (Kapustinskii at coordination 6 on 1:1 salts) k > 1. Pooled over every
+ * charge type where the type has fewer than {@link MIN_SCALE_GROUP} salts.
+ * Fitting k per ion class as well was tried and did worse under leave-one-out.
+ */
+function bracketScale(calibration: FloorCalibration | undefined, type: string, excludeFormula: string | undefined): { k: number; salts: number; group: string } {
+  for (const key of [type, '*']) {
+    const g = calibration?.scale.get(key);
+    if (!g) continue;
+    const own = excludeFormula !== undefined ? g.own.get(excludeFormula) : undefined;
+    const n = g.own.size - (own ? 1 : 0);
+    if (n < MIN_SCALE_GROUP && key !== '*') continue;
+    const xx = g.xx - (own?.xx ?? 0);
+    const xy = g.xy - (own?.xy ?? 0);
+    return { k: xx > 0 ? Math.min(2, Math.max(0, xy / xx)) : 1, salts: n, group: key === '*' ? 'all charge types' : type };
+  }
+  return { k: 1, salts: 0, group: 'none' };
 }
 
 function median(values: number[]): number {
@@ -290,29 +359,40 @@ function typicalSpreadOf(calibration: FloorCalibration | undefined, type: string
 function floorGroups(dataset: Dataset): ReadonlyMap<LatticeModel, FloorCalibration> {
   return dataset.memo('solution.anchorFloors', () => {
     const out = new Map<LatticeModel, FloorCalibration>();
-    const charges = new Map(dataset.records('ions.json').map((i) => [i.id, i.charge]));
     for (const [mi, model] of latticeModels.entries()) {
-      const rows: { a: AnchorSalt; type: string; core: string; c: Combination }[] = [];
+      const rows: { a: AnchorSalt; type: string; c: Combination }[] = [];
       for (const a of anchorIndex(dataset).anchors) {
         if (!a.lattice.has(model)) continue;
-        const [c] = combine({ formula: a.formula, cation: a.cation, anion: a.anion, cationCount: a.cationCount, anionCount: a.anionCount, structure: a.structure, lattice: a.lattice }, [mi], dataset);
-        if (c) rows.push({ a, type: `${charges.get(a.cation)}:${-(charges.get(a.anion) ?? 0)}`, core: cationCore(a.cation, dataset), c });
+        const [c] = combine({ formula: a.formula, cation: a.cation, anion: a.anion, cationCount: a.cationCount, anionCount: a.anionCount, chargeType: a.chargeType, structure: a.structure, lattice: a.lattice }, [mi], dataset);
+        if (c) rows.push({ a, type: a.chargeType, c });
       }
+      const calibration: FloorCalibration = { scale: new Map(), typicalSpread: new Map(), groups: new Map() };
+      for (const { a, type, c } of rows) {
+        const xy = c.moments.r * (a.value - c.moments.b);
+        const xx = c.moments.r ** 2;
+        for (const key of ['*', type]) {
+          let g = calibration.scale.get(key);
+          if (!g) calibration.scale.set(key, (g = { xy: 0, xx: 0, own: new Map() }));
+          g.xy += xy;
+          g.xx += xx;
+          g.own.set(a.formula, { xy, xx });
+        }
+      }
+      // Each pool salt as its own estimate would be, with its own value out of the bracket scale.
+      const scaled = rows.map(({ a, type, c }) => ({ a, type, c: { ...c, ...atScale(c, bracketScale(calibration, type, a.formula).k) } }));
       // The typical relative spread, from salts with at least three effective sets.
       const spreads = new Map<string, number[]>();
-      for (const { type, c } of rows) {
+      for (const { type, c } of scaled) {
         if (c.effectiveSets < 3) continue;
         for (const key of ['*', type]) (spreads.get(key) ?? spreads.set(key, []).get(key)!).push(c.spread / Math.abs(c.lattice));
       }
-      const typicalSpread = new Map<string, number>();
-      for (const [key, list] of spreads) if (key === '*' || list.length >= MIN_FLOOR_GROUP) typicalSpread.set(key, median(list));
-      const calibration: FloorCalibration = { typicalSpread, groups: new Map() };
+      for (const [key, list] of spreads) if (key === '*' || list.length >= MIN_FLOOR_GROUP) calibration.typicalSpread.set(key, median(list));
       const points: FloorPoint[] = [];
-      for (const { a, type, core, c } of rows) {
+      for (const { a, type, c } of scaled) {
         // The anchors' stated uncertainties are not subtracted, so that a wider input never narrows a result.
         const miss = c.value - a.value;
         const needed2 = (miss / COVERAGE_95) ** 2 - usedSpread(c, typicalSpreadOf(calibration, type)) ** 2;
-        points.push({ formula: a.formula, keys: [`${type}|${core}`, type, '*'], needed: Math.sqrt(Math.max(0, needed2)) / Math.abs(c.lattice) });
+        points.push({ formula: a.formula, keys: [`${type}|${a.ionClass}`, type, '*'], needed: Math.sqrt(Math.max(0, needed2)) / Math.abs(c.lattice) });
       }
       points.sort((x, y) => x.needed - y.needed || (x.formula < y.formula ? -1 : 1));
       for (const p of points) {
@@ -340,10 +420,10 @@ function quantile95(sorted: readonly number[], skip: number): number {
   return at(lo) + (h - lo) * (at(hi) - at(lo));
 }
 
-/** The calibration group of a target: its charge type and the electron core of its cation. */
+/** The calibration group of a target: its charge type and the class of its ions. */
 export interface FloorGroupKey {
   chargeType: string;
-  cationCore: 'noble-gas' | 'other';
+  ionClass: SaltIonClass;
 }
 
 /**
@@ -362,13 +442,13 @@ export interface FloorGroupKey {
 export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options: { excludeFormula?: string } = {}, dataset: Dataset = builtinDataset()): { relative: number; salts: number; group: string } {
   const groups = floorGroups(dataset).get(model)?.groups;
   let atLeast = 0;
-  for (const key of [`${group.chargeType}|${group.cationCore}`, group.chargeType, '*']) {
+  for (const key of [`${group.chargeType}|${group.ionClass}`, group.chargeType, '*']) {
     const g = groups?.get(key);
     if (!g) continue;
     const skip = options.excludeFormula !== undefined ? (g.position.get(options.excludeFormula) ?? -1) : -1;
     const n = g.needed.length - (skip >= 0 ? 1 : 0);
     if (n >= MIN_FLOOR_GROUP || key === '*') {
-      const label = key === '*' ? 'all charge types' : key.replace('|', ', cation core ');
+      const label = key === '*' ? 'all charge types' : key.replace('|', ', ');
       return { relative: Math.max(quantile95(g.needed, skip), atLeast), salts: n, group: atLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
     }
     if (n > 0) atLeast = Math.max(atLeast, g.needed[skip === g.needed.length - 1 ? g.needed.length - 2 : g.needed.length - 1]!);
@@ -385,7 +465,18 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
  * over every usable anchor set (MY, NX, NY with measured or cycle values,
  * nearest ions first), combined with weights exp(−D), D the ion distance
  * of N from M and Y from X plus a penalty for each anchor of another
- * structure type. The standard uncertainty is √(u_data² + spread² + f²):
+ * structure type.
+ *
+ * All four salts of a set share the target's charge type. Only then does
+ * the bracket cancel the model's error: the volume-based equation fits its
+ * coefficients to each charge type, the Born–Landé and Born–Mayer Madelung
+ * constants belong to one structure, and although Kapustinskii's equation
+ * is one form for every charge type, its radius errors enter as
+ * ν·|z₊z₋|/(r₊ + r₋), so sets that mix charge types leave them uncancelled
+ * (K₂CO₃ from KClO₃ + Na₂CO₃ − NaClO₃ missed by about 180 kJ/mol, Al₂(SO₄)₃
+ * from 1:1 and 2:2 salts by about 1000). No estimator is therefore allowed
+ * to mix charge types; a salt with no anchor set of its own charge type
+ * gets no anchored estimate. The standard uncertainty is √(u_data² + spread² + f²):
  * the anchors' own uncertainties, the weighted spread of the sets, and a
  * floor f calibrated so that 95 % of the pool salts, each estimated from
  * the others, fall inside their intervals. The salt itself is never an
@@ -416,7 +507,7 @@ export function anchoredEstimates(salt: Salt, lattice: () => SaltLattice, option
   const target = targetOf(salt, lattice, dataset);
   if (!target) return [];
   const type = chargeType(salt) ?? 'other';
-  const group: FloorGroupKey = { chargeType: type, cationCore: cationCore(target.cation, dataset) };
+  const group: FloorGroupKey = { chargeType: type, ionClass: saltIonClass(salt, dataset) };
   const out: Estimate[] = [];
   const combinations = combine(target, ALL_MODELS, dataset);
   for (const [mi, model] of latticeModels.entries()) {
@@ -424,13 +515,16 @@ export function anchoredEstimates(salt: Salt, lattice: () => SaltLattice, option
     if (!c) continue;
     const floor = anchoredFloor(model, group, options.excludeMeasured ? { excludeFormula: salt.formula } : {}, dataset);
     const f = floor.relative * Math.abs(c.lattice);
-    const spread = usedSpread(c, typicalSpreadOf(floorGroups(dataset).get(model), type));
+    const calibration = floorGroups(dataset).get(model);
+    const scale = bracketScale(calibration, type, options.excludeMeasured ? salt.formula : undefined);
+    const at = atScale(c, scale.k);
+    const spread = usedSpread({ ...c, spread: at.spread }, typicalSpreadOf(calibration, type));
     const u = Math.sqrt(c.dataU ** 2 + spread ** 2 + f ** 2);
     const top = c.top;
     out.push(
       makeEstimate({
         quantity: 'enthalpy of solution',
-        value: c.value,
+        value: at.value,
         u,
         unit: 'kJ/mol',
         basis: 'anchored',
@@ -438,7 +532,8 @@ export function anchoredEstimates(salt: Salt, lattice: () => SaltLattice, option
         sources: [...top.my.sources, ...top.nx.sources, ...top.ny.sources, ...(lattice().byMethod.get(model)?.sources ?? [])],
         notes: [
           `${c.count} anchor set${c.count === 1 ? '' : 's'} with ${model} lattice differences; the closest: ${top.my.formula} + ${top.nx.formula} − ${top.ny.formula}${top.alpha !== 1 || top.beta !== 1 || top.gamma !== -1 ? ` (coefficients ${+fixedDecimal(top.alpha, 3)}, ${+fixedDecimal(top.beta, 3)}, ${+fixedDecimal(top.gamma, 3)})` : ''}`,
-          `u = √(anchors ${fixedDecimal(c.dataU, 1)}² + spread ${fixedDecimal(spread, 1)}² + floor ${fixedDecimal(f, 1)}²) kJ/mol: the sets' own spread ${fixedDecimal(c.spread, 1)} (${fixedDecimal(c.effectiveSets, 1)} effective sets) mixed with the typical spread of ${type} salts; floor ${fixedDecimal(100 * floor.relative, 2)} % of the lattice enthalpy, calibrated on ${floor.salts} salts (${floor.group})`,
+          `lattice brackets scaled by ${fixedDecimal(scale.k, 2)} (fitted on ${scale.salts} pool salts, ${scale.group}; 1 trusts the model's differences in full, 0 drops them for ion additivity)`,
+          `u = √(anchors ${fixedDecimal(c.dataU, 1)}² + spread ${fixedDecimal(spread, 1)}² + floor ${fixedDecimal(f, 1)}²) kJ/mol: the sets' own spread ${fixedDecimal(at.spread, 1)} (${fixedDecimal(c.effectiveSets, 1)} effective sets) mixed with the typical spread of ${type} salts; floor ${fixedDecimal(100 * floor.relative, 2)} % of the lattice enthalpy, calibrated on ${floor.salts} salts (${floor.group})`,
         ],
       }),
     );

@@ -17,13 +17,16 @@ import { saltHydrationEnthalpy } from '../hydration/saltHydration.js';
 import { ionsUnstableInWater } from './waterStability.js';
 import { measuredSolutionEnthalpy } from './measuredSolution.js';
 import { solutionEnthalpyFromCycle } from './cycleSolution.js';
-import { hydrateFromParent, hydrateRuleScatter, saltFormIndex } from './hydrateRule.js';
+import { hydrateFromParent, hydrateRuleFamily, hydrateRuleScatter, saltFormIndex } from './hydrateRule.js';
 import { heatPerGramOfFill, heatPerGramOfSalt, saturatedFill, type SaturatedFill } from './heatPerGram.js';
 import { checkKirchhoffTemperature, kirchhoffCorrection, solutionHeatCapacity, TABLE_TEMPERATURE_C, typicalSolutionHeatCapacity } from './solutionHeatCapacity.js';
 import { solutionVerdict, type Verdict } from './verdict.js';
 import { anchoredEstimates } from './anchoredSolution.js';
+import { widenForDisagreement } from './anchoredDisagreement.js';
+import { hypotheticalHydrate, type HypotheticalHydrate } from './knownHydrates.js';
 import { hydrationText, modelEstimate } from './modelSolution.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
+import { fixedDecimal } from '../quantity/fixedDecimal.js';
 
 export interface DissolveOptions {
   /**
@@ -62,6 +65,13 @@ export interface DissolveResult {
     /** ΔsolCp°, J/(mol·K), where the heat capacities are tabulated. */
     heatCapacityOfSolution?: Estimate;
   };
+  /**
+   * Set when the salt is a hydrate no table knows (`KCl·50H2O`): its
+   * estimates come from the difference rule applied to a solid nobody has
+   * made, so they are given on the `model` basis, with a note, and describe
+   * no real crystal.
+   */
+  hypotheticalHydrate?: HypotheticalHydrate;
   notes: string[];
 }
 
@@ -111,8 +121,14 @@ function ruleEstimate(salt: Salt, hide: boolean, dataset: Dataset): Estimate | u
     if (estimate) chosen = { formula: form.formula, water: form.water, estimate };
   }
   if (!chosen) return undefined;
-  const scatter = hydrateRuleScatter(hide ? { excludeFormula: salt.formula } : {}, dataset);
-  return hydrateFromParent(chosen.estimate, { parentFormula: chosen.formula, parentWater: chosen.water, water: salt.water, waterFormation: hw, scatter: scatter.perSqrtWater });
+  const rule = familyRule(salt, hide, dataset);
+  return hydrateFromParent(chosen.estimate, { parentFormula: chosen.formula, parentWater: chosen.water, water: salt.water, waterFormation: hw, ...rule });
+}
+
+/** θ and the scatter of the difference rule for the salt's family, its own pairs left out when its values are hidden. */
+function familyRule(salt: Salt, hide: boolean, dataset: Dataset): { scatter: number; theta: number; thetaU: number; family: string } {
+  const c = hydrateRuleScatter({ family: hydrateRuleFamily(salt), ...(hide ? { excludeFormula: salt.formula } : {}) }, dataset);
+  return { scatter: c.perSqrtWater, theta: c.theta, thetaU: c.thetaU, family: c.family === 'all' ? `all families (too few ${hydrateRuleFamily(salt)} pairs; θ uncertain by ${fixedDecimal(c.thetaU, 1)} kJ/mol per water)` : `${c.family} salts` };
 }
 
 /**
@@ -209,8 +225,7 @@ function computeModelled(profile: SaltProfile, hide: boolean, dataset: Dataset, 
   const hw = waterFormation(dataset);
   if (hw === undefined) return [];
   const anhydrous = profileOf(anhydrousSalt(salt, dataset, store), dataset, store);
-  const scatter = hydrateRuleScatter(hide ? { excludeFormula: salt.formula } : {}, dataset).perSqrtWater;
-  const rule = { parentFormula: anhydrous.salt.formula, parentWater: 0, water: salt.water, waterFormation: hw, scatter };
+  const rule = { parentFormula: anhydrous.salt.formula, parentWater: 0, water: salt.water, waterFormation: hw, ...familyRule(salt, hide, dataset) };
   return modelledEstimates(anhydrous, false, dataset, store).map((e) => hydrateFromParent(e, rule));
 }
 
@@ -248,17 +263,32 @@ function perGramOf(best: Estimate, salt: Salt, profile: SaltProfile): DissolveRe
   return { salt: heatPerGramOfSalt(best, salt), ...(profile.fill ? { saturatedFill: heatPerGramOfFill(best, profile.fill) } : {}) };
 }
 
+/** The text that flags a hypothetical hydrate, in the result's notes and in each of its estimates. */
+function hypotheticalText(salt: Salt, h: HypotheticalHydrate): string {
+  const forms = h.knownWaters.map((w) => (w === 0 ? salt.anhydrous : `${salt.anhydrous}·${w === 1 ? "" : w}H2O`));
+  return `${salt.formula} is a hypothetical hydrate (${h.reason}; the tables know ${forms.length > 0 ? forms.join(', ') : `no form of ${salt.anhydrous}`}): the difference rule gives what a crystal of that formula would have if it existed, not a property of a real solid`;
+}
+
+/** An estimate of a hypothetical hydrate: it rests on no real related solid, so it is never `anchored`. */
+function asHypothetical(e: Estimate, salt: Salt, h: HypotheticalHydrate): Estimate {
+  return { ...e, basis: e.basis === 'anchored' ? 'model' : e.basis, sources: [...e.sources], notes: [hypotheticalText(salt, h), ...e.notes] };
+}
+
 /** Every estimate at 25 °C, most trusted first, and the heats per gram of the first; kept in the profile. */
 function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Dataset, store: ProfileStore): { estimates: readonly Estimate[]; perGram: DissolveResult['perGram'] | undefined } {
   const key = hide ? 'hidden' : 'open';
   let found = profile.ranked[key];
   if (!found) {
-    const estimates: Estimate[] = [];
-    if (profile.measured && !hide) estimates.push(profile.measured);
-    if (profile.cycle && !hide) estimates.push(profile.cycle);
+    const made: Estimate[] = [];
+    if (profile.measured && !hide) made.push(profile.measured);
+    if (profile.cycle && !hide) made.push(profile.cycle);
     const rule = ruleOf(salt, profile, hide, dataset);
-    if (rule) estimates.push(rule);
-    for (const e of modelledEstimates(profile, hide, dataset, store)) estimates.push(e);
+    if (rule) made.push(rule);
+    for (const e of modelledEstimates(profile, hide, dataset, store)) made.push(e);
+    const hypothetical = hypotheticalHydrate(salt, dataset);
+    const estimates = widenForDisagreement(made)
+      .map((e) => (hypothetical ? asHypothetical(e, salt, hypothetical) : e))
+      .map((e) => (profile.kept ? frozen(e) : e));
     estimates.sort(rank);
     let perGram: DissolveResult['perGram'] | undefined;
     if (estimates[0]) {
@@ -343,6 +373,8 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
   checkKirchhoffTemperature(celsius);
   if (Object.is(celsius, -0)) return dissolveWith(salt, { ...options, temperatureC: 0 }, dataset, store);
   const notes: string[] = [];
+  const hypothetical = hypotheticalHydrate(salt, dataset);
+  if (hypothetical) notes.push(hypotheticalText(salt, hypothetical));
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
 
   const profile = profileOf(salt, dataset, store);
@@ -375,6 +407,7 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
     perGram,
     ...(hydration ? { hydration } : {}),
     temperature: { celsius, ...(heatCapacity ? { heatCapacityOfSolution: heatCapacity } : {}) },
+    ...(hypothetical ? { hypotheticalHydrate: hypothetical } : {}),
     notes,
   };
 }

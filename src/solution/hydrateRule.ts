@@ -10,7 +10,7 @@ import { describeValue, estimateArgument, numberArgument, optionsArgument } from
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { saltRecordIndex, saltRecords, WATER } from '../chem/saltRecords.js';
-import type { Salt } from '../chem/salt.js';
+import { chargeType, type Salt } from '../chem/salt.js';
 import { IonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { widenEstimate } from './widenEstimate.js';
@@ -34,6 +34,28 @@ interface RulePair {
   waters: number;
   /** ΔfH°(hydrate) − ΔfH°(parent) − waters·θ, kJ/mol: how far the rule misses for this pair. */
   miss: number;
+  /** The pair's own θ, (ΔfH°(hydrate) − ΔfH°(parent))/waters, kJ/mol. */
+  theta: number;
+  /** The salt family the pair calibrates ({@link hydrateRuleFamily}). */
+  family: string;
+}
+
+/** Fewest pairs of one family that calibrate its own θ and scatter; a smaller family uses every pair. */
+export const MIN_FAMILY_PAIRS = 4;
+/** Pseudo-pairs of the pooled scatter mixed into a family's own, so that a family of a few close pairs does not claim a tiny scatter. */
+export const FAMILY_PRIOR_PAIRS = 4;
+
+/**
+ * The salt family of the difference rule: the charge type of the salt
+ * (`1:1`, `2:1`, `1:2`, `2:2`, `3:1` …, `other` for double salts). The water
+ * of crystallization binds mostly to the cation, and how strongly depends on
+ * its charge and on the anion it shares the crystal with, so θ and the
+ * rule's scatter are calibrated per charge type.
+ *
+ * @param salt - a parsed salt (water ignored)
+ */
+export function hydrateRuleFamily(salt: Salt): string {
+  return chargeType(salt) ?? 'other';
 }
 
 export interface HydrateRuleScatter {
@@ -45,6 +67,17 @@ export interface HydrateRuleScatter {
   perSqrtWater: number;
   /** Pairs the scatter was measured on. */
   pairs: number;
+  /** θ the scatter is measured about, kJ/mol per water: the family's fitted θ, or {@link WATER_OF_CRYSTALLIZATION_ENTHALPY} without a family. */
+  theta: number;
+  /** The family calibrated (`2:1` …), `all` where the family had too few pairs, `all (θ of Jenkins and Glasser)` without a family. */
+  family: string;
+  /**
+   * Standard uncertainty of θ itself, kJ/mol per water: 0 where the family
+   * fits its own θ; where it falls back to every pair, the spread of the θ
+   * of the families that do fit their own, since its own θ is not known.
+   * It enters linearly in Δn, being the same for every water.
+   */
+  thetaU: number;
 }
 
 /** What {@link hydrateFromParent} needs besides the parent's enthalpy of solution. */
@@ -59,6 +92,12 @@ export interface HydrateRuleInput {
   waterFormation: number;
   /** The rule's standard uncertainty for one water, kJ/mol ({@link HydrateRuleScatter.perSqrtWater}). */
   scatter: number;
+  /** θ, kJ/mol per water of crystallization (default {@link WATER_OF_CRYSTALLIZATION_ENTHALPY}); a family's fitted θ from {@link hydrateRuleScatter}. */
+  theta?: number;
+  /** The family θ and the scatter were calibrated on, for the note. */
+  family?: string;
+  /** Standard uncertainty of θ, kJ/mol per water ({@link HydrateRuleScatter.thetaU}); default 0. */
+  thetaU?: number;
 }
 
 /** Anhydrous formula → every form (canonical formula, waters, the parsed salt) that the formation and solution tables hold, fewest waters first. */
@@ -94,7 +133,8 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
         const byCrystal = crystal.has(h.formula) ? forms.find((p) => p.water < h.water && crystal.has(p.formula)) : undefined;
         if (byCrystal) {
           const waters = h.water - byCrystal.water;
-          pairs.push({ hydrate: h.formula, parent: byCrystal.formula, waters, miss: crystal.get(h.formula)! - crystal.get(byCrystal.formula)! - waters * WATER_OF_CRYSTALLIZATION_ENTHALPY });
+          const step = crystal.get(h.formula)! - crystal.get(byCrystal.formula)!;
+          pairs.push({ hydrate: h.formula, parent: byCrystal.formula, waters, miss: step - waters * WATER_OF_CRYSTALLIZATION_ENTHALPY, theta: step / waters, family: hydrateRuleFamily(h.salt) });
           continue;
         }
         const bySolution = solution.has(h.formula) && waterFormation !== undefined ? forms.find((p) => p.water < h.water && solution.has(p.formula)) : undefined;
@@ -102,7 +142,7 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
           const waters = h.water - bySolution.water;
           // ΔsolH(n) = ΔsolH(n′) + Δn·(ΔfH°(H2O, l) − θ) − miss
           const miss = solution.get(bySolution.formula)! + waters * (waterFormation! - WATER_OF_CRYSTALLIZATION_ENTHALPY) - solution.get(h.formula)!;
-          pairs.push({ hydrate: h.formula, parent: bySolution.formula, waters, miss });
+          pairs.push({ hydrate: h.formula, parent: bySolution.formula, waters, miss, theta: WATER_OF_CRYSTALLIZATION_ENTHALPY + miss / waters, family: hydrateRuleFamily(h.salt) });
         }
       }
     }
@@ -119,14 +159,23 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
  * more slowly than Δn (the first water of a strongly hydrated salt such as
  * KOH or LiI misses by 20–30 kJ/mol on its own), so the scatter is the RMS of
  * miss/√Δn and the rule's uncertainty for Δn waters is that times √Δn.
- * `excludeFormula` leaves out the pairs involving one salt (its own values
- * are hidden in leave-one-out).
+ *
+ * Without `family`, θ is Jenkins and Glasser's {@link WATER_OF_CRYSTALLIZATION_ENTHALPY}
+ * and every pair counts. With `family` (see {@link hydrateRuleFamily}), θ is
+ * fitted to the pairs of that family, θ_f = Σ Δn·θᵢ / Σ Δn (θᵢ each pair's
+ * step per water), and the scatter is measured about it and mixed with the
+ * pooled scatter (about the θ fitted to every pair) as {@link FAMILY_PRIOR_PAIRS}
+ * pseudo-pairs, s² = (N_f·s_f² + 4·s²_all)/(N_f + 4); a family with fewer
+ * than {@link MIN_FAMILY_PAIRS} pairs uses every pair and the pooled fit instead,
+ * and its θ is then uncertain by the spread of the fitted family θs (`thetaU`). `excludeFormula`
+ * leaves out the pairs involving one salt (its own values are hidden in
+ * leave-one-out), so neither θ nor the scatter sees them.
  *
  *   s = √( Σ miss² / Δn ÷ N ),  u(Δn) = s·√Δn
  *
- * @param options - `excludeFormula`: a canonical formula whose pairs are left out
+ * @param options - `excludeFormula`: a canonical formula whose pairs are left out; `family`: calibrate θ on that family
  * @param dataset - crystal formation enthalpies, enthalpies of solution, ΔfH°(H₂O, l) (default: built-in)
- * @returns s in kJ/mol per √(mole of water), and the number N of pairs
+ * @returns s in kJ/mol per √(mole of water), the number N of pairs, θ and the family used
  * @see Jenkins and Glasser (2004), source key `jenkinsGlasser2004`; the pairs' values from Wagman et al. (1982),
  *   `wagman1982`, and the CRC table, `crcSolution`.
  *
@@ -134,13 +183,33 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
  * ```ts
  * hydrateRuleScatter().perSqrtWater; // ≈ 16.6 kJ/mol (41 pairs of the NBS and CRC tables)
  * hydrateRuleScatter().pairs; // 41
+ * hydrateRuleScatter({ family: '2:2' }).theta; // ≈ -299.4 kJ/mol per water (the five sulfate hydrates)
  * ```
  */
-export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, dataset: Dataset = builtinDataset()): HydrateRuleScatter {
+export function hydrateRuleScatter(options: { excludeFormula?: string; family?: string } = {}, dataset: Dataset = builtinDataset()): HydrateRuleScatter {
   options = optionsArgument(options);
   const pairs = rulePairs(dataset).filter((p) => p.hydrate !== options.excludeFormula && p.parent !== options.excludeFormula);
-  const rms = Math.sqrt(pairs.reduce((s, p) => s + p.miss ** 2 / p.waters, 0) / Math.max(1, pairs.length));
-  return { perSqrtWater: rms, pairs: pairs.length };
+  const rms = (list: readonly RulePair[], theta: number): number => Math.sqrt(list.reduce((s, p) => s + (p.waters * (p.theta - theta)) ** 2 / p.waters, 0) / Math.max(1, list.length));
+  if (options.family === undefined) return { perSqrtWater: rms(pairs, WATER_OF_CRYSTALLIZATION_ENTHALPY), pairs: pairs.length, theta: WATER_OF_CRYSTALLIZATION_ENTHALPY, family: 'all (θ of Jenkins and Glasser)', thetaU: 0 };
+  const fitted = (list: readonly RulePair[]): number => {
+    const waters = list.reduce((s, p) => s + p.waters, 0);
+    return waters > 0 ? list.reduce((s, p) => s + p.waters * p.theta, 0) / waters : WATER_OF_CRYSTALLIZATION_ENTHALPY;
+  };
+  const pooledTheta = fitted(pairs);
+  const pooled = rms(pairs, pooledTheta);
+  const own = pairs.filter((p) => p.family === options.family);
+  if (own.length < MIN_FAMILY_PAIRS) {
+    const families = new Map<string, RulePair[]>();
+    for (const p of pairs) families.set(p.family, [...(families.get(p.family) ?? []), p]);
+    const thetas = [...families.values()].filter((l) => l.length >= MIN_FAMILY_PAIRS).map(fitted);
+    const mean = thetas.reduce((s, t) => s + t, 0) / Math.max(1, thetas.length);
+    const thetaU = thetas.length > 1 ? Math.sqrt(thetas.reduce((s, t) => s + (t - mean) ** 2, 0) / (thetas.length - 1)) : 0;
+    return { perSqrtWater: pooled, pairs: pairs.length, theta: pooledTheta, family: 'all', thetaU };
+  }
+  const theta = fitted(own);
+  // A few pairs say little about their spread: theirs is mixed with the pooled one as FAMILY_PRIOR_PAIRS pseudo-pairs.
+  const perSqrtWater = Math.sqrt((own.length * rms(own, theta) ** 2 + FAMILY_PRIOR_PAIRS * pooled ** 2) / (own.length + FAMILY_PRIOR_PAIRS));
+  return { perSqrtWater, pairs: own.length, theta, family: options.family, thetaU: 0 };
 }
 
 /**
@@ -150,9 +219,11 @@ export function hydrateRuleScatter(options: { excludeFormula?: string } = {}, da
  *   ΔfH°(MX·nH₂O, cr) ≈ ΔfH°(MX·n′H₂O, cr) + (n − n′)·θ
  *   ⇒ ΔsolH°(n) = ΔsolH°(n′) + (n − n′)·(ΔfH°(H₂O, l) − θ)
  *
- * with θ = {@link WATER_OF_CRYSTALLIZATION_ENTHALPY}. The standard
- * uncertainty adds √|n − n′| times the rule's scatter (see
- * {@link hydrateRuleScatter}) to the parent's in quadrature. A measured or
+ * with θ = `rule.theta` (a family's θ from {@link hydrateRuleScatter}),
+ * else {@link WATER_OF_CRYSTALLIZATION_ENTHALPY}. The standard
+ * uncertainty adds u_rule = √(|n − n′|·s² + ((n − n′)·u_θ)²) to the
+ * parent's in quadrature: s the rule's scatter, u_θ the uncertainty of θ
+ * itself (`rule.thetaU`, default 0; see {@link hydrateRuleScatter}). A measured or
  * cycle parent gives the `anchored` basis (a related salt's value plus an
  * empirical difference, like the four-salt anchors); an anchored or model
  * parent keeps its basis.
@@ -175,10 +246,14 @@ export function hydrateFromParent(parent: Estimate, rule: HydrateRuleInput): Est
   numberArgument(rule.water, 'rule.water', 'the waters of crystallization of the hydrate', { min: 0, max: 1000 });
   numberArgument(rule.waterFormation, 'rule.waterFormation', 'ΔfH°(H₂O, l) in kJ/mol', { min: -1e4, max: 1e4 });
   numberArgument(rule.scatter, 'rule.scatter', 'the scatter of the rule in kJ/mol', { min: 0, max: 1e4 });
+  if (rule.theta !== undefined) numberArgument(rule.theta, 'rule.theta', 'θ in kJ/mol per water of crystallization', { min: -1e4, max: 0 });
+  if (rule.thetaU !== undefined) numberArgument(rule.thetaU, 'rule.thetaU', 'the standard uncertainty of θ in kJ/mol', { min: 0, max: 1e4 });
   const { parentFormula, parentWater, water, waterFormation, scatter } = rule;
+  const theta = rule.theta ?? WATER_OF_CRYSTALLIZATION_ENTHALPY;
   const dn = water - parentWater;
-  const shift = dn * (waterFormation - WATER_OF_CRYSTALLIZATION_ENTHALPY);
-  const uRule = Math.sqrt(Math.abs(dn)) * scatter;
+  const shift = dn * (waterFormation - theta);
+  const thetaU = rule.thetaU ?? 0;
+  const uRule = Math.sqrt(Math.abs(dn) * scatter ** 2 + (dn * thetaU) ** 2);
   const shifted = widenEstimate(parent, uRule, shift);
   return makeEstimate({
     ...shifted,
@@ -186,7 +261,7 @@ export function hydrateFromParent(parent: Estimate, rule: HydrateRuleInput): Est
     method: parent.basis === 'measured' || parent.basis === 'cycle' ? 'difference-rule' : `${parent.method}+difference-rule`,
     sources: [...parent.sources, 'jenkinsGlasser2004'],
     notes: [
-      `hydrate's crystal enthalpy from ${parentFormula} (${parent.basis}) by the difference rule: ${dn > 0 ? '+' : ''}${dn} × θ = ${WATER_OF_CRYSTALLIZATION_ENTHALPY} kJ/mol per water of crystallization (Jenkins & Glasser 2004, from memory), scatter ${fixedDecimal(scatter, 1)} kJ/mol × √${Math.abs(dn)} from the tabulated hydrate pairs`,
+      `hydrate's crystal enthalpy from ${parentFormula} (${parent.basis}) by the difference rule: ${dn > 0 ? '+' : ''}${dn} × θ = ${fixedDecimal(theta, 1)} kJ/mol per water of crystallization (${rule.theta === undefined ? 'Jenkins & Glasser 2004, from memory' : `fitted to the tabulated hydrate pairs of ${rule.family ?? 'the tables'}`}), scatter ${fixedDecimal(scatter, 1)} kJ/mol × √${Math.abs(dn)} from the tabulated hydrate pairs`,
       ...parent.notes,
     ],
   });

@@ -23,6 +23,7 @@ const OPTIONS: Record<string, string[]> = {
   cycle: ['--solve', '--lattice', '--lattice-u', '--formation', '--svg', '--json'],
   dissolve: ['--json', '--exclude-measured', '--temperature'],
   pack: ['--salt', '--salt-mass', '--water', '--start', '--container', '--target', '--json', '--heat-capacity', '--heat-capacity-u', '--kirchhoff', '--monte-carlo', '--seed', '--curve', '--points', '--curve-svg', '--band', '--duration', '--tau', '--ambient', '--g-ambient', '--skin', '--g-skin', '--time-svg'],
+  warmer: ['--salt', '--mass', '--extra-water', '--start', '--container', '--ambient', '--g-ambient', '--svg', '--json'],
   screen: ['--enumerate', '--objective', '--direction', '--fill', '--spec', '--format', '--svg', '--exclude-measured'],
   help: [],
 };
@@ -38,7 +39,7 @@ const HOSTILE_VALUES = [
   'best.low > 0', 'best.high <', '((((((((((((((((((((((((((((((((((((1))))))))))))))))))))))))))))))))))))', '40:80@22', '40:80@200', '-1:80@22', 'a:b@c',
   'good.csv', 'mixed.csv', 'good.json', 'bad.json', 'proto.json', 'broken.json', 'broken.csv', 'unknown-column.csv', 'empty.csv', 'missing.csv',
   'a-directory.csv', '/nonexistent/dir/x.svg', 'data-good.json', 'data-dup.json', 'data-proto.json', 'data-badvalue.json', 'data-notjson.json',
-  'out.svg', '40:50', '50:40', 'enthalpy', 'heat-per-gram', 'fill-temperature', 'cost-per-kj',
+  'out.svg', '40:50', '50:40', 'enthalpy', 'heat-per-gram', 'fill-temperature', 'cost-per-kj', 'plateau-temperature', 'plateau-duration', 'NaCH3COO·3H2O', 'Na2SO4·10H2O',
 ];
 
 const optionsOf = (command: string) => [...OPTIONS[command]!, ...GLOBAL];
@@ -62,6 +63,7 @@ const WORKING: Record<string, string[]> = {
   cycle: ['cycle', 'NaCl', '--json'],
   dissolve: ['dissolve', 'KNO3', '--json', '--temperature', '10'],
   pack: ['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', '100', '--start', '22', '--json'],
+  warmer: ['warmer', '--salt', 'Na2S2O3·5H2O', '--mass', '50', '--extra-water', '5', '--start', '22', '--json'],
   screen: ['screen', 'good.csv', '--format', 'json', '--fill', '40:80@22', '--spec', 'best.low > 0'],
   help: ['help', 'pack'],
 };
@@ -125,6 +127,10 @@ const NULLABLE = new Set([
   '$.timeCourse.band',
   '$.timeCourse.band.firstInsideS',
   '$.timeCourse.band.lastInsideS',
+  '$.rechargeTemperature',
+  '$.melt.solidOnMelting',
+  '$.melt.consequence',
+  '$.rows[].warmer.rechargeTemperature',
   '$.settings.fill',
   '$.settings.spec',
   '$.rows[].fill',

@@ -55,7 +55,8 @@ const samples = (() => {
     const screened = screen(['KNO3', 'NH4Cl', 'Xy'], { fill: '20:80@22' });
     const saturated = saturatedFill(parseSalt('NH4NO3'))!;
     const curveKNO3 = solubilityCurve('KNO3')!;
-    return { salt, hydrate, estimate, lattice, hydration, cp, fill, hotFill, cycle, curve, course, screened, saturated, curveKNO3 };
+    const warmer = ionheat.latentWarmer({ salt: 'Na2S2O3·5H2O', massG: 50 }, { samples: 30 });
+    return { salt, hydrate, estimate, lattice, hydration, cp, fill, hotFill, cycle, curve, course, screened, saturated, curveKNO3, warmer };
   };
   return () => (made ??= make());
 })();
@@ -139,6 +140,8 @@ const cases: Record<string, Case> = {
   solubilityCurve: { samples: () => [['KNO3'], [s().hydrate]], userArgs: 1 },
   solubilityAt: { samples: () => [[s().curveKNO3, 25], [s().curveKNO3, 80]], userArgs: 2 },
   freezingPointOfSolution: { samples: () => [[0.2, 100]], userArgs: 2 },
+  // Latent-heat warmers
+  latentWarmer: { samples: () => [[{ salt: 'Na2S2O3·5H2O', massG: 50, startC: 22 }, { samples: 20 }], [{ salt: 'NaCH3COO·3H2O', massG: 20, extraWaterG: 2, containerJPerK: 5 }, { ambientC: 10, ambientConductanceWPerK: 0.3, skinC: 30, skinConductanceWPerK: 0, durationS: 600, samples: 10 }]], userArgs: 2, runs: 40 },
   // Screening
   screen: { samples: () => [[['NH4NO3', 'KNO3', 'Xy'], { spec: 'best.low > 10' }], [[{ formula: 'KNO3', pricePerKg: 2, measuredEnthalpy: 35, measuredUncertainty: 0.5, solubility: 30 }], { fill: '20:80@22', objective: 'cost-per-kj', direction: 'cool', filters: { excludeSalts: ['NH4NO3'], excludeIons: ['Na[+]'], excludeHazards: ['oxidizer'], minMolarMass: 10, maxMolarMass: 500 } }]], userArgs: 2, runs: 60 },
   screenStream: { samples: () => [[['KNO3', 'NH4Cl'], { spec: 'verdict == "endothermic"' }]], userArgs: 2, runs: 40 },
@@ -153,6 +156,7 @@ const cases: Record<string, Case> = {
   cycleDiagram: { samples: () => [[s().cycle, { width: 700 }]], userArgs: 2 },
   packCurveSvg: { samples: () => [[s().curve, { title: 'T', width: 600, height: 400 }]], userArgs: 2 },
   timeCourseSvg: { samples: () => [[s().course, { title: 'T', fillLabel: 'L', width: 600, height: 400 }]], userArgs: 2 },
+  warmerCourseSvg: { samples: () => [[s().warmer, { title: 'T', width: 600, height: 400 }]], userArgs: 2 },
   intervalChart: { samples: () => [[s().screened, { title: 'T', marks: [{ at: 5, label: 'five' }], maxRows: 10, width: 700 }]], userArgs: 2 },
 };
 

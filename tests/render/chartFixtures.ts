@@ -1,6 +1,6 @@
 // One set of charts drawn from varied inputs (hot and cold, bands near the thresholds, clamps, every cycle
 // unknown, screens with outliers, a fill and a spec), shared by the layout checks and the PNG rendering.
-import { bornHaberCycle, cycleDiagram, intervalChart, packCurveSvg, packRatioCurve, packTimeCourse, screen, timeCourseSvg } from '../../src/index.js';
+import { bornHaberCycle, cycleDiagram, intervalChart, latentWarmer, packCurveSvg, packRatioCurve, packTimeCourse, screen, timeCourseSvg, warmerCourseSvg } from '../../src/index.js';
 import { specThresholds } from '../../src/screen/specThresholds.js';
 
 export interface Chart {
@@ -30,5 +30,6 @@ export function chartFixtures(): Chart[] {
   const outliers = screen(['KNO3', 'NH4Cl', 'NaCl', 'KCl', 'NH4NO3', 'Li2S', 'K2Se', 'Na2Se', { formula: 'LiF', measuredEnthalpy: 5, measuredUncertainty: 300 }], { objective: 'heat-per-gram' });
   add('screen-heat-per-gram-outliers', intervalChart(outliers));
   add('screen-hot-enthalpy', intervalChart(screen(['CaCl2', 'MgSO4', 'LiCl', 'Na2CO3', 'KNO3', 'NaOH', 'MgCl2', 'NaCH3COO'], { direction: 'heat' })));
+  add('warmer-sodium-acetate', warmerCourseSvg(latentWarmer({ salt: 'NaCH3COO·3H2O', massG: 100 }, { samples: 60 })));
   return charts;
 }

@@ -31,11 +31,24 @@ describe('anchor sets', () => {
     }
   });
 
-  it('mixes charge types where the ions require it (Na2SO4 from 2·NaClO4 + K2SO4 − 2·KClO4; BaCl2 from BaBr2 + 2·KCl − 2·KBr)', () => {
-    const na2so4 = anchorSets(parseSalt('Na2SO4'), 'kapustinskii')!;
-    expect(na2so4.sets.some((s) => charge.get(s.my.anion) === -1 && s.alpha === 2 && s.beta === 1 && s.gamma === -2)).toBe(true);
-    const bacl2 = anchorSets(parseSalt('BaCl2'), 'kapustinskii')!;
-    expect(bacl2.sets.some((s) => charge.get(s.nx.cation) === 1 && s.alpha === 1 && s.beta === 2 && s.gamma === -2)).toBe(true);
+  it('never mixes charge types: every anchor of a set shares the target’s (K2CO3 from K2SO4 + Na2CO3 − Na2SO4, not from 1:1 salts)', () => {
+    for (const formula of ['K2CO3', 'Na2SO4', 'BaCl2', 'MgSO4']) {
+      const type = (f: string) => parseSalt(f).ions.map((i) => Math.abs(i.charge)).join(':');
+      for (const model of ['kapustinskii', 'vbt'] as const) {
+        const c = anchorSets(parseSalt(formula), model);
+        for (const s of c?.sets ?? []) for (const a of [s.my, s.nx, s.ny]) expect(type(a.formula), `${formula} ${model} ${a.formula}`).toBe(type(formula));
+      }
+    }
+    const k2co3 = anchorSets(parseSalt('K2CO3'), 'kapustinskii')!;
+    expect(k2co3.sets.some((s) => s.my.formula === 'K2SO4' && s.nx.formula === 'Na2CO3' && s.ny.formula === 'Na2SO4')).toBe(true);
+  });
+
+  it('orders neighbours by charge before radius: every ion of the same charge comes before any of another', () => {
+    for (const ion of ['K[+]', 'SO4[2-]', 'Ca[2+]', 'Cl[-]']) {
+      const near = anchorIndex(dataset).neighbours.get(ion)!;
+      const same = near.map((n) => charge.get(n.ion) === charge.get(ion));
+      expect(same.indexOf(false) === -1 || same.lastIndexOf(true) < same.indexOf(false), ion).toBe(true);
+    }
   });
 
   it('never uses the target itself as an anchor', () => {
@@ -79,7 +92,7 @@ describe('anchored estimates, each salt with its own values hidden', () => {
   });
 
   it('leave the salt’s own miss out of the floor under excludeMeasured', () => {
-    const group = { chargeType: '1:1', cationCore: 'noble-gas' } as const;
+    const group = { chargeType: '1:1', ionClass: 'monatomic' } as const;
     const all = anchoredFloor('kapustinskii', group);
     const without = anchoredFloor('kapustinskii', group, { excludeFormula: 'KCl' });
     expect(without.salts).toBe(all.salts - 1);

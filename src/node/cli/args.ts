@@ -35,3 +35,17 @@ export function numberOption(value: string | undefined, name: string): number | 
   if (!Number.isFinite(n)) throw new IonheatError('INVALID_ARGUMENT', `--${name} needs a number, got "${value}"`, { field: name });
   return n;
 }
+
+/** Joins `--name -5` into `--name=-5` for the numeric options named, so negative values reach the range checks. */
+export function joinNegativeValues(argv: readonly string[], numeric: ReadonlySet<string>): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i]!;
+    const next = argv[i + 1];
+    if (a.startsWith('--') && !a.includes('=') && numeric.has(a.slice(2)) && next !== undefined && /^-[\d.]/.test(next)) {
+      out.push(`${a}=${next}`);
+      i++;
+    } else out.push(a);
+  }
+  return out;
+}

@@ -1,5 +1,3 @@
-import { writeFileSync } from 'node:fs';
-import { isAbsolute, join } from 'node:path';
 import type { Dataset } from '../../data/dataset.js';
 import { parseSalt } from '../../chem/parseSalt.js';
 import { formatSalt } from '../../chem/formatSalt.js';
@@ -12,7 +10,7 @@ import { packRatioCurve, type PackDesignPoint, type PackRatioCurve } from '../..
 import { packTimeCourse, type PackTimeCourse, type TimeCourseOptions } from '../../pack/packTimeCourse.js';
 import { packCurveSvg } from '../../render/packCurve.js';
 import { timeCourseSvg } from '../../render/timeCourse.js';
-import { numberOption, readArgs } from './args.js';
+import { joinNegativeValues, numberOption, readArgs } from './args.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
 import { bulletLines } from './paragraphs.js';
@@ -20,6 +18,8 @@ import { outputWidth } from './io.js';
 import { formatNumber, withTrueMinus } from '../../notation/minus.js';
 import { formulaText } from '../../notation/formula.js';
 import { wrapText } from '../../notation/wrapText.js';
+import { writeChart } from './writeChart.js';
+import { warmerSalts } from '../../warmer/warmerMelt.js';
 
 const options = {
   salt: { type: 'string', multiple: true },
@@ -49,20 +49,6 @@ const options = {
 
 /** Options whose value is a number that may be negative (`--start -5` means `--start=-5`). */
 const NUMERIC = new Set(['salt-mass', 'water', 'start', 'container', 'target', 'heat-capacity', 'heat-capacity-u', 'monte-carlo', 'seed', 'points', 'duration', 'tau', 'ambient', 'g-ambient', 'skin', 'g-skin', 'band']);
-
-/** Joins `--name -5` into `--name=-5` for numeric options, so negative values reach the range checks. */
-function joinNegativeValues(argv: readonly string[]): string[] {
-  const out: string[] = [];
-  for (let i = 0; i < argv.length; i++) {
-    const a = argv[i]!;
-    const next = argv[i + 1];
-    if (a.startsWith('--') && !a.includes('=') && NUMERIC.has(a.slice(2)) && next !== undefined && /^-[\d.]/.test(next)) {
-      out.push(`${a}=${next}`);
-      i++;
-    } else out.push(a);
-  }
-  return out;
-}
 
 function bad(field: string, message: string): IonheatError {
   return new IonheatError('INVALID_ARGUMENT', message, { field });
@@ -242,16 +228,6 @@ function asOptionError(e: unknown): unknown {
   return new IonheatError(e.code, message, { field: option, ...(e.text !== undefined ? { text: e.text } : {}) });
 }
 
-function writeChart(cwd: string, file: string, svg: string, option: string): string {
-  const path = isAbsolute(file) ? file : join(cwd, file);
-  try {
-    writeFileSync(path, svg);
-  } catch (e) {
-    throw bad(option, `--${option}: cannot write "${file}": ${e instanceof Error ? e.message.split('\n')[0] : String(e)}`);
-  }
-  return path;
-}
-
 /** `ionheat pack`: the temperature a hot- or cold-pack fill reaches. */
 export const packCommand: Command = {
   name: 'pack',
@@ -277,7 +253,7 @@ export const packCommand: Command = {
     '  --ambient <°C> (22)   --g-ambient <W/K> (0.15)   --skin <°C> (33)   --g-skin <W/K> (0.25)   --time-svg <file>',
   ].join('\n'),
   async run(argv, { io, dataset }) {
-    const { values } = readArgs(joinNegativeValues(argv), options, { min: 0, max: 0, names: '' });
+    const { values } = readArgs(joinNegativeValues(argv, NUMERIC), options, { min: 0, max: 0, names: '' });
     const saltsGiven = values.salt ?? [];
     const massesGiven = values['salt-mass'] ?? [];
     if (saltsGiven.length === 0) throw bad('salt', '--salt is required, with its --salt-mass (e.g. --salt KNO3 --salt-mass 10 --water 100)');
@@ -364,6 +340,13 @@ export const packCommand: Command = {
       const label = `${fill.solids.map((s) => `${s.massG} g ${s.formula}`).join(' + ')} in ${fill.waterG} g water`;
       written.push(writeChart(io.cwd, values['time-svg'], timeCourseSvg(course, { fillLabel: label }), 'time-svg'));
     }
+    // A hydrate that also makes a latent-heat warmer: say so, rather than let the dissolving pack pass for its use.
+    const warmerSalt = new Set(warmerSalts(dataset));
+    const hints = fill.solids
+      .map((s) => parseSalt(s.formula, dataset).formula)
+      .filter((f) => warmerSalt.has(f))
+      .map((f) => `${f} can also serve as a supercooled melt that crystallises on demand (a latent-heat warmer); this pack only dissolves it in water. For a warmer, run: ionheat warmer --salt "${f}" --mass <g>`);
+    if (hints.length > 0) result = { ...result, notes: [...hints, ...result.notes] };
     if (values.json) {
       io.stdout(JSON.stringify(jsonReport(result, curve, course, withCurve, dataset), null, 2) + '\n');
       return 0;

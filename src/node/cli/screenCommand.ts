@@ -39,7 +39,9 @@ ionheat screen --enumerate [options]
                          - reads standard input
   --enumerate            screen every charge-balanced salt of the built-in ions instead
   --objective <name>     what to rank by: enthalpy (kJ/mol, default), heat-per-gram (J/g),
-                         fill-temperature (°C, needs --fill), cost-per-kj (needs pricePerKg)
+                         fill-temperature (°C, needs --fill), cost-per-kj (needs pricePerKg);
+                         for latent-heat warmers (100 g of hydrate triggered at 20 °C):
+                         plateau-temperature (°C), warmer-heat-per-gram (J/g), plateau-duration (s)
   --direction cool|heat  the pack to design (default cool)
   --fill <s>:<w>@<t>     standard fill: grams of salt, grams of water, start °C, e.g. 40:80@22
   --spec "<condition>"   a condition every row must meet, on the fields of the JSON output,

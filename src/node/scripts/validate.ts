@@ -19,6 +19,7 @@ import { dissolve } from '../../solution/dissolve.js';
 import { measuredSolutionEnthalpy } from '../../solution/measuredSolution.js';
 import { solutionEnthalpyFromCycle } from '../../solution/cycleSolution.js';
 import { solutionVerdict } from '../../solution/verdict.js';
+import { saltIonClass, saltIonClasses } from '../../lattice/saltIonClass.js';
 
 const dataset = builtinDataset();
 
@@ -129,14 +130,65 @@ function tables(rs: readonly Row[]): string {
   ].join('\n');
 }
 
+/** The charge type of a case, or its kind where it has none (hydrates apart, whatever their charge type). */
+function kindOf(c: Case): string {
+  return c.salt.kind !== 'ionic' ? 'non-electrolytes' : c.salt.water > 0 ? 'hydrates' : (chargeType(c.salt) ?? 'several kinds of ion');
+}
+
+function classOf(c: Case): string {
+  return c.salt.kind !== 'ionic' ? '—' : saltIonClass(c.salt, dataset);
+}
+
+/** Whether an interval misses its reference by more than its own half-width on that side. */
+function farMiss(e: Estimate, truth: number): boolean {
+  return truth > e.high ? truth - e.high > e.high - e.value : truth < e.low ? e.low - truth > e.value - e.low : false;
+}
+
+interface Breakdown {
+  label: string;
+  cases: number;
+  best: Row;
+  /** The anchored basis alone (its most precise estimate per salt). */
+  anchored: Row;
+  /** Salts whose best interval misses its reference by more than its own half-width. */
+  farMisses: string[];
+}
+
+function breakdown(label: string, cases: readonly Case[]): Breakdown {
+  const best = cases.flatMap((c) => (c.best ? [{ e: c.best, truth: c.truth }] : []));
+  const anchored = cases.flatMap((c) => {
+    const e = c.estimates.find((x) => x.basis === 'anchored');
+    return e ? [{ e, truth: c.truth }] : [];
+  });
+  const farMisses = cases.filter((c) => c.best && farMiss(c.best, c.truth)).map((c) => c.salt.formula);
+  return { label, cases: cases.length, best: row(label, best), anchored: row(label, anchored), farMisses };
+}
+
+function breakdowns(cases: readonly Case[]): Breakdown[] {
+  const out: Breakdown[] = [];
+  for (const t of [...new Set(cases.map(kindOf))].sort()) {
+    const ofType = cases.filter((c) => kindOf(c) === t);
+    out.push(breakdown(t, ofType));
+    const classes = [...new Set(ofType.map(classOf))].filter((k) => k !== '—');
+    if (classes.length > 1) for (const k of saltIonClasses.filter((x) => classes.includes(x))) out.push(breakdown(`  ${t} · ${k}`, ofType.filter((c) => classOf(c) === k)));
+  }
+  return out;
+}
+
+/** MAE, coverage, undetermined and wrong shares of `best` by charge type and ion class, with the anchored basis's MAE beside. */
 function byChargeType(cases: readonly Case[]): string {
-  const kindOf = (c: Case): string => (c.salt.kind !== 'ionic' ? 'non-electrolytes' : c.salt.water > 0 ? 'hydrates' : (chargeType(c.salt) ?? 'several kinds of ion'));
-  const types = [...new Set(cases.map(kindOf))].sort();
-  const lines = ['| salts | n | estimated (best) | best MAE | best 95 % coverage | best wrong verdicts |', '|---|---:|---:|---:|---:|---:|'];
-  for (const t of types) {
-    const sub = cases.filter((c) => kindOf(c) === t);
-    const r = row(t, sub.flatMap((c) => (c.best ? [{ e: c.best, truth: c.truth }] : [])));
-    lines.push(r.n > 0 ? `| ${t} | ${sub.length} | ${r.n} | ${kj(r.mae)} | ${pct(r.coverage)} | ${pct(r.wrong)} |` : `| ${t} | ${sub.length} | 0 | — | — | — |`);
+  const lines = [
+    '| salts | n | estimated | best MAE | anchored MAE (n) | 95 % coverage | missed by > half-width | undetermined | wrong |',
+    '|---|---:|---:|---:|---:|---:|---:|---:|---:|',
+  ];
+  for (const b of breakdowns(cases)) {
+    const label = b.label.startsWith('  ') ? `&nbsp;&nbsp;${b.label.trim()}` : `**${b.label}**`;
+    const anchored = b.anchored.n > 0 ? `${kj(b.anchored.mae)} (${b.anchored.n})` : '—';
+    lines.push(
+      b.best.n > 0
+        ? `| ${label} | ${b.cases} | ${b.best.n} | ${kj(b.best.mae)} | ${anchored} | ${pct(b.best.coverage)} | ${b.farMisses.length} | ${pct(b.best.undetermined)} | ${pct(b.best.wrong)} |`
+        : `| ${label} | ${b.cases} | 0 | — | — | — | — | — | — |`,
+    );
   }
   return lines.join('\n');
 }
@@ -153,20 +205,36 @@ function worst(cases: readonly Case[], k = 12): string {
   return lines.join('\n');
 }
 
-function targets(rs: readonly Row[]): string {
-  const verdict = (ok: boolean) => (ok ? 'met' : '**missed**');
-  const lines: string[] = [];
-  const bases = rs.filter(summary);
-  const anchoredBasis = bases.find((r) => r.label.startsWith('anchored basis')) ?? rs.find((r) => r.label.startsWith('anchored ·'));
-  lines.push(anchoredBasis ? `- Anchored MAE ≤ 5 kJ/mol (the anchored basis): ${kj(anchoredBasis.mae)} kJ/mol — ${verdict(anchoredBasis.mae <= 5)}.` : '- Anchored MAE ≤ 5 kJ/mol: **not measured** (no anchored estimates).');
-  for (const r of bases) lines.push(`- 95 % coverage ≥ 90 % (${r.label}): ${pct(r.coverage)} — ${verdict(r.coverage >= 0.9)}; wrong verdicts ≤ 2 %: ${pct(r.wrong)} — ${verdict(r.wrong <= 0.02)}.`);
+const verdictWord = (ok: boolean): string => (ok ? 'met' : '**missed**');
+
+/** Where single estimators fall short of 90 % coverage or exceed 2 % wrong verdicts, and which anchored ones are within 4 kJ/mol. */
+function estimatorNotes(rs: readonly Row[]): string {
   const methods = rs.filter((r) => !summary(r));
-  const met = methods.filter((r) => r.label.startsWith('anchored') && r.mae <= 5).map((r) => `${r.label} (${kj(r.mae)})`);
-  if (met.length > 0) lines.push(`- Single anchored estimators within 5 kJ/mol: ${met.join(', ')}.`);
+  const lines: string[] = [];
+  const met = methods.filter((r) => r.label.startsWith('anchored') && r.mae <= 4).map((r) => `${r.label} (${kj(r.mae)})`);
+  if (met.length > 0) lines.push(`- Single anchored estimators within 4 kJ/mol: ${met.join(', ')}.`);
   const low = methods.filter((r) => r.coverage < 0.9).map((r) => `${r.label} (${pct(r.coverage)} of ${r.n})`);
   lines.push(low.length > 0 ? `- Single estimators below 90 % coverage: ${low.join(', ')}.` : '- Every single estimator reaches 90 % coverage.');
   const wrong = methods.filter((r) => r.wrong > 0.02).map((r) => `${r.label} (${pct(r.wrong)} of ${r.n})`);
   lines.push(wrong.length > 0 ? `- Single estimators above 2 % wrong verdicts: ${wrong.join(', ')}.` : '- No single estimator gives more than 2 % wrong verdicts.');
+  return lines.join('\n');
+}
+
+/** The targets of the estimates for salts no table covers, on every hidden salt (both reference sets together), by charge type. */
+function targets(cases: readonly Case[]): string {
+  const lines: string[] = [];
+  const byType = breakdowns(cases).filter((b) => !b.label.startsWith('  ') && b.label !== 'non-electrolytes');
+  const oneOne = byType.find((b) => b.label === '1:1');
+  if (oneOne) lines.push(`- 1:1 salts, anchored MAE ≤ 4 kJ/mol (the anchored basis, ${oneOne.anchored.n} salts): ${kj(oneOne.anchored.mae)} kJ/mol — ${verdictWord(oneOne.anchored.mae <= 4)}.`);
+  for (const b of byType) {
+    if (b.best.n === 0) continue;
+    const far = b.farMisses.length > 0 ? `${b.farMisses.length} (${b.farMisses.join(', ')})` : 'none';
+    let line = `- ${b.label} (${b.best.n} salts): 95 % coverage ${pct(b.best.coverage)} — ${verdictWord(b.best.coverage >= 0.9)}; intervals missing by more than their half-width: ${far} — ${verdictWord(b.farMisses.length === 0)}`;
+    if (['2:1', '1:2', '2:2', '3:1', 'hydrates'].includes(b.label)) {
+      line += `; MAE ${kj(b.best.mae)} kJ/mol — ${verdictWord(b.best.mae <= 8)}; undetermined ${pct(b.best.undetermined)} — ${verdictWord(b.best.undetermined <= 1 / 3)}; wrong verdicts ${pct(b.best.wrong)} — ${verdictWord(b.best.wrong <= 0.02)}`;
+    }
+    lines.push(`${line}.`);
+  }
   return lines.join('\n');
 }
 
@@ -251,14 +319,22 @@ ${worst(cycle)}
 
 ## Targets of the issue
 
-Measured set:
+On every hidden salt, both reference sets together (\`best\`, by charge type; hydrates apart):
 
-${targets(measuredRows)}
-- 95 % coverage ≥ 90 % (cycle basis against measured values, nothing hidden): ${pct(closureRow.coverage)} — ${closureRow.coverage >= 0.9 ? 'met' : '**missed**'}; wrong verdicts: ${pct(closureRow.wrong)}.
+${targets([...measured, ...cycle])}
+- 95 % coverage ≥ 90 % (cycle basis against measured values, nothing hidden): ${pct(closureRow.coverage)} — ${verdictWord(closureRow.coverage >= 0.9)}; wrong verdicts: ${pct(closureRow.wrong)}.
 
-Cycle set:
+All hidden salts by charge type and ion class (\`best\`):
 
-${targets(cycleRows)}
+${byChargeType([...measured, ...cycle])}
+
+Single estimators, measured set:
+
+${estimatorNotes(measuredRows)}
+
+Single estimators, cycle set:
+
+${estimatorNotes(cycleRows)}
 
 ## Why targets are missed
 
