@@ -11,6 +11,7 @@ import { el, linearScale, niceTicks, svgDocument, text, tickLabel } from './svg.
 import { heatColour, palette } from './palette.js';
 import { formulaText, formulasInText } from '../notation/formula.js';
 import { LabelPlacer } from './textBox.js';
+import { timeChartFrame } from './timeChartFrame.js';
 import { referenceLines, reserveCurve, reserveLines, type ReferenceLine } from './referenceLine.js';
 
 /** Options of {@link timeCourseSvg}. */
@@ -98,17 +99,7 @@ function draw(course: PackTimeCourse, options: TimeCourseChartOptions): string {
     const b = course.band;
     body.push(el('rect', { x: plot.x0, y: y(b.highC), width: plot.x1 - plot.x0, height: y(b.lowC) - y(b.highC), fill: palette.band }));
   }
-  for (const t of yTicks.ticks) {
-    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(t), y2: y(t), stroke: palette.grid, 'stroke-width': 1 }));
-    body.push(text(plot.x0 - 8, y(t) + 4, tickLabel(t), { class: 'small', 'text-anchor': 'end' }));
-  }
-  for (const t of xTicks.ticks.filter((v) => v <= minutes * (1 + 1e-9))) {
-    body.push(el('line', { x1: x(t), x2: x(t), y1: plot.y1, y2: plot.y1 + 5, stroke: palette.muted }));
-    body.push(text(x(t), plot.y1 + 19, tickLabel(t), { class: 'small', 'text-anchor': 'middle' }));
-  }
-  body.push(el('rect', { x: plot.x0, y: plot.y0, width: plot.x1 - plot.x0, height: plot.y1 - plot.y0, fill: 'none', stroke: palette.muted, 'stroke-width': 1 }));
-  body.push(text((plot.x0 + plot.x1) / 2, height - 18, 'time since the salt met the water (min)', { class: 'label', 'text-anchor': 'middle' }));
-  body.push(text(18, (plot.y0 + plot.y1) / 2, 'pack temperature (°C)', { class: 'label', 'text-anchor': 'middle', transform: `rotate(-90 18 ${(plot.y0 + plot.y1) / 2})` }));
+  body.push(...timeChartFrame(plot, x, y, { x: xTicks.ticks, y: yTicks.ticks }, minutes, { x: 'time since the salt met the water (min)', y: 'pack temperature (°C)' }, height));
 
   // The curve and its extreme first, so that no label is put on them.
   const curve = pts.map((q) => [x(q.t / 60), y(q.temperature)] as const);

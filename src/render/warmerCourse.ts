@@ -12,6 +12,7 @@ import { el, linearScale, niceTicks, svgDocument, text, tickLabel } from './svg.
 import { palette } from './palette.js';
 import { formulaText } from '../notation/formula.js';
 import { LabelPlacer } from './textBox.js';
+import { timeChartFrame } from './timeChartFrame.js';
 import { referenceLines, reserveCurve, reserveLines, type ReferenceLine } from './referenceLine.js';
 
 /** Options of {@link warmerCourseSvg}. */
@@ -63,7 +64,7 @@ function draw(w: WarmerResult, options: WarmerChartOptions): string {
   const tEnd = pts[pts.length - 1]!.t;
   const minutes = tEnd / 60;
   const ys = [...pts.map((q) => q.temperature), f.startC, p.ambientC.value, p.skinC.value, w.plateau.high, CONTACT_BURN_THRESHOLD_C];
-  const yTicks = niceTicks(Math.min(...ys), Math.max(...ys) + 2, 7);
+  const yTicks = niceTicks(Math.min(...ys) - 2, Math.max(...ys) + 2, 7);
   const xTicks = niceTicks(0, minutes, 8);
   const x = linearScale([0, minutes], [plot.x0, plot.x1]);
   const y = linearScale(yTicks.domain, [plot.y1, plot.y0]);
@@ -75,14 +76,7 @@ function draw(w: WarmerResult, options: WarmerChartOptions): string {
   if (line3) body.push(text(margin.left, 80, line3, { class: 'label muted' }));
   const placer = new LabelPlacer({ x0: plot.x0 + 2, y0: plot.y0 + 2, x1: plot.x1 - 2, y1: plot.y1 - 2 });
 
-  for (const t of yTicks.ticks) {
-    body.push(el('line', { x1: plot.x0, x2: plot.x1, y1: y(t), y2: y(t), stroke: palette.grid, 'stroke-width': 1 }));
-    body.push(text(plot.x0 - 8, y(t) + 4, tickLabel(t), { class: 'small', 'text-anchor': 'end' }));
-  }
-  for (const t of xTicks.ticks.filter((v) => v <= minutes * (1 + 1e-9))) {
-    body.push(el('line', { x1: x(t), x2: x(t), y1: plot.y1, y2: plot.y1 + 5, stroke: palette.muted }));
-    body.push(text(x(t), plot.y1 + 19, tickLabel(t), { class: 'small', 'text-anchor': 'middle' }));
-  }
+  body.push(...timeChartFrame(plot, x, y, { x: xTicks.ticks, y: yTicks.ticks }, minutes, { x: 'time since triggering (min)', y: 'fill temperature (°C)' }, height));
 
   // The plateau: its 95 % band of temperature, from the trigger to its end.
   const plateauEndMin = Math.min(minutes, w.plateauDuration.value / 60);
@@ -90,9 +84,6 @@ function draw(w: WarmerResult, options: WarmerChartOptions): string {
   body.push(el('rect', { ...band, fill: palette.hotTint }));
   body.push(el('line', { x1: x(plateauEndMin), x2: x(plateauEndMin), y1: plot.y0, y2: plot.y1, stroke: palette.hot, 'stroke-width': 1, 'stroke-dasharray': '3 3' }));
   const plateauLabel = `plateau ${fmt(w.plateau.value)} °C (95 % ${fmt(w.plateau.low)}–${fmt(w.plateau.high)}) for about ${fmt(w.plateauDuration.value / 60)} min; ${fmt(100 * w.crystallisedAtPlateau.value, 0)} % crystallised at once`;
-  body.push(el('rect', { x: plot.x0, y: plot.y0, width: plot.x1 - plot.x0, height: plot.y1 - plot.y0, fill: 'none', stroke: palette.muted, 'stroke-width': 1 }));
-  body.push(text((plot.x0 + plot.x1) / 2, height - 18, 'time since triggering (min)', { class: 'label', 'text-anchor': 'middle' }));
-  body.push(text(18, (plot.y0 + plot.y1) / 2, 'fill temperature (°C)', { class: 'label', 'text-anchor': 'middle', transform: `rotate(-90 18 ${(plot.y0 + plot.y1) / 2})` }));
 
   // The curve, the lines and the trigger point are reserved first; then the labels, most important first.
   const curve = [{ t: 0, temperature: f.startC }, ...pts].map((q) => [x(q.t / 60), y(q.temperature)] as const);

@@ -56,6 +56,11 @@ const familyRows = Object.values(FAMILIES).map((f) => {
   return [f.name, f.table, f.reference, String(list.length), String(agree), percent(agree, list.length), String(explained), String(open)];
 });
 
+// Every difference explained on its record.
+const differenceRows = checks
+  .filter((c) => c.explained)
+  .map((c) => [c.table, c.subject, String(c.ours), String(Number(c.ref.toFixed(3))), c.reference, String(Number(c.tolerance.toFixed(3)))]);
+
 // Reference copies.
 const copyRows = readdirSync(join(root, 'tests', 'reference'))
   .filter((file) => Object.keys(refs).includes(file.replace(/\.json$/, '')))
@@ -69,6 +74,7 @@ const table = (head: string[], rows: string[][]) =>
 
 const tablesMd = table(['table', 'records', 'checked against a copy', 'by copy', 'from memory', 'neither (sourced, not compared)'], tableRows);
 const familiesMd = table(['family', 'table', 'reference', 'compared', 'agree', 'agreement', 'differ, reason on the record', 'unresolved'], familyRows);
+const differencesMd = table(['table', 'record', 'ours', 'copy', 'copy file', 'tolerance'], differenceRows);
 const copiesMd = table(['file', 'package', 'version', 'licence', 'file inside the package', 'entries'], copyRows);
 
 const report = `# Provenance of the data tables
@@ -86,6 +92,12 @@ ${tablesMd}
 Each family compares one quantity of one table with one copy at a tolerance justified in src/node/scripts/reference/crossCheck.ts. *Agree* counts records within that tolerance; the others differ for a reason written on the record (\`differs from <reference>: …\`), most often a different evaluation of the same quantity (NBS 1982 here, CODATA or JANAF in the copy).
 
 ${familiesMd}
+
+## Differences explained on their records
+
+Each of these records says in its note why its value differs from the copy (search the note for \`differs from\`).
+
+${differencesMd}
 
 ## Reference copies
 
