@@ -62,6 +62,9 @@ export { ionHydrationEnthalpy, type HydrationScale, type HydrationTerm, type Pro
 export { bornHydrationEnthalpy, type BornCalibration, type BornClass, type BornRadius } from './hydration/bornHydration.js';
 export { gaseousIonFormationEnthalpy } from './hydration/gaseousIonFormation.js';
 
+// Solubility from a solubility product
+export { solubilityFromProduct, type SolubilityFromProduct } from './brine/solubilityFromProduct.js';
+
 // The enthalpy of solution
 export { dissolve, type DissolveOptions, type DissolveResult } from './solution/dissolve.js';
 export { solutionVerdict, type Verdict } from './solution/verdict.js';
@@ -83,6 +86,7 @@ export { packTimeCourse, type PackTimeCourse, type TimeCourseOptions, type TimeC
 export { packCautions, CONTACT_BURN_THRESHOLD_C, SCREENING_LINE, type CautionInput } from './pack/packCautions.js';
 export { saltHazards } from './pack/saltHazards.js';
 export { solubilityCurve, solubilityAt, type SolubilityCurve, type SolubilityPoint, type SolubilityAt } from './pack/solubilityCurve.js';
+export { saltSolubility, type SaltSolubility, type SolubilityStatus } from './pack/saltSolubility.js';
 export { freezingPointOfSolution, WATER_CRYOSCOPIC_CONSTANT } from './pack/freezingPoint.js';
 
 // Latent-heat warmers (supercooled salt-hydrate melts)

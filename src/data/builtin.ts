@@ -22,6 +22,7 @@ import solutionEnthalpies from '../../data/solution-enthalpies.json';
 import hydrationEnthalpies from '../../data/hydration-enthalpies.json';
 import crystals from '../../data/crystals.json';
 import solubility from '../../data/solubility.json';
+import solubilityProducts from '../../data/solubility-products.json';
 import heatCapacities from '../../data/heat-capacities.json';
 import ionizationEnergies from '../../data/ionization-energies.json';
 import electronAffinities from '../../data/electron-affinities.json';
@@ -63,6 +64,7 @@ export function builtinDataset(): Dataset {
       'hydration-enthalpies.json': hydrationEnthalpies,
       'crystals.json': crystals,
       'solubility.json': solubility,
+      'solubility-products.json': solubilityProducts,
       'heat-capacities.json': heatCapacities,
       'ionization-energies.json': ionizationEnergies,
       'electron-affinities.json': electronAffinities,

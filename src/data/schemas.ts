@@ -202,6 +202,29 @@ export const solubilityRecordSchema = z.strictObject({
   ...provenance,
 });
 
+/**
+ * A solubility product at 25 °C from a database of dissolution reactions
+ * (llnl.dat): the reaction and log K as the file writes them, and log10 Ksp
+ * of the salt dissolving to its own ions.
+ */
+export const solubilityProductRecordSchema = z.strictObject({
+  /** The solid as it dissolves, hydrate water included (`CaSO4·2H2O`). */
+  formula: formulaTextSchema,
+  /** The phase name in the source (a mineral name, or the formula); unique in the table. */
+  mineral: z.string().min(1).max(80),
+  /** The dissolution reaction as the source writes it. */
+  reaction: z.string().min(1).max(300),
+  /** log10 K of that reaction at 25 °C. */
+  logK: finite,
+  /** The species reactions added to reach the salt's own ions, where the source's reaction uses another form of the anion. */
+  conversion: z.string().max(300).optional(),
+  /** log10 Ksp in the salt's own ions, mol/kg standard state. */
+  value: finite,
+  unit: z.literal('log10'),
+  uncertainty,
+  ...provenance,
+});
+
 export const heatCapacityRecordSchema = z.strictObject({
   formula: formulaTextSchema,
   phase: phaseSchema,
@@ -353,6 +376,7 @@ export const tableSchemas = {
   }),
   'crystals.json': table(crystalRecordSchema),
   'solubility.json': table(solubilityRecordSchema),
+  'solubility-products.json': table(solubilityProductRecordSchema),
   'heat-capacities.json': table(heatCapacityRecordSchema),
   'ionization-energies.json': table(ionizationRecordSchema),
   'electron-affinities.json': table(electronAffinityRecordSchema),
@@ -379,6 +403,7 @@ export type CompoundFormationRecord = z.infer<typeof compoundFormationRecordSche
 export type SolutionEnthalpyRecord = z.infer<typeof solutionEnthalpyRecordSchema>;
 export type CrystalRecord = z.infer<typeof crystalRecordSchema>;
 export type SolubilityRecord = z.infer<typeof solubilityRecordSchema>;
+export type SolubilityProductRecord = z.infer<typeof solubilityProductRecordSchema>;
 export type HeatCapacityRecord = z.infer<typeof heatCapacityRecordSchema>;
 export type IonizationRecord = z.infer<typeof ionizationRecordSchema>;
 export type ElectronAffinityRecord = z.infer<typeof electronAffinityRecordSchema>;

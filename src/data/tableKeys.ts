@@ -18,6 +18,7 @@ export const tableKeys: { [N in TableName]: (record: TableRecord<N>) => string }
   'hydration-enthalpies.json': (r) => r.ion,
   'crystals.json': (r) => r.formula,
   'solubility.json': (r) => r.formula,
+  'solubility-products.json': (r) => r.mineral,
   'heat-capacities.json': (r) => `${r.formula}|${r.phase}`,
   'ionization-energies.json': (r) => `${r.element}|${r.stage}`,
   'electron-affinities.json': (r) => r.element,

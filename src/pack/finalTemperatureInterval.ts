@@ -10,6 +10,7 @@ import { quadrature } from '../quantity/propagate.js';
 import { fillEquilibrium, type Perturbation } from './fillEquilibrium.js';
 import type { PackIntervalOptions, PreparedFill } from './packFill.js';
 import { seededNormal } from './seededNormal.js';
+import { withSolubilityBounds } from './solubilityBounds.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
 
 /** One uncertain input of the balance. @internal */
@@ -133,6 +134,11 @@ export function heatCapacityRelativeU(fill: PreparedFill, solution: FillSolution
  * @internal
  */
 export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolution, options: PackIntervalOptions = { method: 'bounds' }): TemperatureInterval {
+  return withSolubilityBounds(fill, solution, propagatedInterval(fill, solution, options));
+}
+
+/** The interval from the enthalpies and the heat capacity alone (see {@link finalTemperatureInterval}). */
+function propagatedInterval(fill: PreparedFill, solution: FillSolution, options: PackIntervalOptions): TemperatureInterval {
   const t = solution.temperature;
   const inputs = uncertainInputs(fill, solution);
   const listed = inputs.map((i) => i.label).join(', ');

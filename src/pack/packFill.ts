@@ -19,6 +19,8 @@ import { widenEstimate } from '../solution/widenEstimate.js';
 import { aqueousHeatCapacity, waterSpecificHeat } from './solidHeatCapacity.js';
 import type { SolubilityCurve } from './solubilityCurve.js';
 import { packSaltData, type PackSaltData } from './packSaltData.js';
+import type { SolubilityStatus } from './saltSolubility.js';
+import { solubilityBoundsOf, solubilityNote, type SolubilityBounds } from './solubilityBounds.js';
 
 /** One solid of a fill. */
 export interface PackSolid {
@@ -100,6 +102,10 @@ export interface PreparedSolid {
   /** Standard uncertainty allowed for using the crystal's Cp° for the dissolved salt, J/(mol·K). */
   additivityU: number;
   curve: SolubilityCurve | undefined;
+  /** How well the solubility is known. */
+  solubilityStatus: SolubilityStatus;
+  /** The ends of an estimated or unknown solubility, for the interval. */
+  solubilityBounds: SolubilityBounds | undefined;
   /** Every equilibrium solid the curve names, by canonical formula. */
   phases: ReadonlyMap<string, PreparedPhase>;
 }
@@ -283,7 +289,9 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
       phases.set(formula, { formula, water: phase.salt.water, enthalpy: phaseEnthalpy, heatCapacity: phase.heatCapacity });
     }
     if (curve) sources.add(curve.source);
-    else notes.push(`no solubility data for ${salt.formula}: assumed to dissolve completely whatever the temperature`);
+    if (data.solubility.status === 'estimated') sources.add('solubilityEstimatePractice');
+    const solubilityText = solubilityNote(salt, data.solubility);
+    if (solubilityText) notes.push(solubilityText);
     for (const s of [...enthalpy.sources, ...heatCapacityLoaded.sources, ...heatCapacityAnhydrous.sources, ...(aq?.sources ?? [])]) sources.add(s);
 
     return {
@@ -298,6 +306,8 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
       heatCapacityAnhydrous,
       additivityU,
       curve,
+      solubilityStatus: data.solubility.status,
+      solubilityBounds: solubilityBoundsOf(salt, data.solubility),
       phases,
     };
   });

@@ -13,6 +13,7 @@ import type { FillEquilibrium } from './fillEquilibrium.js';
 import { packCautions } from './packCautions.js';
 import { preparePackFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
+import type { SolubilityStatus } from './saltSolubility.js';
 
 /** One solid at the end, grams of the solid as loaded unless said otherwise. */
 export interface PackDissolvedSolid {
@@ -25,7 +26,9 @@ export interface PackDissolvedSolid {
   undissolvedSolid: { formula: string; mass: number } | null;
   /** True when the solution ends saturated in this salt. */
   saturated: boolean;
-  /** Solubility at the final temperature, or null without solubility data (then the solid is taken to dissolve completely). */
+  /** How well the solubility is known: measured (table), estimated (solubility product) or unknown (then `solubility` is null and the interval spans none to all dissolved). */
+  solubilityStatus: SolubilityStatus;
+  /** Solubility at the final temperature, or null when unknown (the value is then the one with the solid all dissolved). */
   solubility: { value: number; unit: 'g/100 g H2O'; solidPhase: string; extrapolated: boolean; source: string; fromMemory: boolean } | null;
   /** The enthalpy of solution used, kJ/mol of the loaded formula, positive = endothermic. */
   enthalpyOfSolution: Estimate;
@@ -129,6 +132,7 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
       undissolvedMass,
       undissolvedSolid: solid,
       saturated: e.saturated,
+      solubilityStatus: s.solubilityStatus,
       solubility: e.solubility
         ? { value: e.solubility.value, unit: 'g/100 g H2O', solidPhase: e.solubility.phase, extrapolated: e.solubility.extrapolated, source: s.curve!.source, fromMemory: s.curve!.fromMemory }
         : null,

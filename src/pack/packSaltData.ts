@@ -13,7 +13,8 @@ import { isIonheatError } from '../error.js';
 import type { Estimate } from '../quantity/estimate.js';
 import { dissolve } from '../solution/dissolve.js';
 import { aqueousHeatCapacity, solidHeatCapacity } from './solidHeatCapacity.js';
-import { solubilityCurve, type SolubilityCurve } from './solubilityCurve.js';
+import type { SolubilityCurve } from './solubilityCurve.js';
+import { packSolubility, type PackSolubility } from './saltSolubility.js';
 
 /** An equilibrium solid of a salt's solubility curve. */
 export interface PackPhaseData {
@@ -35,7 +36,10 @@ export interface PackSaltData {
   heatCapacityAnhydrous: Estimate;
   /** Σν·Cp°(ion, aq) of the anhydrous salt, when every ion is tabulated. */
   aqueousHeatCapacity: Estimate | undefined;
+  /** The curve a fill dissolves against: measured, or a constant estimate from a solubility product; undefined when unknown. */
   curve: SolubilityCurve | undefined;
+  /** How well the solubility is known, and from where. */
+  solubility: PackSolubility;
   /** Every equilibrium solid of the curve, by canonical formula. */
   phases: ReadonlyMap<string, PackPhaseData>;
 }
@@ -45,7 +49,8 @@ function build(salt: Salt, dataset: Dataset): PackSaltData {
   const heatCapacity = solidHeatCapacity(salt, dataset);
   const anhydrousSalt = salt.water > 0 ? parseSalt(salt.anhydrous, dataset) : salt;
   const heatCapacityAnhydrous = salt.water > 0 ? solidHeatCapacity(anhydrousSalt, dataset) : heatCapacity;
-  const curve = solubilityCurve(salt, dataset);
+  const solubility = packSolubility(salt, dataset);
+  const curve = solubility.curve;
   const phases = new Map<string, PackPhaseData>();
   for (const point of curve?.points ?? []) {
     if (phases.has(point.phase)) continue;
@@ -62,7 +67,7 @@ function build(salt: Salt, dataset: Dataset): PackSaltData {
     }
     phases.set(point.phase, { salt: phaseSalt, enthalpy: phaseEnthalpy, heatCapacity: solidHeatCapacity(phaseSalt, dataset) });
   }
-  return { salt, anhydrousSalt, enthalpy, heatCapacity, heatCapacityAnhydrous, aqueousHeatCapacity: aqueousHeatCapacity(anhydrousSalt, dataset), curve, phases };
+  return { salt, anhydrousSalt, enthalpy, heatCapacity, heatCapacityAnhydrous, aqueousHeatCapacity: aqueousHeatCapacity(anhydrousSalt, dataset), curve, solubility, phases };
 }
 
 /**

@@ -193,3 +193,18 @@ export function solubilityAt(curve: SolubilityCurve, t: number): SolubilityAt {
   const near = t - p.t <= q.t - t ? p : q;
   return { value: value === 0 ? 0 : value, phase: near.phase, phaseWater: near.phaseWater === 0 ? 0 : near.phaseWater, extrapolated: t < pts[0]!.t || t > pts[n - 1]!.t };
 }
+
+/**
+ * A curve with the same solubility at every temperature a pack can reach
+ * (−100 to 200 °C), frozen and trusted like the table's curves: for a
+ * solubility estimated at one temperature, a user's single value, or the
+ * ends of a solubility's range in the interval of a fill.
+ * @internal
+ */
+export function constantSolubilityCurve(formula: string, value: number, phase: string, phaseWater: number, source: string, fromMemory: boolean): SolubilityCurve {
+  const points = [-100, 200].map((t) => Object.freeze({ t, value, phase, phaseWater, eutectic: false }));
+  const tableRange: [number, number] = Object.freeze([-100, 200]) as [number, number];
+  const curve: SolubilityCurve = Object.freeze({ formula, points: Object.freeze(points) as SolubilityPoint[], tableRange, source, fromMemory });
+  builtCurves.add(curve);
+  return curve;
+}

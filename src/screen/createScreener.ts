@@ -24,7 +24,7 @@ import { readCandidate, type CandidateInput, type CandidateLike } from './candid
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
 import { costPerKJ } from './costPerKJ.js';
 import { hazardSummary, type HazardSummary } from './hazardSummary.js';
-import { screenObjective, suitabilityOf, WARMER_OBJECTIVES } from './screenObjective.js';
+import { screenObjective, suitabilityOf, unknownSolubility, WARMER_OBJECTIVES } from './screenObjective.js';
 import { latentWarmer } from '../warmer/latentWarmer.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
 import { screenSources } from './screenSources.js';
@@ -396,6 +396,8 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       const base = { ...result, ...(cost ? { costPerKJ: cost } : {}), ...(pack ? { fill: pack } : {}), ...(warmerRow ? { warmer: warmerRow } : {}) };
       const objectiveValue = screenObjective(objective, base);
       if (objective === 'cost-per-kj' && input.pricePerKg === undefined) notes.push('no price per kg given, so no cost per kJ to rank by');
+      const unknown = pack ? unknownSolubility(pack) : undefined;
+      if (objective === 'fill-temperature' && unknown !== undefined) notes.push(`not ranked by the fill: the solubility of ${pack!.dissolved[unknown]!.formula} is unknown, so the fill may reach anything from its start to its full-dissolution temperature; give a solubility (g per 100 g water) with the candidate to rank it`);
       const row: ScreenRow = {
         line: at,
         status: 'computed',

@@ -12,7 +12,7 @@ import type { Direction, ObjectiveName, Suitability } from './screenRow.js';
 export interface ObjectiveSource {
   best: Estimate;
   perGram: { salt: Estimate };
-  fill?: { finalTemperature: { value: number; low: number; high: number } };
+  fill?: { finalTemperature: { value: number; low: number; high: number }; dissolved?: readonly { solubilityStatus?: string }[] };
   costPerKJ?: Estimate;
   warmer?: { plateau: Estimate; heatPerGram: Estimate; plateauDuration: Estimate };
 }
@@ -27,7 +27,9 @@ export const WARMER_OBJECTIVES: ReadonlySet<ObjectiveName> = new Set(['plateau-t
  * 1.96, the interval kept as the pack model gives it), the cost per kJ, or
  * the standard warmer's plateau temperature (°C), heat per gram of fill (J/g)
  * or plateau duration (s). Undefined when the row lacks what the objective
- * needs (no fill, no price, no warmer data).
+ * needs (no fill, no price, no warmer data, or a fill of a salt whose
+ * solubility is unknown: how far it cools or warms then depends on a number
+ * nobody has).
  *
  * @example
  * ```ts
@@ -51,7 +53,7 @@ export function screenObjective(name: ObjectiveName, row: ObjectiveSource): Esti
       return row.warmer?.plateauDuration;
     case 'fill-temperature': {
       const t = row.fill?.finalTemperature;
-      if (!t) return undefined;
+      if (!t || unknownSolubility(row.fill!) !== undefined) return undefined;
       return makeEstimate({
         quantity: 'temperature the standard fill reaches',
         value: t.value,
@@ -65,6 +67,20 @@ export function screenObjective(name: ObjectiveName, row: ObjectiveSource): Esti
       });
     }
   }
+}
+
+/**
+ * The index of the first solid of a fill whose solubility is unknown, or
+ * undefined when every solubility is measured or estimated.
+ *
+ * @example
+ * ```ts
+ * unknownSolubility({ dissolved: [{ solubilityStatus: 'measured' }, { solubilityStatus: 'unknown' }] }); // 1
+ * ```
+ */
+export function unknownSolubility(fill: { dissolved?: readonly { solubilityStatus?: string }[] }): number | undefined {
+  const i = fill.dissolved?.findIndex((d) => d.solubilityStatus === 'unknown') ?? -1;
+  return i < 0 ? undefined : i;
 }
 
 /**

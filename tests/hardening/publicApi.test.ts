@@ -115,6 +115,7 @@ const cases: Record<string, Case> = {
   ionHydrationEnthalpy: { samples: () => [['Na[+]'], ['SO4[2-]', 'conventional']], userArgs: 2 },
   bornHydrationEnthalpy: { samples: () => [['Na[+]', {}], ['Cl[-]', { excludeIon: 'Cl[-]' }]], userArgs: 2, runs: 40 },
   gaseousIonFormationEnthalpy: { samples: () => [['Na[+]'], ['Cl[-]']], userArgs: 1 },
+  solubilityFromProduct: { samples: () => [[-9.7453, 1, 1, 1, 1], [-34.2293, 1, 3, 3, -1]], userArgs: 5 },
   // The enthalpy of solution
   dissolve: { samples: () => [['NH4NO3', {}], ['CaCl2·6H2O', { excludeMeasured: true, temperatureC: 10 }], [s().salt, { temperatureC: 25 }, mine]], userArgs: 2, runs: 80 },
   solutionVerdict: { samples: () => [[s().estimate]], userArgs: 1 },
@@ -139,6 +140,7 @@ const cases: Record<string, Case> = {
   saltHazards: { samples: () => [['NH4NO3'], [s().salt]], userArgs: 1 },
   solubilityCurve: { samples: () => [['KNO3'], [s().hydrate]], userArgs: 1 },
   solubilityAt: { samples: () => [[s().curveKNO3, 25], [s().curveKNO3, 80]], userArgs: 2 },
+  saltSolubility: { samples: () => [['KNO3', 20], ['AgCl'], ['ScF3', 80], [s().hydrate, 25]], userArgs: 2 },
   freezingPointOfSolution: { samples: () => [[0.2, 100]], userArgs: 2 },
   // Latent-heat warmers
   latentWarmer: { samples: () => [[{ salt: 'Na2S2O3·5H2O', massG: 50, startC: 22 }, { samples: 20 }], [{ salt: 'NaCH3COO·3H2O', massG: 20, extraWaterG: 2, containerJPerK: 5 }, { ambientC: 10, ambientConductanceWPerK: 0.3, skinC: 30, skinConductanceWPerK: 0, durationS: 600, samples: 10 }]], userArgs: 2, runs: 40 },

@@ -125,7 +125,7 @@ const rankOrder = (rows: readonly ScreenRow[]): ScreenRow[] => [...rows].sort((a
 function remarks(r: ScreenRow): string {
   const parts: string[] = [...(r.hazards ?? [])];
   if (r.input.measuredEnthalpy !== undefined) parts.push('own measured ΔsolH');
-  if (r.fill?.notes.some((n) => n.startsWith('no solubility data'))) parts.push('no solubility data: assumed to dissolve fully');
+  if (r.fill?.notes.some((n) => n.startsWith('no solubility data'))) parts.push('solubility unknown: the fill is given as if it all dissolved, its interval reaching to none dissolved');
   return parts.join(', ');
 }
 

@@ -129,7 +129,9 @@ function jsonReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
       undissolvedMass: r(d.undissolvedMass, 4),
       undissolvedSolid: d.undissolvedSolid ? { formula: d.undissolvedSolid.formula, mass: r(d.undissolvedSolid.mass, 4) } : null,
       saturated: d.saturated,
-      solubility: d.solubility ? { ...d.solubility, value: r(d.solubility.value, 3) } : null,
+      solubilityStatus: d.solubilityStatus,
+      // three decimals, or three significant digits for a sparingly soluble salt
+      solubility: d.solubility ? { ...d.solubility, value: d.solubility.value < 1 ? Number(d.solubility.value.toPrecision(3)) : r(d.solubility.value, 3) } : null,
       enthalpyOfSolution: { value: d.enthalpyOfSolution.value, u: d.enthalpyOfSolution.u, unit: 'kJ/mol', basis: d.enthalpyOfSolution.basis, sources: d.enthalpyOfSolution.sources },
       heat: r(d.heat, 4),
     })),

@@ -78,6 +78,7 @@ const QUANTITY: Record<string, string> = {
   ionCompositionShannon: 'composition and charge',
   moleculeCompositionCrc: 'composition',
   hydrationCycle: 'cycle: aqueous ion, proton, gaseous ion',
+  solubilityProductLlnl: 'log K as written in llnl.dat',
 };
 
 /** 5/2 RT at 298.15 K, kJ/mol: the enthalpy of the thermal electron (electron convention minus ion convention, per unit of charge). */
@@ -93,6 +94,12 @@ export const FAMILIES: Record<string, Family> = {
     table: 'compound-formation.json',
     reference: 'chemicals-crc-thermo',
     why: 'ΔfH°(cr, l): the CRC table reproduces NBS/CODATA values rounded to 0.1 kJ/mol; 0.5 kJ/mol or 0.05 % (whichever is larger) covers that rounding and the last-digit revisions between CRC editions, far below the 1 kJ/mol default uncertainty of the table.',
+  },
+  solubilityProductLlnl: {
+    name: 'solubilityProductLlnl',
+    table: 'solubility-products.json',
+    reference: 'phreeqc-llnl-phases',
+    why: 'log K of the dissolution reaction as llnl.dat writes it, matched by phase name: both are read from the same file by two separate scripts, printed to 4 decimals, so 0.0001 covers the rounding; this checks the transcription, not the thermodynamics.',
   },
   formationLlnl: {
     name: 'formationLlnl',
@@ -560,6 +567,12 @@ export function crossChecks(tables: Record<string, any>, refs: Record<string, Re
     }
     if (!Number.isFinite(sum)) return;
     add('solutionClosureCrc', i, r, r.formula, r.value, Number(sum.toFixed(3)), 0.5, labels.join(' + '));
+  });
+  // Solubility products: log K of each phase as llnl.dat writes its reaction, by phase name.
+  const llnlByPhase = group(refs['phreeqc-llnl-phases']!.records, (r) => r.phase);
+  (tables['solubility-products.json']?.records ?? []).forEach((r: any, i: number) => {
+    const l = one(llnlByPhase.get(r.mineral));
+    if (l && l.logK != null && l.reaction === r.reaction) add('solubilityProductLlnl', i, r, `${r.formula} (${r.mineral})`, r.logK, l.logK, 0.0001, `${l.phase}: ${l.reaction}`);
   });
   // Where the CRC copies cannot close the cycle: llnl.dat's enthalpy of a plain dissolution (solid = its ions + water).
   const closed = new Set(checks.filter((c) => c.family === 'solutionClosureCrc').map((c) => c.index));
