@@ -92,7 +92,7 @@ const CAUTION = 'Screening estimates: confirm by measurement; they defer to loca
 export const SCREEN_TABLE_COLUMNS = 120;
 
 /** Longest cell kept in the table for the salt, the hazards and the spec; longer text becomes a numbered note. */
-const CELL_LIMIT = { salt: 16, hazards: 22, spec: 6 } as const;
+const CELL_LIMIT = { salt: 16, objective: 28, hazards: 22, spec: 6 } as const;
 
 /**
  * A plain-text table of collected rows (in the order given), no wider than {@link SCREEN_TABLE_COLUMNS}: formulas
@@ -115,6 +115,10 @@ export function textTableOf(rows: readonly ScreenRow[], settings: ScreenSettings
     if ([...salt].length > CELL_LIMIT.salt) {
       moved.push(`salt ${salt}`);
       cells[2] = `${[...salt].slice(0, CELL_LIMIT.salt - 1).join('')}…`;
+    }
+    if ([...cells[3]!].length > CELL_LIMIT.objective) {
+      moved.push(`${settings.objective} ${cells[3]}`);
+      cells[3] = `${[...cells[3]!.split(' [')[0]!].slice(0, CELL_LIMIT.objective - 2).join('')} …`;
     }
     if ([...cells[hazardsAt]!].length > CELL_LIMIT.hazards) {
       moved.push(`hazards: ${cells[hazardsAt]}`);
