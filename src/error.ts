@@ -22,9 +22,11 @@ export const errorCodes = [
   'MISSING_DATA',
   'NOT_APPLICABLE',
   'INVALID_ARGUMENT',
+  'INVALID_OPTION',
   'INVALID_DATA',
   'INVALID_EXPRESSION',
   'NO_SOLUTION',
+  'SUSPECTED_TYPO',
 ] as const;
 
 export type ErrorCode = (typeof errorCodes)[number];
@@ -33,7 +35,7 @@ export type ErrorCode = (typeof errorCodes)[number];
 export interface ErrorContext {
   /** The offending text (the whole formula, or the field's value). */
   text?: string;
-  /** Zero-based character position in `text`, where it makes sense. */
+  /** Zero-based character position in `text`, where it makes sense (messages count from 1, as people do). */
   position?: number;
   /** A field, file, record or argument name the problem belongs to. */
   field?: string;

@@ -23,6 +23,7 @@ export * as constants from './quantity/constants.js';
 
 // Data
 export { Dataset, type Tables, type TableOverrides } from './data/dataset.js';
+export type { BoundedCache } from './data/boundedCache.js';
 export { builtinDataset } from './data/builtin.js';
 export * as schemas from './data/schemas.js';
 export { tableSchemas, type TableName, type TableRecord, type TableFile, type IonRecord, type SourceEntry, type StructureType, type HazardClass, type HazardRecord } from './data/schemas.js';
@@ -82,9 +83,10 @@ export { packFinalTemperature, type PackResult, type PackDissolvedSolid, type Pa
 export { DEFAULT_START_C, type PackFill, type PackSolid, type PackOptions, type PackIntervalOptions } from './pack/packFill.js';
 export type { TemperatureInterval } from './pack/finalTemperatureInterval.js';
 export { packRatioCurve, ratioForTargetTemperature, ratioForLargestChangePerGram, type PackRatioCurve, type PackCurvePoint, type PackDesignPoint, type PackTargetDesign, type PackCurveOptions } from './pack/packRatioCurve.js';
+export { packDesignMargin, FROSTBITE_THRESHOLD_C, type PackDesignMargin, type TemperatureBand } from './pack/designMargin.js';
 export { packTimeCourse, type PackTimeCourse, type TimeCourseOptions, type TimeCourseParameter, type TimeCoursePoint } from './pack/packTimeCourse.js';
 export { packCautions, CONTACT_BURN_THRESHOLD_C, SCREENING_LINE, type CautionInput } from './pack/packCautions.js';
-export { saltHazards } from './pack/saltHazards.js';
+export { saltHazards, hazardCoverage, type HazardCoverage } from './pack/saltHazards.js';
 export { solubilityCurve, solubilityAt, type SolubilityCurve, type SolubilityPoint, type SolubilityAt } from './pack/solubilityCurve.js';
 export { saltSolubility, type SaltSolubility, type SolubilityStatus } from './pack/saltSolubility.js';
 export { freezingPointOfSolution, WATER_CRYOSCOPIC_CONSTANT } from './pack/freezingPoint.js';

@@ -63,9 +63,9 @@ function readCount(text: string, i: number, to: number): { count: number; next: 
   while (j < to && isDigit(text[j]!)) j++;
   if (j === i) return { count: 1, next: i };
   const digits = text.slice(i, j);
-  if (digits.length > 3 || Number(digits) > MAX_COUNT) fail('BAD_COUNT', `the count ${digits.length > 12 ? digits.slice(0, 12) + '…' : digits} at position ${i} is too large (at most ${MAX_COUNT})`, text, i);
+  if (digits.length > 3 || Number(digits) > MAX_COUNT) fail('BAD_COUNT', `the count ${digits.length > 12 ? digits.slice(0, 12) + '…' : digits} at position ${i + 1} is too large (at most ${MAX_COUNT})`, text, i);
   const count = Number(digits);
-  if (count === 0) fail('BAD_COUNT', `a count of zero at position ${i} means the atom or group is absent; leave it out`, text, i);
+  if (count === 0) fail('BAD_COUNT', `a count of zero at position ${i + 1} means the atom or group is absent; leave it out`, text, i);
   return { count, next: j };
 }
 
@@ -124,32 +124,32 @@ function readUnits(text: string, from: number, to: number): FormulaUnit[] {
       top.units.push({ kind: 'element', symbol, count, start: i, end: next });
       i = next;
     } else if (c === '(' || c === '[') {
-      if (stack.length > MAX_NESTING) fail('NESTING_TOO_DEEP', `parentheses are nested more than ${MAX_NESTING} deep at position ${i}`, text, i);
+      if (stack.length > MAX_NESTING) fail('NESTING_TOO_DEEP', `parentheses are nested more than ${MAX_NESTING} deep at position ${i + 1}`, text, i);
       stack.push({ units: [], open: c, start: i });
       i++;
     } else if (c === ')' || c === ']') {
       const expected = c === ')' ? '(' : '[';
       if (stack.length === 1 || top.open !== expected) {
-        fail('UNMATCHED_PARENTHESIS', `the "${c}" at position ${i} closes nothing${stack.length > 1 ? ` (the "${top.open}" at position ${top.start} is still open)` : ''}`, text, i);
+        fail('UNMATCHED_PARENTHESIS', `the "${c}" at position ${i + 1} closes nothing${stack.length > 1 ? ` (the "${top.open}" at position ${top.start + 1} is still open)` : ''}`, text, i);
       }
-      if (top.units.length === 0) fail('UNMATCHED_PARENTHESIS', `the parentheses at position ${top.start} enclose nothing`, text, top.start);
+      if (top.units.length === 0) fail('UNMATCHED_PARENTHESIS', `the parentheses at position ${top.start + 1} enclose nothing`, text, top.start);
       stack.pop();
       const { count, next } = readCount(text, i + 1, to);
       stack[stack.length - 1]!.units.push({ kind: 'group', units: top.units, count, start: top.start, end: next });
       i = next;
     } else if (isDigit(c)) {
-      fail('UNEXPECTED_CHARACTER', i === from ? `a formula cannot start with a count ("${c}" at position ${i}); write one formula unit` : `the count at position ${i} follows nothing it could multiply`, text, i);
+      fail('UNEXPECTED_CHARACTER', i === from ? `a formula cannot start with a count ("${c}" at position ${i + 1}); write one formula unit` : `the count at position ${i + 1} follows nothing it could multiply`, text, i);
     } else if (isLower(c)) {
-      fail('UNEXPECTED_CHARACTER', `element symbols start with a capital letter ("${c}" at position ${i})`, text, i);
+      fail('UNEXPECTED_CHARACTER', `element symbols start with a capital letter ("${c}" at position ${i + 1})`, text, i);
     } else if (c === '+' || c === '-' || c === '−' || c === '^') {
-      fail('UNEXPECTED_CHARACTER', `charges are not written in a salt formula ("${c}" at position ${i}); write the neutral salt, e.g. NaCl`, text, i);
+      fail('UNEXPECTED_CHARACTER', `charges are not written in a salt formula ("${c}" at position ${i + 1}); write the neutral salt, e.g. NaCl`, text, i);
     } else {
-      fail('UNEXPECTED_CHARACTER', `unexpected character "${c}" at position ${i}`, text, i);
+      fail('UNEXPECTED_CHARACTER', `unexpected character "${c}" at position ${i + 1}`, text, i);
     }
   }
   if (stack.length > 1) {
     const open = stack[stack.length - 1]!;
-    fail('UNMATCHED_PARENTHESIS', `the "${open.open}" at position ${open.start} is never closed`, text, open.start);
+    fail('UNMATCHED_PARENTHESIS', `the "${open.open}" at position ${open.start + 1} is never closed`, text, open.start);
   }
   return stack[0]!.units;
 }
@@ -159,7 +159,7 @@ function readWater(text: string, at: number): number {
   let total = 0;
   let i = at;
   while (i < text.length) {
-    if (!HYDRATE_SEPARATORS.has(text[i]!)) fail('UNEXPECTED_CHARACTER', `expected a dot before the water at position ${i}`, text, i);
+    if (!HYDRATE_SEPARATORS.has(text[i]!)) fail('UNEXPECTED_CHARACTER', `expected a dot before the water at position ${i + 1}`, text, i);
     i++;
     const start = i;
     while (i < text.length && (isDigit(text[i]!) || text[i] === '.')) i++;
@@ -167,12 +167,12 @@ function readWater(text: string, at: number): number {
     let n = 1;
     if (numberText.length > 0) {
       n = Number(numberText);
-      if (!Number.isFinite(n) || numberText.length > 6 || numberText.split('.').length > 2) fail('BAD_COUNT', `"${numberText}" at position ${start} is not a count of water molecules`, text, start);
-      if (n <= 0) fail('BAD_COUNT', `a hydrate needs a positive count of water, got ${numberText} at position ${start}`, text, start);
-      if (n > 100) fail('BAD_COUNT', `${numberText} waters of crystallization at position ${start} is more than any real hydrate holds (at most 100)`, text, start);
+      if (!Number.isFinite(n) || numberText.length > 6 || numberText.split('.').length > 2) fail('BAD_COUNT', `"${numberText}" at position ${start + 1} is not a count of water molecules`, text, start);
+      if (n <= 0) fail('BAD_COUNT', `a hydrate needs a positive count of water, got ${numberText} at position ${start + 1}`, text, start);
+      if (n > 100) fail('BAD_COUNT', `${numberText} waters of crystallization at position ${start + 1} is more than any real hydrate holds (at most 100)`, text, start);
     }
     if (text.slice(i, i + 3) !== 'H2O') {
-      fail('UNEXPECTED_CHARACTER', `only water of crystallization (H2O) may follow the dot, at position ${i}`, text, i);
+      fail('UNEXPECTED_CHARACTER', `only water of crystallization (H2O) may follow the dot, at position ${i + 1}`, text, i);
     }
     i += 3;
     total += n;

@@ -30,11 +30,11 @@ export function saltArgument(value: unknown, dataset: Dataset = builtinDataset()
   if (typeof formula !== 'string') {
     throw new IonheatError('INVALID_ARGUMENT', `${field} must be a formula (such as "KNO3") or a salt from parseSalt, got ${typeof value === 'object' && value !== null && !Array.isArray(value) ? 'an object without a formula' : describeValue(value)}`, { field });
   }
-  const cache = dataset.memo('chem.saltArgument', () => new Map<string, Salt>());
+  const cache = dataset.cache<string, Salt>('chem.saltArgument', CACHE_LIMIT);
   let salt = cache.get(formula);
   if (!salt) {
     salt = parseSalt(formula, dataset);
-    if (cache.size < CACHE_LIMIT) cache.set(formula, salt);
+    cache.set(formula, salt);
   }
   // Frozen by parseSalt, so the cached salt can be handed out as it is.
   return salt;

@@ -4,7 +4,7 @@
  * @module
  */
 import { saltArgument } from '../chem/saltArgument.js';
-import { describeValue, numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
+import { describeValue, numberArgument, optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -19,6 +19,8 @@ import { elementSteps, gaseousIon } from './gaseousIon.js';
 import { ionText } from '../notation/charge.js';
 import { formulaText } from '../notation/formula.js';
 import { thermalElectronEnthalpy } from './thermalElectronEnthalpy.js';
+
+const BORN_HABER_OPTIONS = optionNames<BornHaberOptions>('bornHaberCycle', { solve: true, latticeEnthalpy: true, formationEnthalpy: true });
 
 /** What a cycle can be solved for. */
 export type CycleUnknown = 'lattice' | 'formation' | 'electron-affinity';
@@ -137,7 +139,7 @@ function affinityUnknown(salt: Salt, dataset: Dataset): { ion: string; element: 
  */
 export function bornHaberCycle(salt: Salt | string, options: BornHaberOptions = {}, dataset: Dataset = builtinDataset()): BornHaberCycle {
   const s = saltArgument(salt, dataset);
-  options = optionsArgument(options);
+  options = optionsArgument(options, BORN_HABER_OPTIONS);
   checkKnown(options.latticeEnthalpy, 'latticeEnthalpy');
   checkKnown(options.formationEnthalpy, 'formationEnthalpy');
   const solve = options.solve ?? 'lattice';

@@ -4,7 +4,7 @@
  * @module
  */
 import { saltArgument } from '../chem/saltArgument.js';
-import { optionsArgument } from '../quantity/argumentChecks.js';
+import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -14,6 +14,8 @@ import { exactSum } from '../quantity/exactSum.js';
 import { linearUncertainty } from '../quantity/propagate.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { gaseousIon } from './gaseousIon.js';
+
+const CYCLE_LATTICE_OPTIONS = optionNames<CycleLatticeOptions>('cycleLatticeEnthalpy', { hideCrystal: true });
 
 /** Options of {@link cycleLatticeEnthalpy}. */
 export interface CycleLatticeOptions {
@@ -44,19 +46,18 @@ export interface CycleLatticeOptions {
  */
 export function cycleLatticeEnthalpy(salt: Salt | string, dataset: Dataset = builtinDataset(), options: CycleLatticeOptions = {}): Estimate | undefined {
   const s = saltArgument(salt, dataset);
-  options = optionsArgument(options);
+  options = optionsArgument(options, CYCLE_LATTICE_OPTIONS);
   if (s.kind !== 'ionic' || s.water > 0 || options.hideCrystal) return undefined;
-  const cache = dataset.memo('cycle.latticeCache', () => new Map<string, Estimate | null>());
+  const cache = dataset.cache<string, Estimate | null>('cycle.latticeCache', CACHE_LIMIT);
   let hit = cache.get(s.formula);
   if (hit === undefined) {
     hit = compute(s, dataset) ?? null;
-    if (cache.size >= CACHE_LIMIT) cache.clear();
     cache.set(s.formula, hit);
   }
   return hit === null ? undefined : { ...hit, sources: hit.sources.slice(), notes: hit.notes.slice() };
 }
 
-/** Most results kept per dataset; the cache starts afresh when full. */
+/** Most results kept per dataset (a bounded cache: those not used for longest go first). */
 const CACHE_LIMIT = 20_000;
 
 function compute(s: Salt, dataset: Dataset): Estimate | undefined {

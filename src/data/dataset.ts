@@ -9,6 +9,11 @@
 import { IonheatError } from '../error.js';
 import { tableSchemas, type SourceEntry, type TableFile, type TableName, type TableRecord } from './schemas.js';
 import { tableKeys } from './tableKeys.js';
+import { BoundedCache } from './boundedCache.js';
+
+/** Entries a per-dataset cache holds by default: salts, formulas or results kept per key. */
+export const DATASET_CACHE_LIMIT = 4096;
+import { didYouMean } from '../quantity/nearestName.js';
 
 /** Every table by file name; a dataset may lack some. */
 export type Tables = { [N in TableName]?: TableFile<N> };
@@ -45,6 +50,8 @@ export class Dataset {
   readonly #tables: Tables;
   readonly #sources: Readonly<Record<string, SourceEntry>>;
   readonly #memo = new Map<string, unknown>();
+  /** Which override set gave a user's source key (`source:key`) or record (`table:key`). */
+  readonly #origins: ReadonlyMap<string, string>;
   /** Where the tables came from, for messages: `built-in`, or the override files' names. */
   readonly label: string;
 
@@ -55,11 +62,13 @@ export class Dataset {
    * @param tables - table envelopes by file name (`'ions.json'`…), already valid against their schemas
    * @param sources - citations by source key
    * @param label - where the tables came from, for messages
+   * @param origins - which override set gave each user source (`source:key`) and record (`table:key`)
    */
-  constructor(tables: Tables, sources: Readonly<Record<string, SourceEntry>>, label = 'built-in') {
+  constructor(tables: Tables, sources: Readonly<Record<string, SourceEntry>>, label = 'built-in', origins: ReadonlyMap<string, string> = new Map()) {
     this.#tables = deepFreeze({ ...tables });
     this.#sources = deepFreeze({ ...sources });
     this.label = label;
+    this.#origins = origins;
   }
 
   /** The records of one table, in table order; empty when the dataset lacks the table. */
@@ -104,6 +113,15 @@ export class Dataset {
   }
 
   /**
+   * A cache kept for the dataset's life under `key`, holding at most `limit`
+   * entries (a `BoundedCache`): per-salt and per-formula results go here,
+   * so that memory stays flat however many distinct salts a run brings.
+   */
+  cache<K, V>(key: string, limit: number = DATASET_CACHE_LIMIT): BoundedCache<K, V> {
+    return this.memo(key, () => new BoundedCache<K, V>(limit));
+  }
+
+  /**
    * A new dataset with a user's records merged over this one's: a record
    * whose key (formula, ion, element…) matches a built-in record replaces it;
    * others are added. This dataset is not changed.
@@ -114,7 +132,11 @@ export class Dataset {
    *
    * @param overrides - records per table
    * @param label - where the records came from (a file name), for messages
-   * @param sources - extra citations the records refer to
+   * @param sources - extra citations the records refer to; a built-in source key cannot be redefined, nor a key an
+   *   earlier override set gave with another citation
+   * @param checks - `problems` the caller already found in the same file (plausibility, file shape), reported
+   *   together with these, so that every problem of a file is named in one error; `refuseConflicts`: refuse a
+   *   record an earlier override set gave with other values (files read one after another), instead of replacing it
    * @example
    * ```ts
    * const mine = builtinDataset().withOverrides(
@@ -126,24 +148,84 @@ export class Dataset {
    * measuredSolutionEnthalpy(parseSalt('KNO3')).value; // 34.89 (the built-in table is unchanged)
    * ```
    */
-  withOverrides(overrides: TableOverrides, label: string, sources: Record<string, SourceEntry> = {}): Dataset {
+  withOverrides(overrides: TableOverrides, label: string, sources: Record<string, SourceEntry> = {}, checks: { problems?: readonly OverrideProblem[]; refuseConflicts?: boolean } = {}): Dataset {
     if (overrides === null || typeof overrides !== 'object' || Array.isArray(overrides)) {
       throw new IonheatError('INVALID_DATA', `${label}: an override set is an object keyed by table name`, { field: label });
     }
+    const found: OverrideProblem[] = [...(checks.problems ?? [])];
+    const origins = new Map(this.#origins);
     const mergedSources: Record<string, SourceEntry> = { ...this.#sources };
-    for (const [key, entry] of Object.entries(sources)) mergedSources[key] = entry;
+    for (const [key, entry] of Object.entries(sources)) {
+      if (Object.hasOwn(this.#sources, key)) {
+        const earlier = this.#origins.get(`source:${key}`);
+        if (earlier === undefined) {
+          found.push({ field: `sources.${key}`, message: `source key "${key}" is a built-in source (${shortText(this.#sources[key]!.citation)}); give your source a key of its own, such as "${key}Mine"` });
+          continue;
+        }
+        if (JSON.stringify(this.#sources[key]) !== JSON.stringify(entry)) {
+          found.push({ field: `sources.${key}`, message: `source key "${key}" is already defined by ${earlier} with another citation; use one key per source across your files` });
+          continue;
+        }
+      }
+      mergedSources[key] = entry;
+      origins.set(`source:${key}`, label);
+    }
     const tables: Tables = { ...this.#tables };
     for (const name of Object.keys(overrides)) {
       if (!Object.hasOwn(tableSchemas, name)) {
-        throw new IonheatError('INVALID_DATA', `${label}: "${name}" is not a table ionheat knows (known: ${Object.keys(tableSchemas).join(', ')})`, { field: name });
+        found.push({ field: name, message: `"${name}" is not a table ionheat knows${didYouMean(name, Object.keys(tableSchemas))} (known: ${Object.keys(tableSchemas).join(', ')})` });
+        continue;
       }
       const tableName = name as TableName;
       const incoming = overrides[tableName];
-      if (!Array.isArray(incoming)) throw new IonheatError('INVALID_DATA', `${label}: table "${name}" must be a list of records`, { field: name });
-      tables[tableName] = mergeTable(tableName, this.#tables[tableName], incoming, label, mergedSources) as never;
+      if (!Array.isArray(incoming)) {
+        found.push({ field: name, message: `table "${name}" must be a list of records` });
+        continue;
+      }
+      tables[tableName] = mergeTable(tableName, this.#tables[tableName], incoming, label, mergedSources, origins, found, checks.refuseConflicts === true) as never;
     }
-    return new Dataset(tables, mergedSources, this.label === 'built-in' ? `built-in + ${label}` : `${this.label} + ${label}`);
+    if (found.length > 0) throw overrideError(label, found);
+    return new Dataset(tables, mergedSources, this.label === 'built-in' ? `built-in + ${label}` : `${this.label} + ${label}`, origins);
   }
+
+  /**
+   * The override set (file name) that gave this source key, or undefined for
+   * a built-in source: so that results can say "your value".
+   *
+   * @param key - a source key of this dataset
+   */
+  userSource(key: string): string | undefined {
+    return this.#origins.get(`source:${key}`);
+  }
+}
+
+/** One problem of an override set: the field it concerns and what is wrong, without the file name. */
+export interface OverrideProblem {
+  field: string;
+  message: string;
+}
+
+/** Most problems listed in one error; the rest are counted. */
+const MAX_LISTED_PROBLEMS = 25;
+
+/** One `INVALID_DATA` error naming every problem of an override set at once. @internal */
+export function overrideError(label: string, problems: readonly OverrideProblem[]): IonheatError {
+  const shown = problems.slice(0, MAX_LISTED_PROBLEMS);
+  const more = problems.length - shown.length;
+  const text = problems.length === 1 ? problems[0]!.message : `${problems.length} problems: ${shown.map((p, i) => `(${i + 1}) ${p.message}`).join('; ')}${more > 0 ? `; and ${more} more` : ''}`;
+  return new IonheatError('INVALID_DATA', `${label}: ${text}`, { field: problems[0]?.field ?? label });
+}
+
+const shortText = (text: string): string => (text.length > 60 ? `${text.slice(0, 59)}…` : text);
+
+/** How a record is named in messages: its formula, ion, element or id, as the table keys it. @internal */
+export function recordName(record: unknown): string {
+  if (record === null || typeof record !== 'object') return '';
+  for (const key of ['formula', 'ion', 'id', 'symbol', 'element', 'subject', 'structure', 'core', 'molecule']) {
+    const v = (record as Record<string, unknown>)[key];
+    if (typeof v === 'string') return ` (${v.length > 40 ? `${v.slice(0, 40)}…` : v})`;
+  }
+  return '';
 }
 
 function mergeTable<N extends TableName>(
@@ -152,25 +234,41 @@ function mergeTable<N extends TableName>(
   incoming: readonly unknown[],
   label: string,
   sources: Record<string, SourceEntry>,
+  origins: Map<string, string>,
+  problems: OverrideProblem[],
+  refuseConflicts: boolean,
 ): TableFile<N> {
   const recordSchema = tableSchemas[name].shape.records.element;
   const keyOf = tableKeys[name] as (r: TableRecord<N>) => string;
   const seen = new Set<string>();
-  const parsed: TableRecord<N>[] = incoming.map((raw, i) => {
+  const earlier = new Map((base?.records ?? []).map((r) => [keyOf(r as TableRecord<N>), r]));
+  const parsed: TableRecord<N>[] = [];
+  incoming.forEach((raw, i) => {
+    const where = `${name} record ${i + 1}${recordName(raw)}`;
     const result = recordSchema.safeParse(raw);
     if (!result.success) {
-      const issue = result.error.issues[0]!;
-      const field = issue.path.join('.') || '(record)';
-      throw new IonheatError('INVALID_DATA', `${label}: ${name} record ${i + 1}, field "${field}": ${issue.message}`, { field: `${name}[${i}].${field}` });
+      const fields = result.error.issues.map((issue) => `field "${issue.path.join('.') || '(record)'}": ${issue.message}`);
+      problems.push({ field: `${name}[${i}].${result.error.issues[0]!.path.join('.') || '(record)'}`, message: `${where}, ${fields.join(', ')}` });
+      return;
     }
     const record = result.data as TableRecord<N>;
     const key = keyOf(record);
-    if (seen.has(key)) throw new IonheatError('INVALID_DATA', `${label}: ${name} record ${i + 1} repeats the key "${key}" of an earlier record`, { field: `${name}[${i}]` });
+    if (seen.has(key)) {
+      problems.push({ field: `${name}[${i}]`, message: `${where} repeats the key "${key}" of an earlier record` });
+      return;
+    }
     seen.add(key);
     if (!Object.hasOwn(sources, record.source)) {
-      throw new IonheatError('INVALID_DATA', `${label}: ${name} record ${i + 1} cites source "${record.source}", which is neither built in nor given with the overrides`, { field: `${name}[${i}].source` });
+      problems.push({ field: `${name}[${i}].source`, message: `${where} cites source "${record.source}", which is neither built in nor given with the overrides${didYouMean(record.source, Object.keys(sources))}` });
+      return;
     }
-    return record;
+    const givenBy = origins.get(`${name}:${key}`);
+    if (refuseConflicts && givenBy !== undefined && givenBy !== label && JSON.stringify(earlier.get(key)) !== JSON.stringify(record)) {
+      problems.push({ field: `${name}[${i}]`, message: `${where} is also given by ${givenBy}, with other values; keep it in one file (a later file would silently win)` });
+      return;
+    }
+    origins.set(`${name}:${key}`, label);
+    parsed.push(record);
   });
   const replaced = new Map(parsed.map((r) => [keyOf(r), r]));
   const kept = (base?.records ?? []).filter((r) => !replaced.has(keyOf(r as TableRecord<N>)));

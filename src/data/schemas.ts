@@ -60,7 +60,7 @@ function table<T extends z.ZodType>(record: T, extra: z.ZodRawShape = {}) {
 
 export const sourceSchema = z.strictObject({
   citation: z.string().min(1),
-  kind: z.enum(['book', 'journal', 'database', 'software', 'standard', 'commonPractice', 'derived', 'invented']),
+  kind: z.enum(['book', 'journal', 'database', 'software', 'standard', 'commonPractice', 'derived', 'invented', 'inHouse']),
   url: z.string().optional(),
   note: z.string().optional(),
 });
@@ -316,7 +316,8 @@ export const hazardClassSchema = z.enum([
 export const hazardRecordSchema = z.strictObject({
   /** A salt formula, or an ion id where the hazard follows the ion (every chromate). */
   subject: z.string().min(1).max(120),
-  classes: z.array(hazardClassSchema).min(1),
+  /** Empty for an ion checked to add no hazard of its own (so that its salts read "no hazard class", not "no hazard data"). */
+  classes: z.array(hazardClassSchema),
   /** A short caution in plain words. */
   statement: z.string().min(1),
   ...provenance,

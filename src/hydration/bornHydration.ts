@@ -6,12 +6,14 @@
  *
  * @module
  */
-import { optionsArgument } from '../quantity/argumentChecks.js';
+import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { findIon } from '../chem/ionIndex.js';
 import { COULOMB_KJ_ANGSTROM, COVERAGE_95, STANDARD_TEMPERATURE } from '../quantity/constants.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
+
+const BORN_HYDRATION_OPTIONS = optionNames<{ excludeIon?: string }>('bornHydrationEnthalpy', { excludeIon: true });
 
 /**
  * Relative permittivity of water against temperature t (°C), 0–100 °C:
@@ -265,7 +267,7 @@ export function bornCalibration(options: { excludeIon?: string } = {}, dataset: 
  * ```
  */
 export function bornHydrationEnthalpy(ion: string, options: { excludeIon?: string } = {}, dataset: Dataset = builtinDataset()): Estimate | undefined {
-  options = optionsArgument(options);
+  options = optionsArgument(options, BORN_HYDRATION_OPTIONS);
   const record = findIon(ion, dataset);
   const radius = bornRadius(ion, dataset);
   if (!record || !radius || record.charge === 0) return undefined;

@@ -7,7 +7,7 @@
  */
 import { IonheatError } from '../error.js';
 import { saltArgument } from '../chem/saltArgument.js';
-import { describeValue, optionsArgument } from '../quantity/argumentChecks.js';
+import { describeValue, optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
@@ -16,6 +16,8 @@ import { exactSum } from '../quantity/exactSum.js';
 import { linearUncertainty } from '../quantity/propagate.js';
 import { bornHydrationEnthalpy } from './bornHydration.js';
 import { protonHydration, tabulatedHydrationTerm, type HydrationScale, type HydrationTerm } from './ionHydration.js';
+
+const SALT_HYDRATION_OPTIONS = optionNames<SaltHydrationOptions>('saltHydrationEnthalpy', { scale: true, born: true });
 
 export interface SaltHydrationOptions {
   /** `absolute` (Marcus, default) or `conventional` (ΔfH°(aq) − ΔfH°(g), ΔhydH°(H⁺) ≡ 0). */
@@ -50,7 +52,7 @@ function ionTerms(dataset: Dataset): Record<HydrationScale, { born: Map<string, 
 
 /** The options as a caller passes them: an object whose `scale`, when given, is absolute or conventional. */
 function hydrationOptions(options: SaltHydrationOptions | undefined): SaltHydrationOptions {
-  const o = optionsArgument(options);
+  const o = optionsArgument(options, SALT_HYDRATION_OPTIONS);
   if (o.scale !== undefined && o.scale !== 'absolute' && o.scale !== 'conventional') throw new IonheatError('INVALID_ARGUMENT', `scale must be absolute or conventional, got ${describeValue(o.scale)}`, { field: 'scale' });
   return o;
 }

@@ -11,7 +11,7 @@ import { parseSalt } from '../chem/parseSalt.js';
 import type { Salt } from '../chem/salt.js';
 import { IonheatError } from '../error.js';
 import type { Estimate } from '../quantity/estimate.js';
-import { latticeEstimates, type LatticeEstimateOptions } from './latticeEstimate.js';
+import { latticeEstimates, type LatticeEstimateOptions, LATTICE_ESTIMATE_OPTIONS } from './latticeEstimate.js';
 
 /**
  * Of the bias-corrected lattice estimates that apply to a salt, the one
@@ -42,7 +42,7 @@ import { latticeEstimates, type LatticeEstimateOptions } from './latticeEstimate
  */
 export function bestLatticeEstimate(salt: Salt | string, options: LatticeEstimateOptions = {}, dataset: Dataset = builtinDataset()): Estimate {
   const s = saltArgument(salt, dataset);
-  options = optionsArgument(options);
+  options = optionsArgument(options, LATTICE_ESTIMATE_OPTIONS);
   const { estimates, skipped } = latticeEstimates(s, options, dataset);
   let best: Estimate | undefined;
   for (const e of estimates) {

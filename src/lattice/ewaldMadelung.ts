@@ -5,7 +5,9 @@
  * @module
  */
 import { IonheatError } from '../error.js';
-import { numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
+import { numberArgument, optionsArgument, optionNames } from '../quantity/argumentChecks.js';
+
+const EWALD_OPTIONS = optionNames<EwaldOptions>('ewaldMadelung', { formulaUnits: true, chargeProduct: true, tolerance: true });
 
 /** A vector in Cartesian (lattice vectors) or fractional (positions) coordinates. */
 export type Vec3 = readonly [number, number, number];
@@ -153,7 +155,7 @@ const MAX_TERMS = 2e8;
  */
 export function ewaldMadelung(cell: PointChargeCell, options: EwaldOptions = {}): MadelungResult {
   check(cell);
-  options = optionsArgument(options);
+  options = optionsArgument(options, EWALD_OPTIONS);
   if (options.tolerance !== undefined) numberArgument(options.tolerance, 'tolerance', 'the relative tolerance of the lattice sums', { min: 1e-15, max: 0.1 });
   if (options.chargeProduct !== undefined) numberArgument(options.chargeProduct, 'chargeProduct', 'the charge product |z₊·z₋|', { min: 0, above: true, max: 10_000 });
   if (options.formulaUnits !== undefined) numberArgument(options.formulaUnits, 'formulaUnits', 'the number of formula units in the cell', { min: 1, max: 10_000, integer: true });

@@ -9,7 +9,7 @@
  * @module
  */
 import { saltArgument } from '../chem/saltArgument.js';
-import { describeValue, numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
+import { describeValue, numberArgument, optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
@@ -20,6 +20,9 @@ import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { calibrationChargeType, calibrationGroups, calibrationStats, saltCationCore, saltIonKind, type CalibrationStats } from './latticeCalibration.js';
 import { latticeModels, PointFailure, prepareLatticeSalt, tryLatticeModelPoint, type LatticeModel, type LatticeModelOptions, type ModelPoint } from './latticeModel.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+
+/** The option names of the lattice estimates. @internal */
+export const LATTICE_ESTIMATE_OPTIONS = optionNames<LatticeEstimateOptions>('latticeEstimate', { structure: true, latticeParameter: true, coordination: true, excludeSalt: true });
 
 export { cycleLatticeEnthalpy, type CycleLatticeOptions } from '../cycle/cycleLatticeEnthalpy.js';
 export type { LatticeModel, LatticeModelOptions } from './latticeModel.js';
@@ -48,7 +51,7 @@ const CORRECTED = '-corrected';
  * `coordination` are finite numbers, else `INVALID_ARGUMENT` naming the field.
  */
 function latticeOptions(options: LatticeEstimateOptions | undefined): LatticeEstimateOptions {
-  const o = optionsArgument(options);
+  const o = optionsArgument(options, LATTICE_ESTIMATE_OPTIONS);
   for (const k of ['structure', 'excludeSalt'] as const) {
     if (o[k] !== undefined && typeof o[k] !== 'string') throw new IonheatError('INVALID_ARGUMENT', `${k} must be text when given, got ${describeValue(o[k])}`, { field: k });
   }
@@ -140,11 +143,10 @@ const copy = (e: Estimate): Estimate => ({ ...e, sources: e.sources.slice(), not
 /** The estimate or the error of one method for one salt, computed once per dataset. */
 function lookup(s: Salt, method: LatticeMethod, options: LatticeEstimateOptions, dataset: Dataset): Estimate | IonheatError {
   // Estimates are kept per dataset: by method, then by formula (default options) or by formula and options.
-  const caches = dataset.memo('lattice.estimateCache', () => ({ size: 0, byMethod: new Map<string, Map<string, Estimate | IonheatError>>() }));
-  let cache = caches.byMethod.get(method);
-  if (!cache) caches.byMethod.set(method, (cache = new Map()));
-  const key = plainOptions(options) ? s.formula : optionsKey(s.formula, options);
-  let hit = cache.get(key);
+  const cache = dataset.cache<string, Estimate | IonheatError>('lattice.estimateCache', CACHE_LIMIT);
+  // Only a method name given as text can be a key; anything else is computed (and refused) without being kept.
+  const key = typeof method === 'string' ? `${method}|${plainOptions(options) ? s.formula : optionsKey(s.formula, options)}` : undefined;
+  let hit = key === undefined ? undefined : cache.get(key);
   if (hit === undefined) {
     try {
       hit = computeEstimate(s, method, options, dataset);
@@ -152,18 +154,12 @@ function lookup(s: Salt, method: LatticeMethod, options: LatticeEstimateOptions,
       if (!isIonheatError(e)) throw e;
       hit = e;
     }
-    if (caches.size >= CACHE_LIMIT) {
-      caches.byMethod.clear();
-      caches.size = 0;
-      caches.byMethod.set(method, (cache = new Map()));
-    }
-    cache.set(key, hit);
-    caches.size++;
+    if (key !== undefined) cache.set(key, hit);
   }
   return hit;
 }
 
-/** Most estimates kept per dataset; the cache starts afresh when full. */
+/** Most estimates kept per dataset (a bounded cache: those not used for longest go first). */
 const CACHE_LIMIT = 20_000;
 
 function plainOptions(o: LatticeEstimateOptions): boolean {
@@ -176,13 +172,12 @@ function optionsKey(formula: string, o: LatticeEstimateOptions): string {
 
 /** The model point of a salt, kept per dataset (it does not depend on what the calibration leaves out). */
 function cachedPoint(s: Salt, model: LatticeModel, options: LatticeModelOptions, dataset: Dataset): ModelPoint {
-  const cache = dataset.memo('lattice.pointCache', () => new Map<string, ModelPoint | IonheatError>());
+  const cache = dataset.cache<string, ModelPoint | IonheatError>('lattice.pointCache', CACHE_LIMIT);
   const key = `${model}|${s.formula}|${options.structure ?? ''}|${options.latticeParameter ?? ''}|${options.coordination ?? ''}`;
   let hit = cache.get(key);
   if (hit === undefined) {
     const point = tryLatticeModelPoint(s, model, options, dataset, []);
     hit = point instanceof PointFailure ? point.error() : point;
-    if (cache.size >= CACHE_LIMIT) cache.clear();
     cache.set(key, hit);
   }
   if (hit instanceof Error) throw hit;
@@ -191,11 +186,10 @@ function cachedPoint(s: Salt, model: LatticeModel, options: LatticeModelOptions,
 
 /** The canonical formula of a formula the caller typed, kept per dataset. */
 function canonicalFormula(text: string, dataset: Dataset): string {
-  const cache = dataset.memo('lattice.canonicalFormulas', () => new Map<string, string>());
+  const cache = dataset.cache<string, string>('lattice.canonicalFormulas', CACHE_LIMIT);
   let f = cache.get(text);
   if (f === undefined) {
     f = parseSalt(text, dataset).formula;
-    if (cache.size >= CACHE_LIMIT) cache.clear();
     cache.set(text, f);
   }
   return f;

@@ -20,15 +20,20 @@
  *
  * @module
  */
-import { readFileSync } from 'node:fs';
 import { basename } from 'node:path';
 import { z } from 'zod';
 import { builtinDataset } from '../data/builtin.js';
 import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { sourceSchema } from '../data/schemas.js';
 import { IonheatError } from '../error.js';
+import { overrideError } from '../data/dataset.js';
+import { didYouMean } from '../quantity/nearestName.js';
 import { parseJsonStrict } from './strictJson.js';
-import { checkPlausibleOverrides } from './plausibleOverrides.js';
+import { readTextFile } from './readInputFile.js';
+
+/** The largest override file read (a table of every ion and salt ionheat knows is well under 1 MB). */
+const MAX_DATA_FILE_BYTES = 16 * 2 ** 20;
+import { implausibleOverrides } from './plausibleOverrides.js';
 
 const overrideFileSchema = z.strictObject({
   $schema: z.string().optional(),
@@ -64,14 +69,22 @@ const overrideFileSchema = z.strictObject({
 export function applyOverrideDocument(document: unknown, label: string, base: Dataset = builtinDataset()): Dataset {
   const parsed = overrideFileSchema.safeParse(document);
   if (!parsed.success) {
-    const issue = parsed.error.issues[0]!;
-    throw new IonheatError('INVALID_DATA', `${label}: ${issue.path.join('.') || '(top level)'}: ${issue.message}`, { field: issue.path.join('.') });
+    // Every problem of the file's shape at once, each with its path.
+    throw overrideError(
+      label,
+      parsed.error.issues.map((issue) => {
+        const path = issue.path.join('.') || '(top level)';
+        const unknownKeys = issue.code === 'unrecognized_keys' ? issue.keys.map((k) => `"${k}"${didYouMean(k, TOP_LEVEL_KEYS)}`).join(', ') : '';
+        return { field: issue.path.join('.'), message: unknownKeys ? `${path}: unknown key ${unknownKeys}` : `${path}: ${issue.message}` };
+      }),
+    );
   }
   const tables: Record<string, unknown[]> = {};
   for (const [name, records] of Object.entries(parsed.data.tables)) tables[name.endsWith('.json') ? name : `${name}.json`] = records;
-  checkPlausibleOverrides(tables, label);
-  return base.withOverrides(tables as TableOverrides, label, parsed.data.sources ?? {});
+  return base.withOverrides(tables as TableOverrides, label, parsed.data.sources ?? {}, { problems: implausibleOverrides(tables), refuseConflicts: true });
 }
+
+const TOP_LEVEL_KEYS = ['$schema', 'description', 'sources', 'tables'];
 
 /**
  * Reads override files in order, each merged over the result of the ones
@@ -79,8 +92,9 @@ export function applyOverrideDocument(document: unknown, label: string, base: Da
  *
  * @param paths - JSON files in the override format above
  * @param base - the dataset to start from (default: built-in); it is not changed
- * @throws IonheatError `INVALID_ARGUMENT` for a file that cannot be read, `INVALID_DATA` naming the file, table, record
- *   and field for bad content
+ * @throws IonheatError `INVALID_ARGUMENT` for a file that cannot be read, is not a regular file (a FIFO, a device, a
+ *   directory) or is over 16 MB; `INVALID_DATA` naming the file, table, record and field for bad content (JSON
+ *   syntax errors at their line and column; a leading byte-order mark is allowed)
  * @see DEVELOPERS.md, "A user's own tables"; {@link applyOverrideDocument} for the format.
  *
  * @example
@@ -101,12 +115,7 @@ export function applyOverrideDocument(document: unknown, label: string, base: Da
 export function loadDataset(paths: readonly string[], base: Dataset = builtinDataset()): Dataset {
   let dataset = base;
   for (const path of paths) {
-    let text: string;
-    try {
-      text = readFileSync(path, 'utf8');
-    } catch (e) {
-      throw new IonheatError('INVALID_ARGUMENT', `cannot read data file "${path}": ${(e as NodeJS.ErrnoException).code ?? String(e)}`, { field: path });
-    }
+    const text = readTextFile(path, 'data file', path, MAX_DATA_FILE_BYTES);
     dataset = applyOverrideDocument(parseJsonStrict(text, basename(path)), basename(path), dataset);
   }
   return dataset;

@@ -1,87 +1,94 @@
 /**
- * Plausible ranges of a user's override values, checked before they are merged: a value that passes the schema
- * (a positive radius, a finite enthalpy) may still be in the wrong unit — a radius of 1.02e-10 "Å" entered in
- * metres, an enthalpy of 1e9 kJ/mol entered in J. Such a record is refused with a message naming the file, the
- * table, the record and the field. The ranges are wide (an order of magnitude or more around every value of the
- * built-in tables) and are common practice, not published limits.
+ * Plausible ranges of a user's override values, by quantity, checked before they are merged: a value that passes
+ * the schema (a positive radius, a finite enthalpy) may still be in the wrong unit — a radius in pm or nm entered
+ * as Å, an enthalpy in J/mol entered as kJ/mol. Such a record is refused with a message naming the file, the
+ * table, the record and the field, instead of failing later inside a computation. The ranges bracket every value
+ * of the built-in tables with room to spare (the bounds of each quantity are in the table below); they are common
+ * practice, not published limits.
  *
  * @module
  */
-import { IonheatError } from '../error.js';
+import { recordName, type OverrideProblem } from '../data/dataset.js';
 
 interface Range {
   min: number;
   max: number;
   unit: string;
+  /** The quantity in words, for messages. */
+  quantity: string;
 }
 
-/** Plausible `value` of a record, per table (common practice: wide bounds around the built-in values). */
+/**
+ * Plausible `value` of a record, per table (common practice). Built-in extremes, for comparison: Shannon radii
+ * 0.16–2.2 Å, thermochemical radii 1.3–2.6 Å, ion volumes 0.002–0.09 nm³, enthalpies of solution −64 to +57
+ * kJ/mol, hydration enthalpies −4731 to −246 kJ/mol, solid heat capacities 47–550 J/(mol·K).
+ */
 const VALUE_RANGES: Record<string, Range> = {
-  'atomization-enthalpies.json': { min: 1, max: 5000, unit: 'kJ/mol' },
-  'bond-dissociation.json': { min: 1, max: 5000, unit: 'kJ/mol' },
-  'born-exponents.json': { min: 1, max: 30, unit: '' },
-  'compound-formation.json': { min: -50_000, max: 10_000, unit: 'kJ/mol' },
-  'electron-affinities.json': { min: -2000, max: 2000, unit: 'kJ/mol' },
-  'elements.json': { min: 0.5, max: 400, unit: 'g/mol' },
-  'heat-capacities.json': { min: -5000, max: 10_000, unit: 'J/(mol·K)' },
-  'hydration-enthalpies.json': { min: -20_000, max: 1000, unit: 'kJ/mol' },
-  'ion-formation-aq.json': { min: -20_000, max: 20_000, unit: 'kJ/mol' },
-  'ion-formation-gas.json': { min: -20_000, max: 50_000, unit: 'kJ/mol' },
-  'ion-heat-capacities-aq.json': { min: -5000, max: 5000, unit: 'J/(mol·K)' },
-  'ion-volumes.json': { min: 1e-4, max: 5, unit: 'nm³' },
-  'ionization-energies.json': { min: 100, max: 200_000, unit: 'kJ/mol' },
-  'madelung-constants.json': { min: 0.5, max: 100, unit: '' },
-  'shannon-radii.json': { min: 0.05, max: 10, unit: 'Å' },
-  'solution-enthalpies.json': { min: -2000, max: 2000, unit: 'kJ/mol' },
-  'thermochemical-radii.json': { min: 0.05, max: 10, unit: 'Å' },
+  'atomization-enthalpies.json': { min: 1, max: 5000, unit: 'kJ/mol', quantity: 'atomization enthalpy' },
+  'bond-dissociation.json': { min: 1, max: 5000, unit: 'kJ/mol', quantity: 'bond dissociation enthalpy' },
+  'born-exponents.json': { min: 1, max: 30, unit: '', quantity: 'Born exponent' },
+  'compound-formation.json': { min: -50_000, max: 10_000, unit: 'kJ/mol', quantity: 'formation enthalpy' },
+  'electron-affinities.json': { min: -2000, max: 2000, unit: 'kJ/mol', quantity: 'electron affinity' },
+  'elements.json': { min: 0.5, max: 400, unit: 'g/mol', quantity: 'atomic weight' },
+  'heat-capacities.json': { min: 5, max: 5000, unit: 'J/(mol·K)', quantity: 'molar heat capacity' },
+  'hydration-enthalpies.json': { min: -20_000, max: 0, unit: 'kJ/mol', quantity: 'hydration enthalpy' },
+  'ion-formation-aq.json': { min: -20_000, max: 20_000, unit: 'kJ/mol', quantity: 'formation enthalpy of an aqueous ion' },
+  'ion-formation-gas.json': { min: -20_000, max: 50_000, unit: 'kJ/mol', quantity: 'formation enthalpy of a gaseous ion' },
+  'ion-heat-capacities-aq.json': { min: -2000, max: 2000, unit: 'J/(mol·K)', quantity: 'heat capacity of an aqueous ion' },
+  'ion-volumes.json': { min: 5e-4, max: 2, unit: 'nm³', quantity: 'ion volume' },
+  'ionization-energies.json': { min: 100, max: 200_000, unit: 'kJ/mol', quantity: 'ionization energy' },
+  'madelung-constants.json': { min: 0.5, max: 100, unit: '', quantity: 'Madelung constant' },
+  'shannon-radii.json': { min: 0.05, max: 3, unit: 'Å', quantity: 'Shannon ionic radius' },
+  'solution-enthalpies.json': { min: -600, max: 600, unit: 'kJ/mol', quantity: 'enthalpy of solution' },
+  'thermochemical-radii.json': { min: 0.3, max: 6, unit: 'Å', quantity: 'thermochemical radius' },
 };
 
 /** Plausible other numeric fields, by table and field (common practice). */
 const FIELD_RANGES: Record<string, Record<string, Range>> = {
-  'crystals.json': { latticeParameter: { min: 1, max: 100, unit: 'Å' }, density: { min: 0.1, max: 30, unit: 'g/cm³' } },
+  'crystals.json': {
+    latticeParameter: { min: 1, max: 100, unit: 'Å', quantity: 'lattice parameter' },
+    density: { min: 0.3, max: 25, unit: 'g/cm³', quantity: 'crystal density' },
+  },
 };
 
-/** How a record is named in messages: its formula, ion, element or id, as the table keys it. */
-function recordName(record: Record<string, unknown>): string {
-  for (const key of ['formula', 'ion', 'id', 'symbol', 'element', 'subject', 'structure', 'core', 'molecule']) {
-    const v = record[key];
-    if (typeof v === 'string') return ` (${v.length > 40 ? `${v.slice(0, 40)}…` : v})`;
-  }
+const article = (word: string): string => (/^[aeiou]/i.test(word) ? 'an' : 'a');
+
+/** Hints for the slips a value outside its range most often is. */
+function slipHint(value: number, range: Range): string {
+  if (range.unit === 'Å' && value > range.max) return value > 10 * range.max ? ' (a radius in pm? 1 Å = 100 pm)' : ' (a diameter, or a radius in another unit?)';
+  if (range.unit === 'Å' && value < range.min) return ' (a radius in nm or m? 1 Å = 0.1 nm)';
+  if (range.unit === 'kJ/mol' && Math.abs(value) > 1000 * Math.max(Math.abs(range.min), Math.abs(range.max)) / 100) return ' (a value in J/mol? 1 kJ/mol = 1000 J/mol)';
   return '';
 }
 
-function refuse(label: string, table: string, i: number, record: Record<string, unknown>, field: string, value: number, range: Range, what: string): never {
-  const unit = range.unit ? ` ${range.unit}` : '';
-  throw new IonheatError(
-    'INVALID_DATA',
-    `${label}: ${table} record ${i + 1}${recordName(record)}, field "${field}": ${value}${unit} is outside the plausible ${what} ${range.min} to ${range.max}${unit}; check the unit`,
-    { field: `${table}[${i}].${field}` },
-  );
-}
-
 /**
- * Refuses override records whose numbers lie far outside what the quantity can be (a unit slip), and
- * uncertainties larger than the whole plausible range.
+ * Every override record whose numbers lie outside what the quantity can be (a unit slip), and every uncertainty
+ * larger than the whole plausible range, as problems naming the table, the record and the field.
  *
  * @param tables - records by table file name (`shannon-radii.json`…), as read from the override file
- * @param label - the file name, for messages
- * @throws IonheatError `INVALID_DATA` naming the file, the table, the record (number and formula or ion) and the field
  */
-export function checkPlausibleOverrides(tables: Record<string, readonly unknown[]>, label: string): void {
+export function implausibleOverrides(tables: Record<string, readonly unknown[]>): OverrideProblem[] {
+  const problems: OverrideProblem[] = [];
   for (const [table, records] of Object.entries(tables)) {
+    if (!Array.isArray(records)) continue; // the merge names the problem
     const valueRange = VALUE_RANGES[table];
     const fields: Record<string, Range> = { ...(valueRange ? { value: valueRange } : {}), ...(FIELD_RANGES[table] ?? {}) };
-    records.forEach((raw, i) => {
+    records.forEach((raw: unknown, i) => {
       if (raw === null || typeof raw !== 'object') return; // the schema names the problem
       const record = raw as Record<string, unknown>;
+      const where = `${table} record ${i + 1}${recordName(record)}`;
       for (const [field, range] of Object.entries(fields)) {
         const v = record[field];
-        if (typeof v === 'number' && Number.isFinite(v) && (v < range.min || v > range.max)) refuse(label, table, i, record, field, v, range, 'range');
+        if (typeof v !== 'number' || !Number.isFinite(v) || (v >= range.min && v <= range.max)) continue;
+        const unit = range.unit ? ` ${range.unit}` : '';
+        problems.push({ field: `${table}[${i}].${field}`, message: `${where}, field "${field}": ${v}${unit} is outside the plausible range of ${article(range.quantity)} ${range.quantity}, ${range.min} to ${range.max}${unit}; check the unit${slipHint(v, range)}` });
       }
       const u = record.uncertainty;
       if (valueRange && typeof u === 'number' && Number.isFinite(u) && u > valueRange.max - valueRange.min) {
-        refuse(label, table, i, record, 'uncertainty', u, { ...valueRange, min: 0, max: valueRange.max - valueRange.min }, 'uncertainty, from');
+        const unit = valueRange.unit ? ` ${valueRange.unit}` : '';
+        problems.push({ field: `${table}[${i}].uncertainty`, message: `${where}, field "uncertainty": ${u}${unit} is larger than the whole plausible range of ${article(valueRange.quantity)} ${valueRange.quantity} (${valueRange.max - valueRange.min}${unit}); check the unit` });
       }
     });
   }
+  return problems;
 }

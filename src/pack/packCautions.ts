@@ -11,7 +11,7 @@ import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { IonheatError } from '../error.js';
 import type { Salt } from '../chem/salt.js';
-import { saltHazards } from './saltHazards.js';
+import { hazardCoverage, saltHazards } from './saltHazards.js';
 
 /**
  * Skin-contact temperature above which a burn becomes possible when contact
@@ -125,7 +125,12 @@ export function packCautions(input: CautionInput, dataset: Dataset = builtinData
   for (const salt of input.salts) {
     const hazards = saltHazards(salt, dataset);
     if (hazards.length === 0) {
-      out.push(`${salt.formula}: no hazard entry in the ionheat hazards table; read the safety data sheet of the material actually used.`);
+      const coverage = hazardCoverage(salt, dataset);
+      out.push(
+        coverage.status === 'no hazard data'
+          ? `${salt.formula}: no hazard data in the ionheat hazards table (nothing for ${coverage.missingIons.join(' or ')}), which is not a sign of safety; read the safety data sheet of the material actually used.`
+          : `${salt.formula}: no hazard class in the ionheat hazards table (its ions add none of their own); the safety data sheet of the material actually used still decides.`,
+      );
       continue;
     }
     for (const h of hazards) {

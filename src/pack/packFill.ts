@@ -14,6 +14,7 @@ import { molarMass } from '../chem/molarMass.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { quadrature } from '../quantity/propagate.js';
+import { checkOptionKeys, optionNames } from '../quantity/argumentChecks.js';
 import { KIRCHHOFF_RANGE_C } from '../solution/solutionHeatCapacity.js';
 import { widenEstimate } from '../solution/widenEstimate.js';
 import { aqueousHeatCapacity, waterSpecificHeat } from './solidHeatCapacity.js';
@@ -140,6 +141,11 @@ export const DEFAULT_START_C = 20;
  */
 const ADDITIVITY_FALLBACK_RELATIVE = 0.5;
 
+const FILL_KEYS = optionNames<PackFill>('a pack fill', { solids: true, waterG: true, startC: true, containerJPerK: true });
+const SOLID_KEYS = optionNames<PackSolid>('a solid of the fill', { formula: true, massG: true });
+const PACK_OPTION_KEYS = optionNames<PackOptions>('the pack model', { heatCapacityJPerK: true, heatCapacityUJPerK: true, kirchhoff: true, interval: true });
+const INTERVAL_KEYS = optionNames<{ method: string; samples?: number; seed?: number }>('the interval option', { method: true, samples: true, seed: true });
+
 function invalid(field: string, message: string): IonheatError {
   return new IonheatError('INVALID_ARGUMENT', message, { field });
 }
@@ -179,11 +185,11 @@ const PARSED_CACHE_LIMIT = 4096;
 
 /** {@link parseSalt}, remembered per dataset for texts already read. */
 function parsedFormula(text: string, dataset: Dataset): Salt {
-  const cache = dataset.memo('pack.parsedFormulas', () => new Map<string, Salt>());
+  const cache = dataset.cache<string, Salt>('pack.parsedFormulas', PARSED_CACHE_LIMIT);
   const known = cache.get(text);
   if (known) return known;
   const salt = parseSalt(text, dataset);
-  if (cache.size < PARSED_CACHE_LIMIT) cache.set(text, salt);
+  cache.set(text, salt);
   return salt;
 }
 
@@ -209,6 +215,8 @@ function saltDataOf(salt: Salt, field: string, dataset: Dataset): PackSaltData {
 export function preparePackFill(fill: PackFill, options: PackOptions = {}, dataset: Dataset = builtinDataset()): PreparedFill {
   if (options === null || typeof options !== 'object') throw invalid('options', `the pack options are an object, got ${options === null ? 'null' : typeof options}`);
   if (fill === null || typeof fill !== 'object') throw invalid('fill', 'a pack fill is an object with solids, waterG and optionally startC and containerJPerK');
+  checkOptionKeys(options, PACK_OPTION_KEYS, 'options');
+  checkOptionKeys(fill, FILL_KEYS, 'fill');
   if (!Array.isArray(fill.solids) || fill.solids.length === 0 || fill.solids.length > 100) throw invalid('solids', 'a pack fill needs from one to 100 solids (solids: [{ formula, massG }])');
   const waterG = checkPositive(fill.waterG, 'waterG', 'the water', 'g');
   const startGiven = fill.startC ?? DEFAULT_START_C;
@@ -224,6 +232,7 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
   if (interval !== undefined) {
     const iv = interval as { method?: unknown; samples?: unknown; seed?: unknown };
     if (iv === null || typeof iv !== 'object' || (iv.method !== 'bounds' && iv.method !== 'monte-carlo')) throw invalid('interval', `the interval option is { method: 'bounds' } or { method: 'monte-carlo', samples, seed }, got ${iv === null || typeof iv !== 'object' ? String(iv) : `method ${String(iv.method as string)}`}`);
+    checkOptionKeys(iv, iv.method === 'bounds' ? { owner: 'the bounds interval', keys: ['method'] } : INTERVAL_KEYS, 'interval');
     if (iv.samples !== undefined && !(typeof iv.samples === 'number' && iv.samples >= 1 && iv.samples <= 100_000)) throw invalid('interval.samples', `the number of Monte Carlo draws (interval.samples) must be from 1 to 100000, got ${typeof iv.samples === 'number' ? iv.samples : typeof iv.samples}`);
     if (iv.seed !== undefined && !(typeof iv.seed === 'number' && Number.isFinite(iv.seed))) throw invalid('interval.seed', `the Monte Carlo seed (interval.seed) must be a finite number, got ${typeof iv.seed === 'number' ? iv.seed : typeof iv.seed}`);
   }
@@ -245,6 +254,7 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
   const solids = Array.from(fill.solids, (solid, i): PreparedSolid => {
     const field = `solids[${i}]`;
     if (solid === null || typeof solid !== 'object') throw invalid(field, `${field} must be an object { formula, massG }`);
+    checkOptionKeys(solid, SOLID_KEYS, field);
     if (typeof solid.formula !== 'string' || solid.formula.trim() === '') throw invalid(`${field}.formula`, `${field}.formula must be a salt formula`);
     let salt: Salt;
     try {

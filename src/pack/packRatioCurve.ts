@@ -5,7 +5,7 @@
  *
  * @module
  */
-import { describeValue, optionsArgument } from '../quantity/argumentChecks.js';
+import { describeValue, optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { IonheatError } from '../error.js';
@@ -14,6 +14,8 @@ import { finalTemperatureInterval } from './finalTemperatureInterval.js';
 import { goldenSectionMaximum } from './goldenSectionMaximum.js';
 import { preparePackFill, scalePreparedFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
+
+const PACK_CURVE_OPTIONS = optionNames<PackCurveOptions>('packRatioCurve', { points: true, maxRatio: true, targetC: true, band: true });
 
 /** One point of the curve. */
 export interface PackCurvePoint {
@@ -154,7 +156,7 @@ const MAX_RATIO = 1000;
  * ```
  */
 export function packRatioCurve(fill: PackFill, options: PackCurveOptions = {}, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackRatioCurve {
-  options = optionsArgument(options);
+  options = optionsArgument(options, PACK_CURVE_OPTIONS);
   const base = preparePackFill(fill, packOptions, dataset);
   const count = options.points ?? 200;
   if (!Number.isInteger(count) || count < 2 || count > 100_000) throw new IonheatError('INVALID_ARGUMENT', `the number of curve points (points) must be a whole number from 2 to 100000, got ${describeValue(count)}`, { field: 'points' });

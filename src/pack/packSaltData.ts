@@ -81,7 +81,7 @@ function build(salt: Salt, dataset: Dataset): PackSaltData {
  * ```
  */
 export function packSaltData(salt: Salt, dataset: Dataset = builtinDataset()): PackSaltData {
-  const cache = dataset.memo('pack.saltData', () => new Map<string, PackSaltData>());
+  const cache = dataset.cache<string, PackSaltData>('pack.saltData');
   let data = cache.get(salt.formula);
   if (!data) {
     data = build(salt, dataset);

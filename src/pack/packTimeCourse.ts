@@ -5,7 +5,7 @@
  *
  * @module
  */
-import { describeValue, optionsArgument } from '../quantity/argumentChecks.js';
+import { describeValue, optionsArgument, optionNames, checkOptionKeys } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { IonheatError } from '../error.js';
@@ -16,6 +16,9 @@ import { CONTACT_BURN_THRESHOLD_C, packCautions } from './packCautions.js';
 import { packResult } from './packFinalTemperature.js';
 import { preparePackFill, type PackFill, type PackOptions } from './packFill.js';
 import { BOILING_C, solveFillTemperature } from './solveFillTemperature.js';
+
+const BAND_KEYS = optionNames<{ lowC: number; highC: number }>('packTimeCourse', { lowC: true, highC: true });
+const TIME_COURSE_OPTIONS = optionNames<TimeCourseOptions>('packTimeCourse', { durationS: true, dissolutionTimeConstantS: true, ambientC: true, ambientConductanceWPerK: true, skinC: true, skinConductanceWPerK: true, band: true, samples: true });
 
 /** Parameters of the time course; each one you leave out takes an assumed value for illustration. */
 export interface TimeCourseOptions {
@@ -176,7 +179,7 @@ export function parameter(options: TimeCourseOptions, key: keyof typeof DEFAULTS
  * ```
  */
 export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, packOptions: PackOptions = {}, dataset: Dataset = builtinDataset()): PackTimeCourse {
-  options = optionsArgument(options);
+  options = optionsArgument(options, TIME_COURSE_OPTIONS);
   const parameters = {
     durationS: parameter(options, 'durationS', (v) => v > 0 && v <= 7 * 86400, 'must be a time from above 0 s to 7 days'),
     dissolutionTimeConstantS: parameter(options, 'dissolutionTimeConstantS', (v) => v > 0 && v <= 1e7, 'must be greater than 0 s and at most 10000000 s'),
@@ -186,6 +189,7 @@ export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, 
     skinConductanceWPerK: parameter(options, 'skinConductanceWPerK', (v) => v >= 0 && v <= 1e6, 'must be from 0 to 1000000 W/K'),
   };
   const band = options.band;
+  if (band !== null && typeof band === 'object') checkOptionKeys(band, BAND_KEYS, 'band');
   if (band !== undefined && !(band !== null && typeof band === 'object' && typeof band.lowC === 'number' && typeof band.highC === 'number' && Number.isFinite(band.lowC) && Number.isFinite(band.highC) && band.lowC < band.highC)) {
     throw new IonheatError('INVALID_ARGUMENT', `a target band needs a lower and a higher temperature in °C (band.lowC < band.highC), got ${band !== null && typeof band === 'object' ? `${describeValue(band.lowC)} and ${describeValue(band.highC)}` : describeValue(band)}`, { field: 'band' });
   }

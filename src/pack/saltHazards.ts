@@ -54,7 +54,7 @@ function buildIndex(dataset: Dataset): HazardIndex {
  * @example
  * ```ts
  * saltHazards('NH4NO3')[0]?.classes.includes('explosive-precursor'); // true
- * saltHazards('NaCl').length; // 0
+ * saltHazards('NaCl').length; // 0 (checked: neither ion adds a class; see hazardCoverage)
  * saltHazards('NH4NO3')[0]?.source; // 'eu2019_1148'
  * ```
  */
@@ -63,10 +63,48 @@ export function saltHazards(salt: string | Salt, dataset: Dataset = builtinDatas
   const index = dataset.memo('pack.hazardIndex', () => buildIndex(dataset));
   const found: HazardRecord[] = [];
   const own = index.bySalt.get(s.anhydrous);
-  if (own) found.push(own);
+  // A record without classes says "checked: nothing of its own"; it is coverage (hazardCoverage), not a hazard.
+  if (own && own.classes.length > 0) found.push(own);
   for (const ion of s.ions) {
     const record = index.byIon.get(ion.ion);
-    if (record && !found.includes(record)) found.push(record);
+    // With a record of its own, the salt's ions add only what that record does not already say.
+    if (!record || record.classes.length === 0 || found.includes(record)) continue;
+    if (own && own.classes.length > 0 && record.classes.every((c) => own.classes.includes(c))) continue;
+    found.push(record);
   }
   return found;
+}
+
+/** What the hazards table knows of a salt. */
+export interface HazardCoverage {
+  /**
+   * `classified`: at least one hazard class applies; `not classified`: the salt, or every one of its ions, has a
+   * record and none gives a class; `no hazard data`: neither, so nothing can be said (never read it as harmless).
+   */
+  status: 'classified' | 'not classified' | 'no hazard data';
+  /** Ion ids without a record, when the salt has no record of its own. */
+  missingIons: string[];
+}
+
+/**
+ * Whether the hazards table classifies a salt, checked it and found no class, or has no data for it.
+ *
+ * @param salt - a formula or a parsed salt
+ * @param dataset - the hazards table (default: built-in)
+ * @see the hazards table and its sources (`clpAnnexVI`, `supplierSds`, `commonPractice` …); DEVELOPERS.md, "Data tables".
+ *
+ * @example
+ * ```ts
+ * hazardCoverage('NH4NO3').status; // 'classified'
+ * hazardCoverage('NaCl').status; // 'not classified' (both ions checked, neither adds a class)
+ * hazardCoverage('LiBr').status; // 'classified' (lithium)
+ * ```
+ */
+export function hazardCoverage(salt: string | Salt, dataset: Dataset = builtinDataset()): HazardCoverage {
+  const s = saltArgument(salt, dataset);
+  const index = dataset.memo('pack.hazardIndex', () => buildIndex(dataset));
+  const own = index.bySalt.get(s.anhydrous);
+  const missingIons = own ? [] : s.ions.filter((i) => !index.byIon.has(i.ion)).map((i) => i.ion);
+  if (saltHazards(s, dataset).length > 0) return { status: 'classified', missingIons };
+  return { status: own || missingIons.length === 0 ? 'not classified' : 'no hazard data', missingIons };
 }

@@ -7,6 +7,7 @@
  */
 import { IonheatError } from '../error.js';
 import { estimateSchema, type Estimate } from './estimate.js';
+import { didYouMean } from './nearestName.js';
 
 /** A short, safe rendering of any value for an error message (symbols, cycles and long text included). */
 export function describeValue(value: unknown): string {
@@ -59,10 +60,43 @@ function numberError(value: unknown, field: string, what: string, rule: NumberRu
   return bad(`must be ${rule.below ? 'less than' : 'at most'} ${max}${min !== undefined ? ` and ${rule.above ? 'greater than' : 'at least'} ${min}` : ''}`);
 }
 
-/** `value` when it is an object (not a list) or undefined (then `{}`), else an `INVALID_ARGUMENT` error naming `field`. */
-export function optionsArgument<T extends object>(value: T | undefined, field = 'options'): T {
+/** The keys an options object may have, and whose options they are (`dissolve`), for errors that name both. */
+export interface OptionNames {
+  readonly owner: string;
+  readonly keys: readonly string[];
+}
+
+/**
+ * The option names of `T`, written as an object so that the compiler checks
+ * that every key of `T` is listed (and nothing else).
+ */
+export function optionNames<T extends object>(owner: string, keys: { readonly [K in keyof Required<T>]: true }): OptionNames {
+  return Object.freeze({ owner, keys: Object.freeze(Object.keys(keys)) });
+}
+
+/**
+ * `INVALID_OPTION` for the first key of `value` that is not one of `names`,
+ * naming it and the nearest valid key: a misspelt option must not be ignored
+ * and the default used in silence.
+ */
+export function checkOptionKeys(value: object, names: OptionNames, field: string): void {
+  for (const key in value) {
+    if (!Object.prototype.hasOwnProperty.call(value, key) || names.keys.includes(key)) continue;
+    const hint = didYouMean(key, names.keys);
+    const where = field === 'options' ? `${names.owner} has no option` : `${field} (${names.owner}) has no key`;
+    throw new IonheatError('INVALID_OPTION', `${where} "${key}"${hint}; ${names.keys.length === 0 ? 'it takes none' : `known: ${names.keys.join(', ')}`}`, { field: field === 'options' ? key : `${field}.${key}` });
+  }
+}
+
+/**
+ * `value` when it is an object (not a list) or undefined (then `{}`) whose
+ * keys are all among `names`; else `INVALID_ARGUMENT` (not an object) or
+ * `INVALID_OPTION` (an unknown key, with the nearest valid one) naming `field`.
+ */
+export function optionsArgument<T extends object>(value: T | undefined, names: OptionNames, field = 'options'): T {
   if (value === undefined) return {} as T;
   if (value === null || typeof value !== 'object' || Array.isArray(value)) throw new IonheatError('INVALID_ARGUMENT', `${field} must be an object of named options, got ${describeValue(value)}`, { field });
+  checkOptionKeys(value, names, field);
   return value;
 }
 

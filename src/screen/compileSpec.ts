@@ -7,13 +7,15 @@
  *
  * @module
  */
-import { optionsArgument } from '../quantity/argumentChecks.js';
+import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import { IonheatError } from '../error.js';
 import { specError } from './specTokenize.js';
 import { parseSpec, type SpecNode } from './specParse.js';
 import { SpecFields, type SpecType } from './specFields.js';
 import type { SpecOutcome } from './screenRow.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
+
+const COMPILE_SPEC_OPTIONS = optionNames<CompileSpecOptions>('compileSpec', { schema: true, unavailable: true });
 
 /** A checked specification, ready to test rows. */
 export interface CompiledSpec {
@@ -90,7 +92,7 @@ const typeName = (t: SpecType): string =>
  * ```
  */
 export function compileSpec(text: string, options: CompileSpecOptions = {}): CompiledSpec {
-  options = optionsArgument(options);
+  options = optionsArgument(options, COMPILE_SPEC_OPTIONS);
   const tree = parseSpec(text);
   const schema = options.schema === undefined ? screenSpecSchema() : options.schema;
   const fields = schema ? new SpecFields(schema) : undefined;

@@ -6,13 +6,16 @@
  *
  * @module
  */
-import { describeValue } from '../quantity/argumentChecks.js';
+import { describeValue, checkOptionKeys, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
+import { BoundedCache } from '../data/boundedCache.js';
 import type { HazardClass, SourceEntry } from '../data/schemas.js';
 import { hazardClassSchema } from '../data/schemas.js';
 import { parseSalt } from '../chem/parseSalt.js';
+import { typoSuspicion } from '../chem/typoSuspicion.js';
 import { findIon } from '../chem/ionIndex.js';
+import { isIssuedSalt } from '../chem/issuedSalts.js';
 import { saltRecords } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
 import { IonheatError, isIonheatError } from '../error.js';
@@ -116,16 +119,57 @@ type Computed =
   | { ok: true; salt: Salt; result: DissolveResult; pack: PackResult | undefined; warmer: WarmerOutcome | undefined; hazards: HazardSummary }
   | { ok: false; salt?: Salt; error: IonheatError };
 
+const SCREEN_OPTIONS = optionNames<ScreenOptions>('the screen', { objective: true, direction: true, spec: true, filters: true, excludeMeasured: true, sources: true, fill: true });
+const FILTER_KEYS = optionNames<ScreenFilters>('the screen filters', { excludeSalts: true, excludeIons: true, excludeHazards: true, minMolarMass: true, maxMolarMass: true });
+const FILL_SPEC_KEYS = optionNames<FillSpec>('a standard fill', { saltMassG: true, waterMassG: true, startC: true });
+
 /** A fill as given, checked: positive masses, a start where water is liquid. */
 function checkFill(fill: FillSpec | string): FillSpec {
   if (typeof fill === 'string') return parseFillSpec(fill);
   if (fill === null || typeof fill !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'fill: a standard fill is { saltMassG, waterMassG, startC } or text such as 40:80@22', { field: 'fill' });
+  checkOptionKeys(fill, FILL_SPEC_KEYS, 'fill');
   const { saltMassG, waterMassG, startC } = fill;
   const ok = (x: unknown): x is number => typeof x === 'number' && Number.isFinite(x);
   if (!ok(saltMassG) || saltMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.saltMassG must be a positive number of grams, got ${describeValue(saltMassG)}`, { field: 'fill.saltMassG' });
   if (!ok(waterMassG) || waterMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.waterMassG must be a positive number of grams, got ${describeValue(waterMassG)}`, { field: 'fill.waterMassG' });
   if (!ok(startC) || startC < 0 || startC >= 100) throw new IonheatError('INVALID_ARGUMENT', `fill.startC must be a temperature from 0 °C up to (not including) 100 °C, where water is liquid; got ${describeValue(startC)}`, { field: 'fill.startC' });
   return { saltMassG, waterMassG, startC };
+}
+
+/** The message of anything thrown, without trusting it (it may itself be a hostile object). */
+function thrownText(e: unknown): string {
+  try {
+    return e instanceof Error ? e.message : String(e);
+  } catch {
+    return 'an object that cannot even be shown';
+  }
+}
+
+/**
+ * The options read once into a plain object of our own: a getter that
+ * throws, or a revoked proxy, becomes one `INVALID_ARGUMENT` error here
+ * rather than a raw error from deep inside the screen.
+ */
+function ownOptions(options: ScreenOptions): ScreenOptions {
+  try {
+    const { objective, direction, spec, filters, excludeMeasured, sources, fill } = options;
+    return {
+      ...(objective !== undefined ? { objective } : {}),
+      ...(direction !== undefined ? { direction } : {}),
+      ...(spec !== undefined ? { spec } : {}),
+      ...(filters !== undefined ? { filters: filters !== null && typeof filters === 'object' ? { ...filters } : filters } : {}),
+      ...(excludeMeasured !== undefined ? { excludeMeasured } : {}),
+      ...(sources !== undefined && sources !== null ? { sources: { ...sources } } : {}),
+      ...(fill !== undefined ? { fill: fill !== null && typeof fill === 'object' ? { ...fill } : fill } : {}),
+    };
+  } catch (e) {
+    throw new IonheatError('INVALID_ARGUMENT', `the options of the screen could not be read: ${thrownText(e)}`, { field: 'options' });
+  }
+}
+
+/** What the caller's own list of candidates (its iterator) threw, as an IonheatError naming the list. */
+export function candidateListError(e: unknown): IonheatError {
+  return isIonheatError(e) ? e : new IonheatError('INVALID_ARGUMENT', `the list of candidates could not be read: ${thrownText(e)}`, { field: 'candidates' });
 }
 
 /** The candidate's fields as one text, in a fixed order. */
@@ -144,21 +188,9 @@ function deepFreeze<T>(value: T): T {
   return value;
 }
 
-/** A map that forgets its oldest entry when full. */
-class BoundedMap<K, V> {
-  readonly #map = new Map<K, V>();
-  constructor(readonly limit: number) {}
-  get(key: K): V | undefined {
-    return this.#map.get(key);
-  }
-  set(key: K, value: V): void {
-    if (this.#map.size >= this.limit) this.#map.delete(this.#map.keys().next().value as K);
-    this.#map.set(key, value);
-  }
-}
-
 function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<string>; ions: Set<string>; hazards: Set<HazardClass> } {
   if (filters === null || typeof filters !== 'object') throw new IonheatError('INVALID_ARGUMENT', `filters must be an object, got ${describeValue(filters)}`, { field: 'filters' });
+  checkOptionKeys(filters, FILTER_KEYS, 'filters');
   for (const k of ['excludeSalts', 'excludeIons', 'excludeHazards'] as const) {
     const v: unknown = filters[k];
     if (v !== undefined && !(Array.isArray(v) && v.every((x) => typeof x === 'string'))) throw new IonheatError('INVALID_ARGUMENT', `${k} must be a list of text when given, got ${describeValue(v)}`, { field: k });
@@ -201,6 +233,8 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  */
 export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
   if (options === null || typeof options !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the options of a screen are an object', { field: 'options' });
+  options = ownOptions(options);
+  checkOptionKeys(options, SCREEN_OPTIONS, 'options');
   const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
   const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
   if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: ${describeValue(options.objective)} is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
@@ -224,8 +258,8 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         });
   const settings: ScreenSettings = { objective, direction, fill, spec: spec?.text ?? null, excludeMeasured };
 
-  const results = new BoundedMap<string, Computed>(CACHE_LIMIT);
-  const datasets = new BoundedMap<string, Dataset>(DATASET_CACHE_LIMIT);
+  const results = new BoundedCache<string, Computed>(CACHE_LIMIT);
+  const datasets = new BoundedCache<string, Dataset>(DATASET_CACHE_LIMIT);
   const seen = new RepeatIndex(DUPLICATE_LIMIT);
   const tally: ScreenSummary = { read: 0, computed: 0, failed: 0, excluded: 0, blankLines: 0, specHeld: 0, specFailed: 0 };
   let nextLine = 1;
@@ -300,12 +334,12 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
 
   const compute = (input: CandidateInput, given: Salt | undefined): Computed => {
     const own = input.measuredEnthalpy !== undefined || input.solubility !== undefined;
-    const key = given ? `salt\u0000${given.formula}` : own ? JSON.stringify([input.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, input.source]) : input.formula;
+    const key = given ? `salt\u0000${input.formula}` : own ? JSON.stringify([input.formula, input.measuredEnthalpy, input.measuredUncertainty, input.solubility, input.source]) : input.formula;
     const cached = results.get(key);
     if (cached) return cached;
     let computed: Computed;
-    // A salt given by the caller is copied: the results kept here are frozen, and the caller's object stays theirs.
-    let salt: Salt | undefined = given ? structuredClone(given) : undefined;
+    // A salt parseSalt issued is frozen and trusted; any other object claiming to be a salt (a copy, a proxy) is read again from its formula.
+    let salt: Salt | undefined = given && isIssuedSalt(given) ? given : undefined;
     try {
       salt ??= parseSalt(input.formula, dataset);
       // A fill, or a solubility, needs the row's values in a merged dataset (the pack model reads the tables);
@@ -366,12 +400,18 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       try {
         read = readCandidate(candidate);
       } catch (e) {
-        if (!isIonheatError(e)) throw e;
-        const formula = candidate && typeof candidate === 'object' && typeof (candidate as { formula?: unknown }).formula === 'string' ? (candidate as { formula: string }).formula : typeof candidate === 'string' ? candidate : '';
-        return failedRow(at, { formula }, e);
+        // A candidate is the caller's object: a getter that throws, or a revoked proxy, is one failed row, not the end of the screen.
+        const error = isIonheatError(e) ? e : new IonheatError('INVALID_ARGUMENT', `the candidate could not be read: ${thrownText(e)}`, { field: 'candidate' });
+        let formula = '';
+        try {
+          formula = typeof candidate === 'string' ? candidate : candidate && typeof candidate === 'object' && typeof (candidate as { formula?: unknown }).formula === 'string' ? (candidate as { formula: string }).formula : '';
+        } catch {
+          // the formula cannot be read either
+        }
+        return failedRow(at, { formula }, error);
       }
       const { input } = read;
-      const first = seen.firstLine(read.salt ? `salt\u0000${read.salt.formula}` : candidateKey(input), at);
+      const first = seen.firstLine(read.salt ? `salt\u0000${input.formula}` : candidateKey(input), at);
       const duplicate = first !== undefined ? { duplicateOf: first } : {};
 
       const computed = compute(input, read.salt);
@@ -382,13 +422,16 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       const { salt, result, hazards, pack, warmer } = computed;
       const excludedBy = exclusion(salt, () => hazards);
       if (excludedBy !== undefined) {
-        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements });
+        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements, hazardData: hazards.data });
       }
       const notes: string[] = [];
       if (input.measuredEnthalpy !== undefined) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
       if (input.solubility !== undefined) notes.push(`solubility ${input.solubility} g/100 g H2O from the screening input (source ${input.source ?? 'screenInput'}), taken as the same at every temperature${fill ? '' : '; it matters only to a fill'}`);
       if (pack && excludeMeasured) notes.push('the standard fill uses the enthalpy of solution the pack model finds, measured values included: excludeMeasured hides them from dissolve only');
       if (first !== undefined) notes.push(`the same candidate as line ${first}`);
+      // A formula that reads through a likely slip is computed (both readings are real salts) but never ranked silently.
+      const typo = read.salt ? undefined : typoSuspicion(input.formula, salt, dataset);
+      if (typo) notes.push(typo.message);
       const cost = input.pricePerKg === undefined ? undefined : costPerKJ(input.pricePerKg, result.perGram.salt, direction);
       if (input.pricePerKg !== undefined && cost === undefined) notes.push(`no cost per kJ: the 95 % interval of the heat per gram reaches zero or the wrong sign for ${direction === 'cool' ? 'cooling' : 'heating'}`);
       if (warmer && !warmer.ok) notes.push(`no standard warmer (100 g triggered at 20 °C): ${warmer.why}`);
@@ -407,9 +450,11 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         notes: notes.length > 0 ? [...result.notes, ...notes] : result.notes,
         hazards: hazards.classes,
         cautions: hazards.statements,
+        hazardData: hazards.data,
         ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
         ...(warmerRow ? { warmer: warmerRow } : {}),
-        suitability: suitabilityOf(result.verdict, direction),
+        suitability: typo ? 'undetermined' : suitabilityOf(result.verdict, direction),
+        ...(typo ? { suspectedTypo: { suggestion: typo.suggestion, message: typo.message } } : {}),
         ...(objectiveValue ? { objective: objectiveValue } : {}),
         ...(cost ? { costPerKJ: cost } : {}),
       };

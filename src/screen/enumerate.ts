@@ -4,7 +4,7 @@
  *
  * @module
  */
-import { describeValue } from '../quantity/argumentChecks.js';
+import { describeValue, checkOptionKeys, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { HazardClass, IonKind, IonRecord } from '../data/schemas.js';
@@ -75,6 +75,8 @@ function saltOf(cation: IonRecord, anion: IonRecord, dataset: Dataset): Salt {
   return { formula, anhydrous: formula, kind: 'ionic', ions, water: 0, composition, molarMass: molarMass(composition, dataset) };
 }
 
+const ENUMERATE_FILTERS = optionNames<EnumerateFilters>('enumerate', { cationCharges: true, anionCharges: true, cationKinds: true, anionKinds: true, cations: true, anions: true, excludeIons: true, excludeHazards: true, minMolarMass: true, maxMolarMass: true });
+
 /**
  * Every charge-balanced salt of one cation and one anion of the dataset's ion
  * table (anhydrous, the hydrogen ion left out), in table order: cations in
@@ -102,6 +104,7 @@ function saltOf(cation: IonRecord, anion: IonRecord, dataset: Dataset): Salt {
  */
 export function enumerate(filters: EnumerateFilters = {}, dataset: Dataset = builtinDataset()): Salt[] {
   if (filters === null || typeof filters !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'the filters of enumerate are an object', { field: 'filters' });
+  checkOptionKeys(filters, ENUMERATE_FILTERS, 'options');
   for (const k of ['cationCharges', 'anionCharges', 'cations', 'anions', 'excludeIons', 'cationKinds', 'anionKinds', 'excludeHazards'] as const) {
     const v: unknown = filters[k];
     if (v !== undefined && !Array.isArray(v)) throw new IonheatError('INVALID_ARGUMENT', `${k} must be a list when given, got ${describeValue(v)}`, { field: k });

@@ -21,6 +21,7 @@
  *
  * @module
  */
+import { measuredValueDisagreement } from '../solution/userValueCheck.js';
 import { Dataset } from '../data/dataset.js';
 import type { SourceEntry } from '../data/schemas.js';
 import type { Salt } from '../chem/salt.js';
@@ -43,6 +44,9 @@ export interface OwnMeasurement {
   citation?: SourceEntry;
 }
 
+/** How a candidate's own values are named, as the label of the dataset they are merged into. */
+export const OWN_MEASUREMENT_LABEL = 'screening input';
+
 /**
  * The measured estimate of a candidate's own value, exactly as the tables'
  * `measured` basis would give it for a record of that value.
@@ -56,7 +60,7 @@ export function ownMeasuredEstimate(salt: Salt, tableFormula: string, own: OwnMe
   if (!solutionTable || !ions || !elements) throw new IonheatError('MISSING_DATA', `the ${dataset.label} tables lack the ion, element or solution-enthalpy table`, {});
   const small = new Dataset({ 'ions.json': ions, 'elements.json': elements, 'solution-enthalpies.json': { ...solutionTable, records: [] } }, dataset.sources, dataset.label);
   const record = { formula: tableFormula, value: own.value, unit: 'kJ/mol', uncertainty: own.u ?? null, source: own.source, fromMemory: false, note: 'given with the candidate in the screening input' };
-  const merged = small.withOverrides({ 'solution-enthalpies.json': [record] }, 'screening input', own.citation ? { [own.source]: own.citation } : {});
+  const merged = small.withOverrides({ 'solution-enthalpies.json': [record] }, OWN_MEASUREMENT_LABEL, own.citation ? { [own.source]: own.citation } : {});
   const measured = measuredSolutionEnthalpy(salt, merged);
   if (!measured) throw new IonheatError('INVALID_ARGUMENT', `measuredEnthalpy: the value given for ${salt.formula} could not be matched to the salt`, { field: 'measuredEnthalpy' });
   return measured;
@@ -75,8 +79,11 @@ export function withOwnMeasurement(result: DissolveResult, measured: Estimate, d
   const salt = result.salt;
   const others = result.estimates.filter((e) => !(e.basis === 'measured' && e.method === measured.method));
   const fill = saturatedFill(salt, dataset);
+  // As dissolve over a merged dataset would say it: the candidate's value against the other bases.
+  const disagreement = measuredValueDisagreement(measured, others, OWN_MEASUREMENT_LABEL);
   return {
     ...result,
+    ...(disagreement ? { notes: [...result.notes, disagreement] } : {}),
     best: measured,
     estimates: [measured, ...others],
     ...solutionVerdict(measured),

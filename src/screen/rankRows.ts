@@ -8,6 +8,9 @@ export function isRankable(row: ScreenRow): row is ScreenRow & { objective: NonN
   return row.status === 'computed' && row.objective !== undefined && row.suitability !== undefined;
 }
 
+/** What ranking reads of a row (a table writer may keep only this and its cells). */
+export type RankKey = Pick<ScreenRow, 'line' | 'suitability'> & { objective?: { value: number } | undefined };
+
 /**
  * Orders two rankable rows: salts that suit the direction first, then those
  * whose verdict is undetermined, then those that work the other way; within
@@ -15,7 +18,7 @@ export function isRankable(row: ScreenRow): row is ScreenRow & { objective: NonN
  * warmer objective does not group by the dissolution verdict, which says
  * nothing about a melt that crystallises.
  */
-export function compareRanked(a: ScreenRow, b: ScreenRow, objective: ObjectiveName, direction: Direction): number {
+export function compareRanked(a: RankKey, b: RankKey, objective: ObjectiveName, direction: Direction): number {
   const sign = higherIsBetter(objective, direction) ? -1 : 1;
   const group = WARMER_OBJECTIVES.has(objective) ? 0 : GROUP[a.suitability!] - GROUP[b.suitability!];
   return group || sign * (a.objective!.value - b.objective!.value) || a.line - b.line;

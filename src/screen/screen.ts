@@ -8,7 +8,7 @@ import { IonheatError } from '../error.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { CandidateLike } from './candidate.js';
-import { createScreener, type ScreenOptions } from './createScreener.js';
+import { candidateListError, createScreener, type ScreenOptions } from './createScreener.js';
 import { rankRows } from './rankRows.js';
 import type { ScreenRow, ScreenSettings, ScreenSummary } from './screenRow.js';
 
@@ -58,11 +58,32 @@ export interface ScreenResult {
  * ```
  */
 export function screen(candidates: Iterable<CandidateLike>, options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): ScreenResult {
-  if (candidates === null || typeof candidates !== 'object' || typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] !== 'function') {
+  let iterable: boolean;
+  try {
+    iterable = candidates !== null && typeof candidates === 'object' && typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] === 'function';
+  } catch (e) {
+    throw candidateListError(e);
+  }
+  if (!iterable) {
     throw new IonheatError('INVALID_ARGUMENT', `the candidates of a screen are a list of formulas or candidate objects, got ${describeValue(candidates)}`, { field: 'candidates' });
   }
   const screener = createScreener(options, dataset);
   const rows: ScreenRow[] = [];
-  for (const candidate of candidates) rows.push(screener.row(candidate));
+  let iterator: Iterator<CandidateLike>;
+  try {
+    iterator = candidates[Symbol.iterator]();
+  } catch (e) {
+    throw candidateListError(e);
+  }
+  for (;;) {
+    let next: IteratorResult<CandidateLike>;
+    try {
+      next = iterator.next();
+    } catch (e) {
+      throw candidateListError(e);
+    }
+    if (next.done) break;
+    rows.push(screener.row(next.value));
+  }
   return { settings: screener.settings, rows: rankRows(rows, screener.settings.objective, screener.settings.direction), summary: screener.summary() };
 }

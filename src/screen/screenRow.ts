@@ -112,9 +112,17 @@ export const screenRowSchema = z
     notes: z.array(z.string()).optional(),
     hazards: z.array(hazardClassSchema).optional().describe('hazard classes of the salt and its ions from the hazards table'),
     cautions: z.array(z.string()).optional().describe('the hazards table statements for the salt and its ions'),
+    hazardData: z
+      .enum(['classified', 'not classified', 'no hazard data'])
+      .optional()
+      .describe('whether the hazards table classifies the salt, checked it and found no class, or has no data (then an empty hazards list says nothing)'),
     fill: fillResultSchema.optional(),
     warmer: warmerRowSchema.optional(),
     suitability: suitabilitySchema.optional(),
+    suspectedTypo: z
+      .strictObject({ suggestion: z.string(), message: z.string() })
+      .optional()
+      .describe('the formula reads through a likely slip (a digit 0 for O, 1 for l…) and one slip away is another measured salt; the row is ranked as undetermined until you confirm'),
     objective: estimateSchema.optional().describe('the value the screen ranks by'),
     costPerKJ: estimateSchema.optional().describe('price per kJ of heat in the chosen direction, where a price is given'),
     rank: z.number().int().min(1).optional().describe('place in the ranking (1 = best); absent in streamed output'),

@@ -8,7 +8,7 @@ import { IonheatError } from '../error.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { CandidateLike } from './candidate.js';
-import { createScreener, type ScreenOptions } from './createScreener.js';
+import { candidateListError, createScreener, type ScreenOptions } from './createScreener.js';
 import type { ScreenRow, ScreenSummary } from './screenRow.js';
 
 /**
@@ -38,9 +38,30 @@ export async function* screenStream(
   options: ScreenOptions = {},
   dataset: Dataset = builtinDataset(),
 ): AsyncGenerator<ScreenRow, ScreenSummary, undefined> {
-  const iterable = candidates !== null && typeof candidates === 'object' && (typeof (candidates as AsyncIterable<CandidateLike>)[Symbol.asyncIterator] === 'function' || typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] === 'function');
+  let iterable: boolean;
+  try {
+    iterable = candidates !== null && typeof candidates === 'object' && (typeof (candidates as AsyncIterable<CandidateLike>)[Symbol.asyncIterator] === 'function' || typeof (candidates as Iterable<CandidateLike>)[Symbol.iterator] === 'function');
+  } catch (e) {
+    throw candidateListError(e);
+  }
   if (!iterable) throw new IonheatError('INVALID_ARGUMENT', `the candidates of a screen are a list or stream of formulas or candidate objects, got ${describeValue(candidates)}`, { field: 'candidates' });
   const screener = createScreener(options, dataset);
-  for await (const candidate of candidates) yield screener.row(candidate);
+  const asyncSource = typeof (candidates as AsyncIterable<CandidateLike>)[Symbol.asyncIterator] === 'function';
+  let iterator: AsyncIterator<CandidateLike> | Iterator<CandidateLike>;
+  try {
+    iterator = asyncSource ? (candidates as AsyncIterable<CandidateLike>)[Symbol.asyncIterator]() : (candidates as Iterable<CandidateLike>)[Symbol.iterator]();
+  } catch (e) {
+    throw candidateListError(e);
+  }
+  for (;;) {
+    let next: IteratorResult<CandidateLike>;
+    try {
+      next = await iterator.next();
+    } catch (e) {
+      throw candidateListError(e);
+    }
+    if (next.done) break;
+    yield screener.row(next.value);
+  }
   return screener.summary();
 }

@@ -6,7 +6,7 @@
  * @module
  */
 import { saltArgument } from '../chem/saltArgument.js';
-import { optionsArgument } from '../quantity/argumentChecks.js';
+import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { chargeType, type Salt } from '../chem/salt.js';
@@ -18,6 +18,8 @@ import { anchorIndex, binaryIons, type AnchorSalt, type IndexedAnchor } from './
 import { saltIonClass, type SaltIonClass } from '../lattice/saltIonClass.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+
+const ANCHORED_OPTIONS = optionNames<{ excludeMeasured?: boolean }>('anchoredSolutionEnthalpies', { excludeMeasured: true });
 
 /** Nearest cations N and nearest anions Y tried per target: at most this many of each, so at most its square of anchor sets. */
 export const ANCHOR_NEIGHBOURS = 6;
@@ -497,7 +499,7 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
  */
 export function anchoredSolutionEnthalpies(salt: Salt, options: { excludeMeasured?: boolean } = {}, dataset: Dataset = builtinDataset()): Estimate[] {
   salt = saltArgument(salt, dataset);
-  options = optionsArgument(options);
+  options = optionsArgument(options, ANCHORED_OPTIONS);
   let lattice: SaltLattice | undefined;
   return anchoredEstimates(salt, () => (lattice ??= saltLattice(salt, dataset)), options, dataset);
 }

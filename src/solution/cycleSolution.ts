@@ -1,12 +1,14 @@
 import type { Dataset } from '../data/dataset.js';
 import { saltArgument } from '../chem/saltArgument.js';
-import { optionsArgument } from '../quantity/argumentChecks.js';
+import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
 import { saltRecords, WATER } from '../chem/saltRecords.js';
 import { exactSum, type Term } from '../quantity/exactSum.js';
 import { linearUncertainty } from '../quantity/propagate.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
+
+const CYCLE_SOLUTION_OPTIONS = optionNames<{ hideCrystal?: boolean }>('solutionEnthalpyFromCycle', { hideCrystal: true });
 
 interface CycleTerm extends Term {
   u: number;
@@ -69,7 +71,7 @@ export function solutionCycleTerms(salt: Salt, dataset: Dataset = builtinDataset
  */
 export function solutionEnthalpyFromCycle(salt: Salt, dataset: Dataset = builtinDataset(), options: { hideCrystal?: boolean } = {}): Estimate | undefined {
   salt = saltArgument(salt, dataset);
-  options = optionsArgument(options);
+  options = optionsArgument(options, CYCLE_SOLUTION_OPTIONS);
   const terms = solutionCycleTerms(salt, dataset, options);
   if (!terms) return undefined;
   const memory = terms.filter((t) => t.fromMemory).map((t) => t.label);

@@ -5,8 +5,11 @@
  * @module
  */
 import { saltArgument } from '../chem/saltArgument.js';
-import { optionsArgument } from '../quantity/argumentChecks.js';
+import { typoSuspicion } from '../chem/typoSuspicion.js';
+import { userValueDisagreement } from './userValueCheck.js';
+import { optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
+import type { BoundedCache } from '../data/boundedCache.js';
 import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import type { Salt } from '../chem/salt.js';
@@ -27,6 +30,8 @@ import { hypotheticalHydrate, type HypotheticalHydrate } from './knownHydrates.j
 import { hydrationText, modelEstimate } from './modelSolution.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+
+const DISSOLVE_OPTIONS = optionNames<DissolveOptions>('dissolve', { excludeMeasured: true, temperatureC: true });
 
 export interface DissolveOptions {
   /**
@@ -94,10 +99,10 @@ function waterFormation(dataset: Dataset): number | undefined {
  * nowhere ({@link dissolveUncached}: every call computes its salt afresh
  * from the dataset's indexes).
  */
-type ProfileStore = Map<string, SaltProfile> | undefined;
+type ProfileStore = BoundedCache<string, SaltProfile> | undefined;
 
-function profileStore(dataset: Dataset): Map<string, SaltProfile> {
-  return dataset.memo('solution.profiles', () => new Map<string, SaltProfile>());
+function profileStore(dataset: Dataset): BoundedCache<string, SaltProfile> {
+  return dataset.cache<string, SaltProfile>('solution.profiles');
 }
 
 /** The anhydrous salt of a hydrate, parsed; kept with the hydrate's profile where profiles are kept. */
@@ -367,12 +372,14 @@ export function dissolveUncached(formula: string | Salt, options: DissolveOption
 
 function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset: Dataset, store: ProfileStore): DissolveResult {
   const salt = saltArgument(formula, dataset, 'formula');
-  options = optionsArgument(options);
+  options = optionsArgument(options, DISSOLVE_OPTIONS);
   const hide = options.excludeMeasured === true;
   const celsius = options.temperatureC ?? TABLE_TEMPERATURE_C;
   checkKirchhoffTemperature(celsius);
   if (Object.is(celsius, -0)) return dissolveWith(salt, { ...options, temperatureC: 0 }, dataset, store);
   const notes: string[] = [];
+  const typo = typeof formula === 'string' ? typoSuspicion(formula, salt, dataset) : undefined;
+  if (typo) notes.push(typo.message);
   const hypothetical = hypotheticalHydrate(salt, dataset);
   if (hypothetical) notes.push(hypotheticalText(salt, hypothetical));
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
@@ -389,6 +396,8 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
     estimates = at25.estimates.map((e) => kirchhoffCorrection(e, celsius, heatCapacity, typical)).sort(rank);
     if (!heatCapacity) notes.push(`no heat capacity of solution for ${salt.formula}: values are those at 25 °C with a widened interval`);
   }
+  const disagreement = userValueDisagreement(estimates, dataset);
+  if (disagreement) notes.push(disagreement);
   const best = estimates[0];
   if (!best) throw (profile.failure[hide ? 'hidden' : 'open'] ??= failure(salt, hide, dataset));
   const perGram = celsius === TABLE_TEMPERATURE_C && at25.perGram ? { ...at25.perGram } : perGramOf(best, salt, profile);

@@ -6,7 +6,7 @@
  *
  * @module
  */
-import { describeValue, estimateArgument, numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
+import { describeValue, estimateArgument, numberArgument, optionsArgument, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { saltRecordIndex, saltRecords, WATER } from '../chem/saltRecords.js';
@@ -16,6 +16,9 @@ import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { widenEstimate } from './widenEstimate.js';
 import { tableSalts } from './tableSalts.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+
+const RULE_SCATTER_OPTIONS = optionNames<{ excludeFormula?: string; family?: string }>('hydrateRuleScatter', { excludeFormula: true, family: true });
+const RULE_INPUT = optionNames<HydrateRuleInput>('hydrateFromParent', { parentFormula: true, parentWater: true, water: true, waterFormation: true, scatter: true, theta: true, family: true, thetaU: true });
 
 /**
  * θ_Hf(H₂O, s–s): the change in standard enthalpy of formation of a solid
@@ -187,7 +190,7 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
  * ```
  */
 export function hydrateRuleScatter(options: { excludeFormula?: string; family?: string } = {}, dataset: Dataset = builtinDataset()): HydrateRuleScatter {
-  options = optionsArgument(options);
+  options = optionsArgument(options, RULE_SCATTER_OPTIONS);
   const pairs = rulePairs(dataset).filter((p) => p.hydrate !== options.excludeFormula && p.parent !== options.excludeFormula);
   const rms = (list: readonly RulePair[], theta: number): number => Math.sqrt(list.reduce((s, p) => s + (p.waters * (p.theta - theta)) ** 2 / p.waters, 0) / Math.max(1, list.length));
   if (options.family === undefined) return { perSqrtWater: rms(pairs, WATER_OF_CRYSTALLIZATION_ENTHALPY), pairs: pairs.length, theta: WATER_OF_CRYSTALLIZATION_ENTHALPY, family: 'all (θ of Jenkins and Glasser)', thetaU: 0 };
@@ -240,7 +243,7 @@ export function hydrateRuleScatter(options: { excludeFormula?: string; family?: 
  */
 export function hydrateFromParent(parent: Estimate, rule: HydrateRuleInput): Estimate {
   parent = estimateArgument(parent, 'parent');
-  rule = optionsArgument(rule, 'rule');
+  rule = optionsArgument(rule, RULE_INPUT, 'rule');
   if (typeof rule.parentFormula !== 'string') throw new IonheatError('INVALID_ARGUMENT', `rule.parentFormula must be a formula, got ${describeValue(rule.parentFormula)}`, { field: 'rule.parentFormula' });
   numberArgument(rule.parentWater, 'rule.parentWater', 'the waters of crystallization of the parent', { min: 0, max: 1000 });
   numberArgument(rule.water, 'rule.water', 'the waters of crystallization of the hydrate', { min: 0, max: 1000 });

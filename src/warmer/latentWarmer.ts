@@ -11,7 +11,7 @@ import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
 import { saltRecords, WATER } from '../chem/saltRecords.js';
 import { IonheatError } from '../error.js';
-import { describeValue, numberArgument, optionsArgument } from '../quantity/argumentChecks.js';
+import { checkOptionKeys, describeValue, numberArgument, optionNames, optionsArgument } from '../quantity/argumentChecks.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { parameter, type TimeCourseOptions, type TimeCourseParameter } from '../pack/packTimeCourse.js';
@@ -118,8 +118,12 @@ interface DataValues {
   solubilityScale: number;
 }
 
+const WARMER_OPTIONS = optionNames<WarmerOptions>('latentWarmer', { ambientC: true, ambientConductanceWPerK: true, skinC: true, skinConductanceWPerK: true, durationS: true, samples: true });
+const WARMER_FILL = optionNames<WarmerFill>('a warmer fill', { salt: true, massG: true, extraWaterG: true, startC: true, containerJPerK: true });
+
 function checkFill(fill: WarmerFill): { massG: number; extraWaterG: number; startC: number; containerJPerK: number } {
   if (fill === null || typeof fill !== 'object' || Array.isArray(fill)) throw new IonheatError('INVALID_ARGUMENT', `a warmer fill is { salt, massG, extraWaterG?, startC?, containerJPerK? }, got ${describeValue(fill)}`, { field: 'fill' });
+  checkOptionKeys(fill, WARMER_FILL, 'fill');
   return {
     massG: numberArgument(fill.massG, 'massG', 'the mass of hydrate in g', { min: 1e-3, max: 1e6 }),
     extraWaterG: fill.extraWaterG === undefined ? 0 : numberArgument(fill.extraWaterG, 'extraWaterG', 'the extra water in g', { min: 0, max: 1e6 }),
@@ -202,7 +206,7 @@ function waterHeatCapacity(dataset: Dataset): { value: number; source: string } 
  * ```
  */
 export function latentWarmer(fill: WarmerFill, options: WarmerOptions = {}, dataset: Dataset = builtinDataset()): WarmerResult {
-  options = optionsArgument(options);
+  options = optionsArgument(options, WARMER_OPTIONS);
   const given = checkFill(fill);
   const melt = warmerMelt(fill.salt, dataset);
   const asCourse = options as TimeCourseOptions;

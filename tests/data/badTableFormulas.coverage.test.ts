@@ -29,7 +29,7 @@ describe('override records whose formula is not a salt', () => {
     );
     const e = refusal(() => measuredSolutionEnthalpy(parseSalt('NaCl', mine), mine));
     expect(e.code).toBe('INVALID_DATA');
-    expect(e.message).toMatch(/^built-in \+ mine\.json table solution-enthalpies\.json, record \d+ \("NaXy"\): "Xy" at position 2 is not a chemical element$/);
+    expect(e.message).toMatch(/^built-in \+ mine\.json table solution-enthalpies\.json, record \d+ \("NaXy"\): "Xy" at position 3 is not a chemical element$/);
     expect(e.field).toMatch(/^solution-enthalpies\.json\[\d+\]\.formula$/);
     // The built-in table still gives NaCl its CRC value, 3.88 kJ/mol.
     expect(measuredSolutionEnthalpy(parseSalt('NaCl'))?.value).toBe(3.88);
@@ -39,7 +39,7 @@ describe('override records whose formula is not a salt', () => {
     const mine = builtinDataset().withOverrides({ 'hazards.json': [{ subject: 'NaXy', classes: ['toxic'], statement: 'Toxic.', source: 'supplierSds', fromMemory: true }] }, 'mine.json');
     const e = refusal(() => saltHazards('NaCl', mine));
     expect(e.code).toBe('INVALID_DATA');
-    expect(e.message).toBe('built-in + mine.json table hazards.json ("NaXy"): "Xy" at position 2 is not a chemical element');
+    expect(e.message).toBe('built-in + mine.json table hazards.json ("NaXy"): "Xy" at position 3 is not a chemical element');
     expect(e.field).toBe('hazards.json.subject');
     expect(saltHazards('NaCl')).toEqual([]);
   });

@@ -53,10 +53,10 @@ describe('Dataset.withOverrides', () => {
   });
 
   it.each([
-    [{ 'solution-enthalpies.json': [{ ...mine, value: 'hot' }] }, /x\.json: solution-enthalpies\.json record 1, field "value"/],
+    [{ 'solution-enthalpies.json': [{ ...mine, value: 'hot' }] }, /x\.json: solution-enthalpies\.json record 1 \(KNO3\), field "value"/],
     [{ 'solution-enthalpies.json': [{ ...mine, unit: 'kcal/mol' }] }, /field "unit"/],
     [{ 'solution-enthalpies.json': [{ ...mine, extra: 1 }] }, /Unrecognized key/],
-    [{ 'solution-enthalpies.json': [mine, mine] }, /record 2 repeats the key "KNO3"/],
+    [{ 'solution-enthalpies.json': [mine, mine] }, /record 2 \(KNO3\) repeats the key "KNO3"/],
     [{ 'solution-enthalpies.json': [{ ...mine, source: 'nowhere' }] }, /cites source "nowhere"/],
     [{ 'no-such-table.json': [] }, /"no-such-table\.json" is not a table/],
     [{ 'solution-enthalpies.json': {} }, /must be a list of records/],

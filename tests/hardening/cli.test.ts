@@ -124,6 +124,13 @@ const NULLABLE = new Set([
   '$.curve[].clamp',
   '$.design.saturationRatio',
   '$.target.design',
+  // the margins of a design: null where the target is out of reach, where no mass reaches the line, or no caution is due
+  '$.target.margin.designedMassG',
+  '$.target.margin.massInterval',
+  '$.target.margin.massInterval.high',
+  '$.target.margin.finalTemperature',
+  '$.target.margin.caution',
+  '$.target.margin.threshold.largestSafeMassG',
   '$.timeCourse.band',
   '$.timeCourse.band.firstInsideS',
   '$.timeCourse.band.lastInsideS',
@@ -177,7 +184,7 @@ describe('the command line under hostile arguments', () => {
     [['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', 'Infinity'], /^ionheat: --water needs a number, got "Infinity"/],
     [['pack', '--salt', 'NH4NO3', '--salt-mass', '-0', '--water', '100'], /^ionheat: --salt-mass must be greater than zero/],
     [['dissolve', 'NaCl', '--temperature', '1e308'], /^ionheat: .*temperature/],
-    [['dissolve', 'Na999999999Cl999999999'], /^ionheat: the count 999999999 at position 2 is too large/],
+    [['dissolve', 'Na999999999Cl999999999'], /^ionheat: the count 999999999 at position 3 is too large/],
     [['salt', HUGE], /^ionheat: the formula is 100000 characters long/],
     [['salt', '('.repeat(10_000)], /^ionheat: the formula is 10000 characters long/],
     [['screen', 'missing.csv'], /^ionheat: .*missing\.csv/],
@@ -190,7 +197,7 @@ describe('the command line under hostile arguments', () => {
     [['dissolve', 'NaCl', '--data'], /^ionheat: --data needs a file name/],
     [['cycle', 'NaCl', '--svg', '/nonexistent/dir/x.svg'], /^ionheat: .*x\.svg/],
     // Found with IONHEAT_FC_SEED=4: JSON.parse quotes the file's text, newlines and all, in its message.
-    [['salt', 'NaCl', '--data=good.csv'], /^ionheat: good\.csv: not valid JSON \(.*\)\n$/],
+    [['salt', 'NaCl', '--data=good.csv'], /^ionheat: good\.csv: not valid JSON at line 1, column 1 \(.*\)\n$/],
     [['screen', 'broken.csv', '--data', 'mixed.csv'], /^ionheat: mixed\.csv: not valid JSON/],
   ];
   // Fresh input files: the random runs above may have written charts over the scratch files.

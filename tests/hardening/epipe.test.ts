@@ -1,8 +1,10 @@
 /**
  * A reader that stops early (`ionheat screen big.csv | head -1`) closes the
  * pipe under the command; the next write fails with EPIPE. The built command
- * must then end quietly with status 0: no "Unhandled 'error' event", no stack
- * trace. Spawns dist/cli.js (built by `npm test`) with a pipe on stdout.
+ * must then end quietly (no "Unhandled 'error' event", no stack trace) with
+ * the status its results call for, as if the output had been read to the end:
+ * a closed pipe never turns a failed spec into success (issue 13).
+ * Spawns dist/cli.js (built by `npm test`) with a pipe on stdout.
  */
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -45,15 +47,19 @@ function runClosingEarly(args: string[], keep: number): Promise<{ status: number
 
 describe('output to a reader that closes early', () => {
   it.each([
-    [['screen', 'big.csv', '--format', 'csv'], 'line,status,input.formula'],
-    [['screen', 'big.csv', '--format', 'json'], '{'],
-    [['screen', 'big.csv'], ''],
-    [['screen', '--enumerate', '--format', 'csv'], 'line,status,input.formula'],
-  ])('ionheat %j | head -1: status 0, no EPIPE error', async (args, firstLine) => {
+    [['screen', 'big.csv', '--format', 'csv'], 'line,status,input.formula', 0],
+    [['screen', 'big.csv', '--format', 'json'], '{', 0],
+    [['screen', 'big.csv'], '', 0],
+    // Some enumerated salts have no enthalpy of solution: a whole run exits 2, and so does one cut short by the reader.
+    [['screen', '--enumerate', '--format', 'csv'], 'line,status,input.formula', 2],
+    // The spec fails for every row: 1, not 0, though the reader took only the header.
+    [['screen', 'big.csv', '--format', 'csv', '--spec', 'best.low > 1000'], 'line,status,input.formula', 1],
+  ])('ionheat %j | head -1: no EPIPE error, and the status of the whole screen', async (args, firstLine, status) => {
     const r = await runClosingEarly(args, 1);
     expect(r.err).not.toMatch(/EPIPE|Unhandled|at .+:\d+/);
-    expect(r.status).toBe(0);
+    expect(r.status).toBe(status);
     expect(r.lines[0]!.startsWith(firstLine)).toBe(true);
+    expect(r.err).toMatch(/^screen: \d+ rows read.*; output stopped early \(the reader closed it\)\n$/m);
   });
 
   it.each([

@@ -67,8 +67,8 @@ describe('dilute sodium chloride fill: 10 g NaCl in 100 g water at 20 °C', () =
     expect(r.dissolved[0]!.undissolvedMass).toBe(0);
   });
   it('closes its energy balance', () => expectClosure(r));
-  it('notes the missing hazard entry (NaCl is deliberately absent from the hazards table)', () => {
-    expect(r.cautions.some((c) => c.startsWith('NaCl: no hazard entry'))).toBe(true);
+  it('says NaCl has no hazard class (both ions checked), not that it has no data', () => {
+    expect(r.cautions.some((c) => c.startsWith('NaCl: no hazard class in the ionheat hazards table'))).toBe(true);
   });
 });
 

@@ -1,5 +1,6 @@
 import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { IonheatError } from '../../error.js';
+import { didYouMean } from '../../quantity/nearestName.js';
 
 export type OptionSpec = NonNullable<ParseArgsConfig['options']>;
 
@@ -10,20 +11,48 @@ export interface ParsedArgs<O extends OptionSpec> {
 }
 
 /**
- * Parses a command's arguments strictly: an unknown option, a missing value
- * or a stray positional becomes an `INVALID_ARGUMENT` error naming it.
+ * Options that do nothing without another: each key names an option, its
+ * value the options of which at least one must be given with it, and why.
  */
-export function readArgs<O extends OptionSpec>(argv: readonly string[], options: O, positionals: { min: number; max: number; names: string }): ParsedArgs<O> {
+export type OptionNeeds<O extends OptionSpec> = Partial<Record<keyof O & string, { anyOf: readonly (keyof O & string)[]; why: string }>>;
+
+/** `--name`, with a did-you-mean among the command's options. */
+function unknownOption(message: string, options: OptionSpec): string {
+  const m = /'(-{1,2}[^'=]+)/.exec(message);
+  if (!m) return message;
+  const typed = m[1]!;
+  const names = Object.keys(options).map((k) => `--${k}`);
+  return `unknown option ${typed}${didYouMean(typed, names, '')}; this command takes ${names.join(', ')} (and --data, --help)`;
+}
+
+/**
+ * Parses a command's arguments strictly: an unknown option (with the nearest
+ * known one), a missing value, a stray positional, or an option given without
+ * the one it needs becomes an `INVALID_ARGUMENT` error naming it.
+ */
+export function readArgs<O extends OptionSpec>(argv: readonly string[], options: O, positionals: { min: number; max: number; names: string }, needs: OptionNeeds<O> = {}): ParsedArgs<O> {
   let parsed: ParsedArgs<O>;
   try {
     parsed = parseArgs({ args: [...argv], options, strict: true, allowPositionals: true, allowNegative: false }) as unknown as ParsedArgs<O>;
   } catch (e) {
     const message = e instanceof Error ? e.message.split('\n')[0]!.replace(/^[A-Z_]+: /, '') : String(e);
+    const code = (e as { code?: unknown }).code;
+    if (code === 'ERR_PARSE_ARGS_UNKNOWN_OPTION') throw new IonheatError('INVALID_ARGUMENT', unknownOption(message, options), {});
     throw new IonheatError('INVALID_ARGUMENT', message.replace(/\. To specify a positional argument.*$/, ''), {});
   }
   const n = parsed.positionals.length;
   if (n < positionals.min) throw new IonheatError('INVALID_ARGUMENT', `missing ${positionals.names}`, {});
-  if (n > positionals.max) throw new IonheatError('INVALID_ARGUMENT', `unexpected argument "${parsed.positionals[positionals.max]}"`, {});
+  if (n > positionals.max) {
+    const extra = parsed.positionals[positionals.max]!;
+    const asOption = extra.startsWith('—') || extra.startsWith('–') ? ` (write options with two hyphens: --${extra.slice(1)})` : '';
+    throw new IonheatError('INVALID_ARGUMENT', `unexpected argument "${extra}"${asOption}`, {});
+  }
+  for (const [name, need] of Object.entries(needs) as [string, { anyOf: readonly string[]; why: string }][]) {
+    const given = (parsed.values as Record<string, unknown>)[name];
+    if (given === undefined) continue;
+    if (need.anyOf.some((other) => (parsed.values as Record<string, unknown>)[other] !== undefined)) continue;
+    throw new IonheatError('INVALID_ARGUMENT', `--${name} has no effect without ${need.anyOf.map((o) => `--${o}`).join(' or ')}: ${need.why}`, { field: name });
+  }
   return parsed;
 }
 

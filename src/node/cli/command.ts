@@ -6,6 +6,8 @@ export interface CommandContext {
   io: CliIO;
   /** The built-in tables, with the user's `--data` files merged over them. */
   dataset: Dataset;
+  /** Full paths of the `--data` files of the run (outputs must never be written over them). */
+  inputFiles?: readonly string[];
 }
 
 /** One subcommand of `ionheat`. */

@@ -48,13 +48,13 @@ export const cycleCommand: Command = {
       argv,
       { solve: { type: 'string' }, lattice: { type: 'string' }, 'lattice-u': { type: 'string' }, formation: { type: 'string' }, svg: { type: 'string' }, json: { type: 'boolean' } },
       { min: 1, max: 1, names: 'the formula' },
+      { 'lattice-u': { anyOf: ['lattice'], why: 'it is the uncertainty of the lattice enthalpy you give' } },
     );
     const solve = readSolve(values.solve);
     const salt = parseSalt(positionals[0]!, dataset);
     const given = numberOption(values.lattice, 'lattice');
     const givenU = numberOption(values['lattice-u'], 'lattice-u');
     if (givenU !== undefined && givenU < 0) throw new IonheatError('INVALID_ARGUMENT', `--lattice-u cannot be negative, got ${givenU}`, { field: 'lattice-u' });
-    if (givenU !== undefined && given === undefined) throw new IonheatError('INVALID_ARGUMENT', '--lattice-u needs --lattice', { field: 'lattice-u' });
     const formation = numberOption(values.formation, 'formation');
     let latticeEnthalpy: KnownValue | undefined;
     if (given !== undefined) latticeEnthalpy = { value: given, u: givenU ?? Math.abs(given) * 0.01, source: 'given' };

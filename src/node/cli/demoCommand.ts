@@ -189,15 +189,21 @@ export function runDemoPart(part: DemoPart, dataset?: Dataset): { result: Screen
 export const demoCommand: Command = {
   name: 'demo',
   summary: 'run the demonstration: screen cold-pack and hand-warmer candidates for a first-aid supplier (prices invented)',
-  usage: `ionheat demo [--out <dir>]
+  usage: `ionheat demo [--out <dir>] [--json]
 
   --out <dir>   where to write the candidate lists (CSV), the charts (SVG) and the
                 tables (Markdown); default: a new folder under the system's temp folder
+  --json        print one JSON object: each part's screen result and the files written
 
 The scenario is described in docs/examples/README.md. Its prices, notes and the one
 in-house measurement are invented for the demonstration (source key inventedDemo).`,
   async run(argv, { io, dataset }) {
-    const { values } = readArgs(argv, { out: { type: 'string' } }, { min: 0, max: 0, names: '' });
+    const { values } = readArgs(argv, { out: { type: 'string' }, json: { type: 'boolean' } }, { min: 0, max: 0, names: '' });
+    const json = values.json === true;
+    const say = (text: string) => {
+      if (!json) io.stdout(text);
+    };
+    const results: { name: string; title: string; result: ScreenResult }[] = [];
     let dir: string;
     try {
       if (values.out !== undefined) {
@@ -207,12 +213,13 @@ in-house measurement are invented for the demonstration (source key inventedDemo
     } catch (e) {
       throw new IonheatError('INVALID_ARGUMENT', `cannot make the output folder "${values.out ?? tmpdir()}": ${(e as NodeJS.ErrnoException).code ?? String(e)}`, { field: 'out' });
     }
-    io.stdout('ionheat demonstration: a first-aid supplier screens salts for two products.\nPrices, notes and the lot-B measurement are invented for the demo; the chemistry is from the built-in tables.\n\n');
+    say('ionheat demonstration: a first-aid supplier screens salts for two products.\nPrices, notes and the lot-B measurement are invented for the demo; the chemistry is from the built-in tables.\n\n');
     const written: string[] = [];
     const markdown: string[] = ['# Demonstration results', '', 'Written by `ionheat demo --out docs/examples`. Prices, notes and the lot-B measurement are invented for the demonstration (source key `inventedDemo`); enthalpies, solubilities and hazards come from the built-in tables.', ''];
     for (const part of demoParts) {
-      const { svg, text, markdown: md } = runDemoPart(part, dataset);
-      io.stdout(`${text}\n\n`);
+      const { svg, text, markdown: md, result } = runDemoPart(part, dataset);
+      results.push({ name: part.name, title: part.title, result });
+      say(`${text}\n\n`);
       const files: [string, string][] = [
         [`${part.name}-candidates.csv`, demoCandidatesCsv(part)],
         [`${part.name}.svg`, svg],
@@ -225,8 +232,12 @@ in-house measurement are invented for the demonstration (source key inventedDemo
     }
     writeFileSync(join(dir, 'results.md'), `${markdown.join('\n')}\n`);
     written.push(join(dir, 'results.md'));
-    io.stdout(`Charts and tables written:\n${written.map((f) => `  ${f}`).join('\n')}\n\n`);
-    io.stdout('These are screening estimates: confirm by measurement, and defer to local codes, product-safety regulation and licensed practice.\n');
+    if (json) {
+      io.stdout(`${JSON.stringify({ parts: results, files: written, note: 'prices, notes and the lot-B measurement are invented for the demonstration (source key inventedDemo)' }, null, 2)}\n`);
+      return 0;
+    }
+    say(`Charts and tables written:\n${written.map((f) => `  ${f}`).join('\n')}\n\n`);
+    say('These are screening estimates: confirm by measurement, and defer to local codes, product-safety regulation and licensed practice.\n');
     return 0;
   },
 };

@@ -3,8 +3,9 @@ import { formatSalt } from '../../chem/formatSalt.js';
 import type { Salt } from '../../chem/salt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { dissolve, type DissolveResult } from '../../solution/dissolve.js';
-import { saltHazards } from '../../pack/saltHazards.js';
+import { hazardCoverage, saltHazards } from '../../pack/saltHazards.js';
 import { numberOption, readArgs } from './args.js';
+import { userSourceOf } from '../../solution/userValueCheck.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
 import { bulletLines } from './paragraphs.js';
@@ -18,7 +19,10 @@ const GENERAL_CAUTION =
 
 /** Hazard statements of the salt (a hydrate shares its anhydrous salt's) and of its ions, from hazards.json. */
 function cautionsFor(salt: Salt, dataset: Dataset): string[] {
-  return saltHazards(salt, dataset).map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
+  const found = saltHazards(salt, dataset).map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
+  const coverage = hazardCoverage(salt, dataset);
+  if (coverage.status === 'no hazard data') found.push(`No hazard data: the hazards table has no record for ${coverage.missingIons.join(' or ')}, which is not a sign of safety; check the safety data sheet.`);
+  return found;
 }
 
 const rounded = (e: Estimate | undefined): Estimate | undefined => (e ? roundEstimate(e) : undefined);
@@ -42,9 +46,16 @@ function toJson(r: DissolveResult, cautions: string[]) {
 
 const signed = (x: number): string => formatNumber(x, { plus: true });
 
-function line(e: Estimate): string[] {
+function line(e: Estimate, dataset: Dataset): string[] {
   const r = roundEstimate(e);
-  return [r.basis, r.method, `${signed(r.value)} ± ${r.u}`, `${signed(r.low)} … ${signed(r.high)}`];
+  const mine = userSourceOf(e, dataset);
+  return [mine ? `${r.basis} (your value)` : r.basis, r.method, `${signed(r.value)} ± ${r.u}`, `${signed(r.low)} … ${signed(r.high)}`];
+}
+
+/** `measured, table`, or `your value from my-values.json (myLab)` where a user's own value is in use. */
+function basisText(e: Estimate, dataset: Dataset): string {
+  const mine = userSourceOf(e, dataset);
+  return mine ? `${e.basis}, your value: ${e.sources.join(', ')} in ${mine}` : `${e.basis}, ${e.method}`;
 }
 
 const VERDICT_WORDS = { endothermic: 'endothermic — dissolving absorbs heat (cools)', exothermic: 'exothermic — dissolving releases heat (heats)', undetermined: 'undetermined — the 95 % interval spans zero' } as const;
@@ -77,7 +88,7 @@ export const dissolveCommand: Command = {
     const best = roundEstimate(r.best);
     const out: string[] = [];
     out.push(`${formatSalt(r.salt, { style: 'unicode' })}  (${r.salt.molarMass.toFixed(2)} g/mol)`);
-    out.push(`Enthalpy of solution at infinite dilution, ${r.temperature.celsius} °C: ${signed(best.value)} ± ${best.u} kJ/mol (${best.basis}, ${best.method}); 95 % interval ${signed(best.low)} … ${signed(best.high)}`);
+    out.push(`Enthalpy of solution at infinite dilution, ${r.temperature.celsius} °C: ${signed(best.value)} ± ${best.u} kJ/mol (${basisText(r.best, dataset)}); 95 % interval ${signed(best.low)} … ${signed(best.high)}`);
     out.push(`Verdict: ${VERDICT_WORDS[r.verdict]}; P(endothermic) = ${r.probabilityEndothermic.toFixed(3)}`);
     // The words follow the sign, so that the number after them is always positive: heat absorbed (cools) or released (heats).
     const perGram = (e: Estimate, what: string) => {
@@ -89,7 +100,7 @@ export const dissolveCommand: Command = {
     if (r.perGram.saturatedFill) out.push(perGram(r.perGram.saturatedFill, 'a saturated fill (salt + water at 25 °C)'));
     out.push('', 'Every estimate (kJ/mol, + = endothermic; ± is one standard uncertainty):', '');
     io.stdout(out.flatMap((l) => (l === '' ? [''] : wrapText(withTrueMinus(l), outputWidth(io), '', '  '))).join('\n') + '\n');
-    io.stdout(textTable(['basis', 'method', 'value', '95 % interval'], r.estimates.map(line), new Set([2, 3])));
+    io.stdout(textTable(['basis', 'method', 'value', '95 % interval'], r.estimates.map((e) => line(e, dataset)), new Set([2, 3])));
     const tail: string[] = [];
     if (r.hydration?.absolute) {
       const h = roundEstimate(r.hydration.absolute);

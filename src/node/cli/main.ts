@@ -9,9 +9,11 @@ import { withTrueMinus } from '../../notation/minus.js';
 import { builtinDataset } from '../../data/builtin.js';
 import { isIonheatError } from '../../error.js';
 import { loadDataset } from '../loadDataset.js';
+import { didYouMean } from '../../quantity/nearestName.js';
 import type { Command } from './command.js';
 import { demoCommand } from './demoCommand.js';
-import { processIO, type CliIO } from './io.js';
+import { processIO, type CliIO, type ProcessIO } from './io.js';
+import { escapeControls } from '../terminalText.js';
 import { saltCommand } from './saltCommand.js';
 import { latticeCommand } from './latticeCommand.js';
 import { cycleCommand } from './cycleCommand.js';
@@ -62,8 +64,10 @@ function takeDataFiles(argv: readonly string[]): { files: string[]; rest: string
  * Runs the command line with these arguments (without `node` and the script).
  *
  * @param argv - the arguments, e.g. `['dissolve', 'KNO3']`; `--data <file>` may appear anywhere and repeat
- * @param io - where to read and write (default: the process's streams); tests and embedding tools pass buffers
- * @returns the exit status: 0 success, 1 a specification failed, 2 bad input or arguments, 3 a defect
+ * @param io - where to read and write (default: the process's streams, attached for this run only: no listener is
+ *   left on them afterwards); tests and embedding tools pass buffers
+ * @returns the exit status: 0 success, 1 a specification failed, 2 bad input or arguments (or output that could not
+ *   be written, unless a specification failed), 3 a defect. A reader that closes the pipe early does not change it.
  * @see README.md, "The command line", for a tour; `ionheat help <command>` for each command's usage.
  *
  * @example
@@ -74,17 +78,32 @@ function takeDataFiles(argv: readonly string[]): { files: string[]; rest: string
  * await runCli(['salt', 'NaCl'], io); // 0
  * out.includes('58.44'); // true (g/mol)
  * await runCli(['salt', 'NaXy'], io); // 2
- * err; // 'ionheat: "Xy" at position 2 is not a chemical element\n'
+ * err; // 'ionheat: "Xy" at position 3 is not a chemical element\n'
  * ```
  */
-export async function runCli(argv: readonly string[], io: CliIO = processIO()): Promise<number> {
+export async function runCli(argv: readonly string[], io?: CliIO): Promise<number> {
+  // The process's streams are attached for this run only and let go of when it ends.
+  const own: ProcessIO | undefined = io ? undefined : processIO();
+  const cli: CliIO = io ?? own!;
+  const status = await dispatch(argv, cli);
+  if (!own) return status;
+  await own.out.flush();
+  const failure = own.out.failure();
+  if (failure) own.stderr(`ionheat: cannot write the output: ${failure.code ?? failure.message}\n`);
+  await own.err.flush();
+  own.release();
+  return failure && status !== 1 ? 2 : status;
+}
+
+/** Runs one command and turns every failure into one line on stderr and an exit status. */
+async function dispatch(argv: readonly string[], io: CliIO): Promise<number> {
   try {
     const { files, rest } = takeDataFiles(argv);
     const [name, ...args] = rest;
     if (name === undefined || name === 'help' || name === '--help' || name === '-h') {
       const topic = name === 'help' ? commands.find((c) => c.name === args[0]) : undefined;
       if (name === 'help' && args[0] !== undefined && !topic) {
-        io.stderr(`ionheat: no command "${args[0]}"; try: ionheat help\n`);
+        io.stderr(`ionheat: no command "${escapeControls(args[0])}"${didYouMean(args[0], commands.map((c) => c.name))}; try: ionheat help\n`);
         return 2;
       }
       io.stdout(topic ? `${topic.summary}\n\n${topic.usage}\n` : overview());
@@ -96,26 +115,28 @@ export async function runCli(argv: readonly string[], io: CliIO = processIO()): 
     }
     const command = commands.find((c) => c.name === name);
     if (!command) {
-      io.stderr(`ionheat: no command "${name}"; the commands are ${commands.map((c) => c.name).join(', ')} (ionheat help)\n`);
+      io.stderr(`ionheat: no command "${escapeControls(name)}"${didYouMean(name, [...commands.map((c) => c.name), 'help'])}; the commands are ${commands.map((c) => c.name).join(', ')} (ionheat help)\n`);
       return 2;
     }
     if (args.includes('--help') || args.includes('-h')) {
       io.stdout(`${command.summary}\n\n${command.usage}\n`);
       return 0;
     }
-    const dataset = files.length > 0 ? loadDataset(files.map((f) => (f.startsWith('/') ? f : `${io.cwd}/${f}`))) : builtinDataset();
-    return await command.run(args, { io, dataset });
+    const inputFiles = files.map((f) => (f.startsWith('/') ? f : `${io.cwd}/${f}`));
+    const dataset = files.length > 0 ? loadDataset(inputFiles) : builtinDataset();
+    return await command.run(args, { io, dataset, inputFiles });
   } catch (e) {
+    // Messages may quote the user's text: control characters are shown, never sent to the terminal.
     if (isIonheatError(e)) {
-      io.stderr(`ionheat: ${withTrueMinus(e.message)}\n`);
+      io.stderr(`ionheat: ${withTrueMinus(escapeControls(e.message))}\n`);
       return 2;
     }
     if (e instanceof Error && (e as { usage?: boolean }).usage) {
-      io.stderr(`ionheat: ${withTrueMinus(e.message)}\n`);
+      io.stderr(`ionheat: ${withTrueMinus(escapeControls(e.message))}\n`);
       return 2;
     }
     // A defect in ionheat itself: say so in one line, without a stack trace.
-    io.stderr(`ionheat: internal error (please report it): ${e instanceof Error ? e.message : String(e)}\n`);
+    io.stderr(`ionheat: internal error (please report it): ${escapeControls(e instanceof Error ? e.message : String(e))}\n`);
     return 3;
   }
 }

@@ -11,6 +11,8 @@ import { packTimeCourse, type PackTimeCourse, type TimeCourseOptions } from '../
 import { packCurveSvg } from '../../render/packCurve.js';
 import { timeCourseSvg } from '../../render/timeCourse.js';
 import { joinNegativeValues, numberOption, readArgs } from './args.js';
+import { userSourceOf } from '../../solution/userValueCheck.js';
+import { packDesignMargin, type PackDesignMargin } from '../../pack/designMargin.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
 import { bulletLines } from './paragraphs.js';
@@ -106,7 +108,7 @@ function design(d: PackDesignPoint) {
   return { ratio: r(d.ratio, 5), saltMass: r(d.saltMass, 3), temperature: r(d.temperature, 3), changePerGram: r(d.changePerGram, 6) };
 }
 
-function jsonReport(result: PackResult, curve: PackRatioCurve, course: PackTimeCourse | undefined, withCurve: boolean, dataset: Dataset) {
+function jsonReport(result: PackResult, curve: PackRatioCurve, course: PackTimeCourse | undefined, withCurve: boolean, dataset: Dataset, margin: PackDesignMargin | undefined) {
   const t = rounded(result.finalTemperature);
   return {
     fill: result.fill,
@@ -151,7 +153,7 @@ function jsonReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
       saturationRatio: curve.saturationRatio === null ? null : r(curve.saturationRatio, 5),
     },
     ...(curve.target
-      ? { target: { temperature: curve.target.target, reachable: curve.target.reachable, design: curve.target.design ? design(curve.target.design) : null, message: curve.target.message } }
+      ? { target: { temperature: curve.target.target, reachable: curve.target.reachable, design: curve.target.design ? design(curve.target.design) : null, message: curve.target.message, ...(margin ? { margin: marginJson(margin) } : {}) } }
       : {}),
     ...(withCurve
       ? { curve: curve.points.map((p) => ({ ratio: r(p.ratio, 6), saltMass: r(p.saltMass, 4), temperature: r(p.temperature, 4), ...(p.low !== undefined ? { low: r(p.low, 4), high: r(p.high!, 4) } : {}), undissolvedMass: r(p.undissolvedMass, 4), clamp: p.clamp })) }
@@ -174,7 +176,21 @@ function jsonReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
   };
 }
 
-function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeCourse | undefined, dataset: Dataset, width: number): string {
+/** The design margin in the JSON report: masses in g, temperatures in °C, rounded for reading. */
+function marginJson(m: PackDesignMargin) {
+  const band = (b: { value: number; low: number; high: number }) => ({ value: r(b.value, 3), low: r(b.low, 3), high: r(b.high, 3) });
+  return {
+    kind: m.kind,
+    designedMassG: m.design ? r(m.design.saltMassG, 3) : null,
+    massInterval: m.massInterval ? { low: r(m.massInterval.low, 3), high: m.massInterval.high === null ? null : r(m.massInterval.high, 3) } : null,
+    finalTemperature: m.design ? band(m.design.finalTemperature) : null,
+    threshold: { kind: m.threshold.kind, temperatureC: m.threshold.temperatureC, largestSafeMassG: m.threshold.largestSafeMassG === null ? null : r(m.threshold.largestSafeMassG, 3) },
+    caution: m.caution,
+    message: m.message,
+  };
+}
+
+function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeCourse | undefined, dataset: Dataset, margin: PackDesignMargin | undefined, width: number): string {
   const out: string[] = [];
   const f = result.fill;
   const solids = f.solids.map((s) => `${r(s.massG, 3)} g ${formatSalt(parseSalt(s.formula, dataset), { style: 'unicode' })}`).join(' + ');
@@ -190,7 +206,7 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
         d.loadedMass.toFixed(2),
         d.dissolvedMass.toFixed(2),
         d.undissolvedMass.toFixed(2) + (d.undissolvedSolid && d.undissolvedSolid.formula !== d.formula ? ` (as ${d.undissolvedSolid.formula})` : ''),
-        `${d.enthalpyOfSolution.value.toFixed(2)} ± ${d.enthalpyOfSolution.u.toPrecision(2)} (${d.enthalpyOfSolution.basis})`,
+        `${d.enthalpyOfSolution.value.toFixed(2)} ± ${d.enthalpyOfSolution.u.toPrecision(2)} (${userSourceOf(d.enthalpyOfSolution as Estimate, dataset) ? 'your value' : d.enthalpyOfSolution.basis})`,
         d.heat.toFixed(3),
       ]),
       new Set([1, 2, 3, 5]),
@@ -202,6 +218,7 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
   const bp = curve.bestPerGram;
   out.push(`\ndesign (this water and start): ${lc.temperature < f.startC ? 'coldest' : 'hottest'} ${lc.temperature.toFixed(2)} °C at ${lc.ratio.toFixed(4)} g solid per g water (${lc.saltMass.toFixed(2)} g); most change per gram of fill at ${bp.ratio.toFixed(4)} g/g (${bp.temperature.toFixed(2)} °C)`);
   if (curve.target) out.push(`target ${curve.target.target} °C: ${curve.target.message}`);
+  if (margin) out.push(`margin: ${margin.message}`);
   if (course) {
     const b = course.band;
     out.push(
@@ -212,7 +229,7 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
     out.push(...bulletLines(course.notes.slice(0, 2), width, '  '));
   }
   out.push('\nCautions:');
-  out.push(...bulletLines(course ? course.cautions : result.cautions, width, '  • '));
+  out.push(...bulletLines([...(margin?.caution ? [margin.caution] : []), ...(course ? course.cautions : result.cautions)], width, '  • '));
   out.push('\nNotes:');
   out.push(...bulletLines(result.notes, width));
   // Sentences wrap to the width; the table (one entry of several lines) and the bullets (wrapped already) stay as they are.
@@ -255,7 +272,14 @@ export const packCommand: Command = {
     '  --ambient <°C> (22)   --g-ambient <W/K> (0.15)   --skin <°C> (33)   --g-skin <W/K> (0.25)   --time-svg <file>',
   ].join('\n'),
   async run(argv, { io, dataset }) {
-    const { values } = readArgs(joinNegativeValues(argv, NUMERIC), options, { min: 0, max: 0, names: '' });
+    const { values } = readArgs(joinNegativeValues(argv, NUMERIC), options, { min: 0, max: 0, names: '' }, {
+      seed: { anyOf: ['monte-carlo'], why: 'the seed belongs to the Monte Carlo interval (e.g. --monte-carlo 2000 --seed 7); the default interval is by bounds and draws nothing' },
+      points: { anyOf: ['curve', 'curve-svg'], why: 'it sets how many points the ratio curve has (--curve with --json, or --curve-svg <file>)' },
+      'heat-capacity-u': { anyOf: ['heat-capacity'], why: 'it is the uncertainty of your own heat capacity of the fill' },
+    });
+    if (values.curve === true && values.json !== true && values['curve-svg'] === undefined) {
+      throw bad('curve', '--curve has no effect in text output: the curve\'s points are written with --json, or drawn with --curve-svg <file>');
+    }
     const saltsGiven = values.salt ?? [];
     const massesGiven = values['salt-mass'] ?? [];
     if (saltsGiven.length === 0) throw bad('salt', '--salt is required, with its --salt-mass (e.g. --salt KNO3 --salt-mass 10 --water 100)');
@@ -322,11 +346,13 @@ export const packCommand: Command = {
     let result: PackResult;
     let curve: PackRatioCurve;
     let course: PackTimeCourse | undefined;
+    let margin: PackDesignMargin | undefined;
     const withCurve = values.curve === true || values['curve-svg'] !== undefined;
     try {
       result = packFinalTemperature(fill, packOptions, dataset);
       curve = packRatioCurve(fill, { ...(target !== undefined ? { targetC: target } : {}), points: points ?? (withCurve ? 200 : 40), band: withCurve }, packOptions, dataset);
       course = wantsCourse ? packTimeCourse(fill, courseOptions, packOptions, dataset) : undefined;
+      margin = target !== undefined ? packDesignMargin(fill, target, packOptions, dataset) : undefined;
     } catch (e) {
       const mapped = asOptionError(e);
       if (isIonheatError(mapped) && mapped.field && !mapped.message.startsWith('--')) {
@@ -350,10 +376,10 @@ export const packCommand: Command = {
       .map((f) => `${f} can also serve as a supercooled melt that crystallises on demand (a latent-heat warmer); this pack only dissolves it in water. For a warmer, run: ionheat warmer --salt "${f}" --mass <g>`);
     if (hints.length > 0) result = { ...result, notes: [...hints, ...result.notes] };
     if (values.json) {
-      io.stdout(JSON.stringify(jsonReport(result, curve, course, withCurve, dataset), null, 2) + '\n');
+      io.stdout(JSON.stringify(jsonReport(result, curve, course, withCurve, dataset, margin), null, 2) + '\n');
       return 0;
     }
-    io.stdout(textReport(result, curve, course, dataset, outputWidth(io)));
+    io.stdout(textReport(result, curve, course, dataset, margin, outputWidth(io)));
     for (const w of written) io.stdout(`chart written to ${w}\n`);
     return 0;
   },

@@ -1,16 +1,20 @@
 /**
  * Reading a candidate list (CSV or JSON) as a stream of records with their
- * line numbers, for `ionheat screen`. CSV goes through csv-parse, record by
- * record, so a file of any length is read in flat memory.
+ * line numbers, for `ionheat screen`. CSV is split record by record as it
+ * streams in (csvSplitter.ts), so a file of any length is read in flat
+ * memory and a fault in one record is reported at its own line while the
+ * records around it are read.
  *
  * @module
  */
-import { createReadStream, statSync } from 'node:fs';
+import { createReadStream } from 'node:fs';
 import { PassThrough, type Readable } from 'node:stream';
-import { parse, type Options } from 'csv-parse';
 import { IonheatError } from '../../error.js';
 import { candidateFields, type CandidateLike } from '../../screen/candidate.js';
 import { parseJsonStrict } from '../strictJson.js';
+import { closestName } from '../closestName.js';
+import { megabytes, openRegularFile, withoutBom } from '../readInputFile.js';
+import { csvRecords as splitCsv } from './csvSplitter.js';
 
 /** One record of the input: a candidate's fields, a blank line, or a record that could not be read. */
 export type InputRecord =
@@ -30,18 +34,37 @@ export interface CandidateSource {
   progress(): { bytes: number; total?: number };
   /** The candidate fields the input can have: a CSV header's columns once read; undefined for JSON (any field). */
   columns(): readonly string[] | undefined;
+  /** Device and inode of the file read (none for standard input), so that no output is written over it. */
+  file?: { dev: number; ino: number };
 }
 
 const KNOWN = new Set<string>(candidateFields);
 /** Longest CSV record accepted, in characters. */
 const MAX_RECORD = 100_000;
+/** Most lines one quoted CSV cell may span (a note of a few paragraphs). */
+const MAX_CELL_LINES = 50;
+/** Largest JSON candidate list read (JSON is read whole; CSV streams and has no bound). */
+const MAX_JSON_BYTES = 64 * 2 ** 20;
 
+/** A hint for a header that is one cell holding another separator: semicolons or tabs, as some spreadsheets write. */
+function separatorHint(cell: string): string {
+  for (const [sep, name] of [[';', 'semicolons'], ['\t', 'tabs']] as const) {
+    if (cell.includes(sep) && cell.split(sep).some((c) => c.trim() === 'formula' || closestName(c.trim(), candidateFields) !== undefined)) {
+      return `; this header is separated by ${name}, but a candidate list is separated by commas (save it as "CSV, comma-separated")`;
+    }
+  }
+  return '';
+}
 function columnsOf(header: readonly string[], label: string): string[] {
   const columns = header.map((h) => h.trim());
   const seen = new Set<string>();
   for (const [i, c] of columns.entries()) {
     if (c === '') throw new IonheatError('INVALID_DATA', `${label}, line 1: column ${i + 1} has no name (the header names the columns: ${candidateFields.join(', ')})`, { field: label });
-    if (!KNOWN.has(c)) throw new IonheatError('INVALID_DATA', `${label}, line 1: unknown column "${c.length > 40 ? c.slice(0, 40) + '…' : c}" (the columns a candidate list may have: ${candidateFields.join(', ')})`, { field: c });
+    if (!KNOWN.has(c)) {
+      const near = closestName(c, candidateFields);
+      const hint = separatorHint(c) || (near ? `; did you mean "${near}"? (names are case-sensitive)` : '');
+      throw new IonheatError('INVALID_DATA', `${label}, line 1: unknown column "${c.length > 40 ? c.slice(0, 40) + '…' : c}" (the columns a candidate list may have: ${candidateFields.join(', ')})${hint}`, { field: c });
+    }
     if (seen.has(c)) throw new IonheatError('INVALID_DATA', `${label}, line 1: the column "${c}" is named twice`, { field: c });
     seen.add(c);
   }
@@ -49,71 +72,31 @@ function columnsOf(header: readonly string[], label: string): string[] {
   return columns;
 }
 
-/** Line breaks inside the cells of a record (quoted fields may hold them): `\n`, or a `\r` not followed by `\n`. */
-function breaksIn(record: readonly string[]): number {
-  let n = 0;
-  for (const cell of record) {
-    if (cell.indexOf('\n') < 0 && cell.indexOf('\r') < 0) continue;
-    for (let i = 0; i < cell.length; i++) {
-      const c = cell.charCodeAt(i);
-      if (c === 10 || (c === 13 && cell.charCodeAt(i + 1) !== 10)) n++;
-    }
-  }
-  return n;
-}
-
-/** The records a csv-parse stream has ready, a batch at a time, without a promise per record. */
-async function* parsedBatches(parser: ReturnType<typeof parse>): AsyncGenerator<string[][]> {
-  let ended = false;
-  let failure: unknown;
-  let wake: () => void = () => {};
-  parser.on('end', () => {
-    ended = true;
-    wake();
-  });
-  parser.on('error', (e) => {
-    failure = e;
-    wake();
-  });
-  for (;;) {
-    const batch: string[][] = [];
-    for (let record = parser.read() as string[] | null; record !== null; record = parser.read() as string[] | null) batch.push(record);
-    if (batch.length > 0) yield batch;
-    if (failure !== undefined) throw failure;
-    if (ended) return;
-    await new Promise<void>((resolve) => {
-      wake = resolve;
-      parser.once('readable', resolve);
-    });
-  }
-}
-
 /**
- * The records of a CSV text stream: header first, then one record per row,
- * each with the line it starts on. Lines are counted from the records
- * (one per record, plus the line breaks inside quoted cells), which is much
- * cheaper than asking the parser for its position at every record.
+ * The records of a CSV stream: header first, then one record per row, each
+ * with the line it starts on. A record that cannot be read becomes an
+ * `unreadable` record at its line, and reading goes on.
  */
 async function* csvRecords(input: Readable, label: string, counter: { bytes: number; columns?: string[] }): AsyncGenerator<InputRecord[]> {
-  // highWaterMark (a stream option the parser passes on) lets a batch hold a few hundred records.
-  const options: Options & { highWaterMark: number } = { bom: true, relax_column_count: true, relax_quotes: true, skip_empty_lines: false, max_record_size: MAX_RECORD, highWaterMark: 64 };
-  const parser = parse(options);
   input.on('data', (chunk: Buffer | string) => {
     counter.bytes += chunk.length;
   });
-  input.on('error', (e) => parser.destroy(e));
-  input.pipe(parser);
   let columns: string[] | undefined;
   let formulaAt = 0;
-  let nextLine = 1;
   try {
-    for await (const records of parsedBatches(parser)) {
+    for await (const records of splitCsv(input as AsyncIterable<Buffer>, { maxChars: MAX_RECORD, maxLines: MAX_CELL_LINES })) {
       const out: InputRecord[] = [];
       for (const record of records) {
-        const line = nextLine;
-        nextLine = line + 1 + breaksIn(record);
+        const { line, cells } = record;
+        if ('error' in record) {
+          const formula = columns ? cells[formulaAt] : undefined;
+          const error = new IonheatError('INVALID_DATA', `${label}, line ${line}: not readable as CSV: ${record.error}`, { field: label });
+          if (!columns) throw error;
+          out.push({ kind: 'unreadable', line, ...(formula !== undefined ? { formula: formula.slice(0, 200) } : {}), error });
+          continue;
+        }
         let blank = true;
-        for (const cell of record) {
+        for (const cell of cells) {
           if (cell.trim() !== '') {
             blank = false;
             break;
@@ -124,18 +107,18 @@ async function* csvRecords(input: Readable, label: string, counter: { bytes: num
           continue;
         }
         if (!columns) {
-          columns = columnsOf(record, label);
+          columns = columnsOf(cells, label);
           counter.columns = columns;
           formulaAt = columns.indexOf('formula');
           continue;
         }
-        if (record.length > columns.length) {
-          out.push({ kind: 'unreadable', line, formula: record[formulaAt] ?? '', error: new IonheatError('INVALID_DATA', `${label}, line ${line}: ${record.length} fields, but the header names ${columns.length} columns`, { field: label }) });
+        if (cells.length > columns.length) {
+          out.push({ kind: 'unreadable', line, formula: cells[formulaAt] ?? '', error: new IonheatError('INVALID_DATA', `${label}, line ${line}: ${cells.length} fields, but the header names ${columns.length} columns`, { field: label }) });
           continue;
         }
         const fields: Record<string, unknown> = {};
-        for (let i = 0; i < record.length; i++) {
-          const cell = record[i]!;
+        for (let i = 0; i < cells.length; i++) {
+          const cell = cells[i]!;
           if (cell !== '') fields[columns[i]!] = cell;
         }
         out.push({ kind: 'candidate', line, candidate: fields });
@@ -144,10 +127,7 @@ async function* csvRecords(input: Readable, label: string, counter: { bytes: num
     }
   } catch (e) {
     if (e instanceof IonheatError) throw e;
-    const err = e as { code?: string; message?: string; lines?: number };
-    if (err.code === 'ENOENT' || err.code === 'EACCES' || err.code === 'EISDIR') throw new IonheatError('INVALID_ARGUMENT', `cannot read the candidate file "${label}": ${err.code}`, { field: label });
-    const where = typeof err.lines === 'number' ? `, line ${err.lines}` : '';
-    throw new IonheatError('INVALID_DATA', `${label}${where}: not readable as CSV (${(err.message ?? String(e)).split('\n')[0]!.replace(/^[A-Za-z ]+: /, '')})`, { field: label });
+    throw new IonheatError('INVALID_ARGUMENT', `cannot read ${label === 'standard input' ? 'standard input' : `the candidate file "${label}"`}: ${(e as NodeJS.ErrnoException).code ?? String(e)}`, { field: label });
   }
   if (!columns) throw new IonheatError('INVALID_DATA', `${label}: no header line; the first line names the columns, e.g. formula,pricePerKg`, { field: label });
 }
@@ -188,7 +168,11 @@ function elementLines(text: string): number[] {
 async function* jsonRecords(text: string, label: string): AsyncGenerator<InputRecord[]> {
   const value = parseJsonStrict(text, label);
   const rows = Array.isArray(value) ? value : undefined;
-  if (!rows) throw new IonheatError('INVALID_DATA', `${label}: a JSON candidate list is an array of rows, e.g. [{"formula": "KNO3"}, "NH4Cl"]`, { field: label });
+  if (!rows) {
+    const got = value !== null && typeof value === 'object' ? 'an object' : value === null ? 'null' : typeof value;
+    const hint = value !== null && typeof value === 'object' && Object.hasOwn(value, 'formula') ? `; for one candidate write [${JSON.stringify(value).slice(0, 60)}]` : '';
+    throw new IonheatError('INVALID_DATA', `${label}: a JSON candidate list is an array of rows, e.g. [{"formula": "KNO3"}, "NH4Cl"], got ${got}${hint}`, { field: label });
+  }
   const lines = elementLines(text);
   const batch = (i: number, row: unknown): InputRecord => {
     const line = lines[i] ?? i + 1;
@@ -199,10 +183,20 @@ async function* jsonRecords(text: string, label: string): AsyncGenerator<InputRe
   for (let start = 0; start < rows.length; start += 256) yield rows.slice(start, start + 256).map((row, k) => batch(start + k, row));
 }
 
-async function readAll(input: Readable): Promise<string> {
+/** All of a stream as text (a leading byte-order mark dropped), refused beyond `maxBytes`. */
+async function readAll(input: Readable, label: string, maxBytes: number): Promise<string> {
   const chunks: Buffer[] = [];
-  for await (const chunk of input) chunks.push(typeof chunk === 'string' ? Buffer.from(chunk) : (chunk as Buffer));
-  return Buffer.concat(chunks).toString('utf8');
+  let total = 0;
+  for await (const chunk of input) {
+    const b = typeof chunk === 'string' ? Buffer.from(chunk) : (chunk as Buffer);
+    total += b.length;
+    if (total > maxBytes) {
+      input.destroy();
+      throw new IonheatError('INVALID_ARGUMENT', `${label}: a JSON candidate list is read whole and may be at most ${megabytes(maxBytes)}; give a longer list as CSV, which is read as it streams`, { field: label });
+    }
+    chunks.push(b);
+  }
+  return withoutBom(Buffer.concat(chunks, total).toString('utf8'));
 }
 
 /** Peeks at the first non-blank character of a stream and gives back a stream that still starts at the beginning. */
@@ -233,7 +227,8 @@ async function sniff(input: Readable): Promise<{ first: string; stream: Readable
 
 /**
  * Opens a candidate list: a `.csv` or `.json` file, or `-` for standard input
- * (JSON when its first character is `[`, CSV otherwise).
+ * (JSON when its first character is `[` or `{`, CSV otherwise). Only a
+ * regular file is opened (a FIFO or a device is refused: pipe it to `-`).
  *
  * @param path - the file name as given, or `-`
  * @param cwd - directory of relative names
@@ -244,8 +239,8 @@ export async function openCandidates(path: string, cwd: string, stdin: Readable)
   const columns = () => counter.columns;
   if (path === '-') {
     const { first, stream } = await sniff(stdin);
-    if (first === '[') {
-      const text = await readAll(stream);
+    if (first === '[' || first === '{') {
+      const text = await readAll(stream, 'standard input', MAX_JSON_BYTES);
       counter.bytes = text.length;
       return { label: 'standard input', format: 'json', records: jsonRecords(text, 'standard input'), progress: () => ({ bytes: counter.bytes, total: text.length }), columns: () => undefined };
     }
@@ -255,17 +250,13 @@ export async function openCandidates(path: string, cwd: string, stdin: Readable)
   const lower = path.toLowerCase();
   const format = lower.endsWith('.json') ? 'json' : lower.endsWith('.csv') || lower.endsWith('.txt') ? 'csv' : undefined;
   if (!format) throw new IonheatError('INVALID_ARGUMENT', `"${path}": a candidate list is a .csv or .json file, or - for standard input`, { field: path });
-  let size: number;
-  try {
-    const stat = statSync(full);
-    if (!stat.isFile()) throw Object.assign(new Error('not a file'), { code: 'EISDIR' });
-    size = stat.size;
-  } catch (e) {
-    throw new IonheatError('INVALID_ARGUMENT', `cannot read the candidate file "${path}": ${(e as NodeJS.ErrnoException).code ?? String(e)}`, { field: path });
-  }
+  const opened = openRegularFile(full, 'the candidate file', path, '; to read from a pipe, give - and send it to standard input');
+  const { size } = opened;
+  const file = { dev: opened.dev, ino: opened.ino };
+  const stream = createReadStream('', { fd: opened.fd });
   if (format === 'json') {
-    const text = await readAll(createReadStream(full));
-    return { label: path, format, records: jsonRecords(text, path), progress: () => ({ bytes: size, total: size }), columns: () => undefined };
+    const text = await readAll(stream, path, MAX_JSON_BYTES);
+    return { label: path, format, records: jsonRecords(text, path), progress: () => ({ bytes: size, total: size }), columns: () => undefined, file };
   }
-  return { label: path, format, records: csvRecords(createReadStream(full), path, counter), progress: () => ({ bytes: counter.bytes, total: size }), columns };
+  return { label: path, format, records: csvRecords(stream, path, counter), progress: () => ({ bytes: counter.bytes, total: size }), columns, file };
 }

@@ -65,7 +65,7 @@ export function screenColumns(settings: ScreenSettings, inputColumns?: readonly 
     );
   }
   for (const field of OVERRIDES) if (has(field)) columns.push({ header: `input.${field}`, get: (r) => r.input[field] });
-  columns.push({ header: 'hazards', get: (r) => r.hazards?.join(' ') });
+  columns.push({ header: 'hazards', get: (r) => (r.hazards && r.hazards.length > 0 ? r.hazards.join(' ') : r.hazardData) });
   if (settings.spec !== null) columns.push({ header: 'spec.holds', get: (r) => r.spec?.holds }, { header: 'spec.reason', get: (r) => r.spec?.reason });
   columns.push(
     { header: 'duplicateOf', get: (r) => r.duplicateOf },

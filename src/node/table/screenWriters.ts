@@ -10,8 +10,10 @@ import { formulaText, formulasInText } from '../../notation/formula.js';
 import { withTrueMinus } from '../../notation/minus.js';
 import { wrapText } from '../../notation/wrapText.js';
 import { formatEstimate } from '../../quantity/formatEstimate.js';
+import { compareRanked, isRankable, type RankKey } from '../../screen/rankRows.js';
 import type { ScreenRow, ScreenSettings, ScreenSummary } from '../../screen/screenRow.js';
-import { textTable } from '../cli/textTable.js';
+import { textTable, textTableLines } from '../cli/textTable.js';
+import { escapeControls } from '../terminalText.js';
 import { csvCell } from './csvCell.js';
 import { csvRecord } from './csvRecord.js';
 import { screenColumns } from './screenColumns.js';
@@ -69,7 +71,7 @@ function cellsOf(row: ScreenRow, settings: ScreenSettings, withCost: boolean): s
     row.status === 'computed' ? (row.verdict ?? '') : '',
   ];
   if (withCost) cells.push(estimateText(row.costPerKJ));
-  cells.push(row.hazards && row.hazards.length > 0 ? row.hazards.join(', ') : '');
+  cells.push(row.hazards && row.hazards.length > 0 ? row.hazards.join(', ') : row.hazardData === 'no hazard data' ? 'no hazard data' : row.hazardData === 'not classified' ? 'none classified' : '');
   if (settings.spec !== null) cells.push(row.spec ? (row.spec.holds ? 'holds' : `fails: ${row.spec.reason ?? ''}`) : '');
   const notes = [status, row.duplicateOf !== undefined ? `same as line ${row.duplicateOf}` : '', row.input.note ?? ''].filter((s) => s !== '');
   cells.push(notes.join('; '));
@@ -103,53 +105,125 @@ export function textTableOf(rows: readonly ScreenRow[], settings: ScreenSettings
   const withCost = rows.some((r) => r.input.pricePerKg !== undefined);
   const header = headerOf(settings, rows, withCost);
   header[header.length - 1] = 'see';
-  const right = new Set([0, 1]);
   const notes: string[] = [];
+  const body = rows.map((r) => fitCells(cellsOf(r, settings, withCost), r.line, header, settings, notes));
+  return `${textTable(header, body, new Set([0, 1]))}${notesBelow(notes, width)}\n${wrapText(CAUTION, width).join('\n')}\n`;
+}
+
+/** The numbered notes below a text table, wrapped to `width` (empty when there are none). */
+function notesBelow(notes: readonly string[], width: number): string {
+  return notes.length > 0 ? `\n${notes.flatMap((n) => wrapText(formulasInText(n), width, '', '    ')).join('\n')}\n` : '';
+}
+
+/**
+ * One row's cells fitted to the text table: formulas with subscripts, true minus signs, and every cell too long for
+ * its column (a long hazard list, why a spec fails, an error, a note) moved to a numbered note in `notes`.
+ */
+function fitCells(raw: readonly string[], line: number, header: readonly string[], settings: ScreenSettings, notes: string[]): string[] {
   const hazardsAt = header.indexOf('hazards');
   const specAt = settings.spec !== null ? header.indexOf('spec') : -1;
-  const body = rows.map((r) => {
-    const cells = cellsOf(r, settings, withCost).map((c) => withTrueMinus(c));
-    const moved: string[] = [];
-    const salt = cells[2]!;
-    cells[2] = formulaText(salt);
-    if ([...salt].length > CELL_LIMIT.salt) {
-      moved.push(`salt ${salt}`);
-      cells[2] = `${[...salt].slice(0, CELL_LIMIT.salt - 1).join('')}…`;
-    }
-    if ([...cells[3]!].length > CELL_LIMIT.objective) {
-      moved.push(`${settings.objective} ${cells[3]}`);
-      cells[3] = `${[...cells[3]!.split(' [')[0]!].slice(0, CELL_LIMIT.objective - 2).join('')} …`;
-    }
-    if ([...cells[hazardsAt]!].length > CELL_LIMIT.hazards) {
-      moved.push(`hazards: ${cells[hazardsAt]}`);
-      cells[hazardsAt] = `${cells[hazardsAt]!.split(', ')[0]}, …`;
-    }
-    if (specAt >= 0 && [...cells[specAt]!].length > CELL_LIMIT.spec) {
-      moved.push(`spec ${cells[specAt]}`);
-      cells[specAt] = cells[specAt]!.startsWith('fails') ? 'fails' : cells[specAt]!.slice(0, CELL_LIMIT.spec);
-    }
-    const last = cells.length - 1;
-    if (cells[last] !== '') moved.push(cells[last]!);
-    cells[last] = '';
-    if (moved.length > 0) {
-      notes.push(`[${notes.length + 1}] line ${r.line}: ${moved.join('; ')}`);
-      cells[last] = `[${notes.length}]`;
-    }
-    return cells;
-  });
-  const table = textTable(header, body, right);
-  const below = notes.length > 0 ? `\n${notes.flatMap((n) => wrapText(formulasInText(n), width, '', '    ')).join('\n')}\n` : '';
-  return `${table}${below}\n${wrapText(CAUTION, width).join('\n')}\n`;
+  const cells = raw.map((c) => withTrueMinus(c));
+  const moved: string[] = [];
+  const salt = cells[2]!;
+  cells[2] = formulaText(salt);
+  if ([...salt].length > CELL_LIMIT.salt) {
+    moved.push(`salt ${salt}`);
+    cells[2] = `${[...salt].slice(0, CELL_LIMIT.salt - 1).join('')}…`;
+  }
+  if ([...cells[3]!].length > CELL_LIMIT.objective) {
+    moved.push(`${settings.objective} ${cells[3]}`);
+    cells[3] = `${[...cells[3]!.split(' [')[0]!].slice(0, CELL_LIMIT.objective - 2).join('')} …`;
+  }
+  if ([...cells[hazardsAt]!].length > CELL_LIMIT.hazards) {
+    moved.push(`hazards: ${cells[hazardsAt]}`);
+    cells[hazardsAt] = `${cells[hazardsAt]!.split(', ')[0]}, …`;
+  }
+  if (specAt >= 0 && [...cells[specAt]!].length > CELL_LIMIT.spec) {
+    moved.push(`spec ${cells[specAt]}`);
+    cells[specAt] = cells[specAt]!.startsWith('fails') ? 'fails' : cells[specAt]!.slice(0, CELL_LIMIT.spec);
+  }
+  const last = cells.length - 1;
+  if (cells[last] !== '') moved.push(cells[last]!);
+  cells[last] = '';
+  if (moved.length > 0) {
+    notes.push(`[${notes.length + 1}] line ${line}: ${moved.join('; ')}`);
+    cells[last] = `[${notes.length}]`;
+  }
+  return cells;
 }
 
 /** A Markdown table of collected rows, with the caution below it. */
 export function markdownTableOf(rows: readonly ScreenRow[], settings: ScreenSettings): string {
   const withCost = rows.some((r) => r.input.pricePerKg !== undefined);
-  const cell = (s: string) => s.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/[\r\n]+/g, ' ');
   const header = headerOf(settings, rows, withCost);
-  const lines = [`| ${header.map(cell).join(' | ')} |`, `| ${header.map((_, i) => (i <= 1 ? '---:' : '---')).join(' | ')} |`];
-  for (const r of rows) lines.push(`| ${cellsOf(r, settings, withCost).map(cell).join(' | ')} |`);
-  return `${lines.join('\n')}\n\n${CAUTION}\n`;
+  return [...markdownLines(header, rows.map((r) => cellsOf(r, settings, withCost)))].join('');
+}
+
+/** A Markdown table, a line at a time (each with its line end), the caution after it. */
+function* markdownLines(header: readonly string[], body: Iterable<readonly string[]>): Generator<string> {
+  const cell = (s: string) => escapeControls(s.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/[\r\n]+/g, ' '));
+  yield `| ${header.map(cell).join(' | ')} |\n`;
+  yield `| ${header.map((_, i) => (i <= 1 ? '---:' : '---')).join(' | ')} |\n`;
+  for (const cells of body) yield `| ${cells.map(cell).join(' | ')} |\n`;
+  yield `\n${CAUTION}\n`;
+}
+
+/** What a ranked table keeps of a row: its rank key and its cells (all columns but the rank), joined by NUL. */
+interface TableEntry extends RankKey {
+  rankable: boolean;
+  cells: string;
+}
+
+/** A ranked table built from rows as they come, keeping of each only its cells and what ranking needs. */
+export interface RankedTable {
+  add(row: ScreenRow): void;
+  /** The table's text, a line (or a few) at a time, rows ranked best first; unranked rows after, in input order. */
+  text(): Generator<string>;
+}
+
+/**
+ * Collects rows for the `table` and `md` formats. A row is reduced to its
+ * cells at once (control characters made visible, so NUL can join them), so
+ * a run of any length holds about a hundred bytes per row, never the rows.
+ */
+export function rankedTable(settings: ScreenSettings, format: 'table' | 'md', width = 100): RankedTable {
+  const entries: TableEntry[] = [];
+  let withCost = false;
+  let unit: string | undefined;
+  return {
+    add(row) {
+      if (row.input.pricePerKg !== undefined) withCost = true;
+      unit ??= row.objective?.unit;
+      const { rank: _ignored, ...unranked } = row;
+      const cells = cellsOf(unranked, settings, true).slice(1).map((c) => escapeControls(c)).join('\u0000');
+      const rankable = isRankable(row);
+      entries.push({ line: row.line, suitability: row.suitability, objective: rankable ? { value: row.objective!.value } : undefined, rankable, cells });
+    },
+    *text() {
+      const order = entries.filter((e) => e.rankable).sort((a, b) => compareRanked(a, b, settings.objective, settings.direction));
+      const rankOf = new Map<TableEntry, number>(order.map((e, i) => [e, i + 1]));
+      const costAt = 5; // the cost column follows rank, line, salt, objective, basis, verdict (rank left out here)
+      const rowsInOrder = [...order, ...entries.filter((e) => !e.rankable)];
+      entries.length = 0;
+      const header = headerOf(settings, unit ? [{ objective: { unit } } as ScreenRow] : [], withCost);
+      if (format === 'table') header[header.length - 1] = 'see';
+      const notes: string[] = [];
+      function* body(): Generator<string[]> {
+        notes.length = 0; // the table reads the body twice (widths, then lines): number the notes afresh each time
+        for (const e of rowsInOrder) {
+          const cells = e.cells.split('\u0000');
+          if (!withCost) cells.splice(costAt, 1);
+          const all = [rankOf.has(e) ? String(rankOf.get(e)) : '', ...cells];
+          yield format === 'table' ? fitCells(all, e.line, header, settings, notes) : all;
+        }
+      }
+      if (format === 'md') yield* markdownLines(header, body());
+      else {
+        for (const line of textTableLines(header, body, new Set([0, 1]))) yield `${line}\n`;
+        yield `${notesBelow(notes, width)}\n${wrapText(CAUTION, width).join('\n')}\n`;
+      }
+    },
+  };
 }
 
 /** The one-line summary of a run. */

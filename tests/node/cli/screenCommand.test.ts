@@ -59,7 +59,7 @@ describe('ionheat screen: a CSV with good rows, bad rows, blank lines, an inject
     expect(rows.map((x) => x.line)).toEqual(['2', '3', '4', '6', '7', '9', '10', '11']);
     expect(rows.map((x) => x.status)).toEqual(['computed', 'failed', 'failed', 'computed', 'failed', 'computed', 'computed', 'failed']);
     expect(rows[1]!['error.code']).toBe('UNKNOWN_ELEMENT');
-    expect(rows[1]!['error.message']).toMatch(/"Xy" at position 2 is not a chemical element/);
+    expect(rows[1]!['error.message']).toMatch(/"Xy" at position 3 is not a chemical element/);
     expect(rows[2]!['error.code']).toBe('UNBALANCED_CHARGE');
     expect(rows[2]!['error.message']).toMatch(/charges in "Na2Cl" do not balance/);
     expect(rows[4]!['error.code']).toBe('UNEXPECTED_CHARACTER');
@@ -108,7 +108,7 @@ describe('ionheat screen: a CSV with good rows, bad rows, blank lines, an inject
     expect(lines[0]).toMatch(/^rank\s+line\s+salt\s+enthalpy \(kJ\/mol\) \[95 %\]/);
     const body = lines.slice(2).filter((l) => /^\s*\d*\s+\d+\s/.test(l));
     expect(body).toHaveLength(8);
-    expect(r.out).toMatch(/failed: "Xy" at position 2 is not a chemical element/);
+    expect(r.out).toMatch(/failed: "Xy" at position 3 is not a chemical element/);
     expect(r.out).toMatch(/same as line 2/);
     expect(r.out.replace(/\s+/g, ' ')).toMatch(/defer to local codes, product-safety regulation and licensed practice/);
   });
@@ -154,16 +154,14 @@ describe('ionheat screen: exit statuses', () => {
       [['screen', 'good.csv', '--fill', '40:80'], /write a fill as <salt-g>:<water-g>@<start-°C>/],
       [['screen', 'good.csv', '--fill', '40:80@120'], /start temperature/],
       [['screen', 'good.csv', '--objective', 'fill-temperature'], /needs a standard fill/],
-      [['screen', 'good.csv', '--colour'], /Unknown option '--colour'/],
+      [['screen', 'good.csv', '--colour'], /unknown option --colour/],
       [['screen', 'absent.csv'], /cannot read the candidate file "absent.csv": ENOENT/],
       [['screen', 'good.txt2'], /a candidate list is a .csv or .json file/],
       [['screen', file('badhead.csv', 'formula,price\nKCl,1\n')], /unknown column "price"/],
       [['screen', file('nohead.csv', 'note\nx\n')], /no "formula" column/],
       [['screen', file('twice.csv', 'formula,formula\nKCl,KCl\n')], /named twice/],
-      [['screen', file('quote.csv', 'formula\n"KCl\n')], /not readable as CSV/],
       [['screen', file('bad.json', '{"formula": "KCl"}')], /a JSON candidate list is an array/],
       [['screen', file('dup.json', '[{"formula": "KCl", "formula": "NaCl"}]')], /appears twice/],
-      [['screen', 'good.csv', '--svg', join(dir, 'no', 'such', 'dir', 'x.svg')], /cannot write the chart/],
     ];
     for (const [args, message] of cases) {
       const r = await run(args);
@@ -172,6 +170,14 @@ describe('ionheat screen: exit statuses', () => {
       expect(r.err.trim().split('\n'), args.join(' ')).toHaveLength(1);
       expect(r.err).not.toMatch(/\n\s+at /);
     }
+  });
+
+  it('a chart that cannot be written: the summary, then the reason, and status 2', async () => {
+    const r = await run(['screen', 'good.csv', '--svg', join(dir, 'no', 'such', 'dir', 'x.svg')]);
+    expect(r.status).toBe(2);
+    const lines = r.err.trim().split('\n');
+    expect(lines[0]).toMatch(/^screen: \d+ rows read/);
+    expect(lines[1]).toMatch(/^ionheat: cannot write the chart to ".*x\.svg" \(--svg\): ENOENT/);
   });
 });
 

@@ -1,0 +1,16 @@
+/**
+ * The symbols of the 118 named elements (IUPAC periodic table): to tell a
+ * symbol that is an element without data in ionheat's tables (`No`,
+ * nobelium) from one that is no element at all (`Xy`).
+ *
+ * @module
+ */
+
+/** Element symbols, Z = 1 … 118 (IUPAC, Nomenclature of Inorganic Chemistry 2005, Table I; a fact of the trade). */
+export const ELEMENT_SYMBOLS: ReadonlySet<string> = new Set(
+  (
+    'H He Li Be B C N O F Ne Na Mg Al Si P S Cl Ar K Ca Sc Ti V Cr Mn Fe Co Ni Cu Zn Ga Ge As Se Br Kr Rb Sr Y Zr Nb Mo Tc Ru Rh Pd Ag Cd In Sn Sb Te I Xe ' +
+    'Cs Ba La Ce Pr Nd Pm Sm Eu Gd Tb Dy Ho Er Tm Yb Lu Hf Ta W Re Os Ir Pt Au Hg Tl Pb Bi Po At Rn Fr Ra Ac Th Pa U Np Pu Am Cm Bk Cf Es Fm Md No Lr ' +
+    'Rf Db Sg Bh Hs Mt Ds Rg Cn Nh Fl Mc Lv Ts Og'
+  ).split(' '),
+);
