@@ -1,6 +1,5 @@
+import { formulaText } from '../notation/formula.js';
 import { checkSaltShape, type Salt, type SaltIon } from './salt.js';
-
-const SUBSCRIPT_DIGITS = '₀₁₂₃₄₅₆₇₈₉';
 
 /** Writes ions as a formula: counts after monatomic ions, parentheses round a polyatomic ion that occurs more than once. */
 export function formatIons(ions: readonly Pick<SaltIon, 'formula' | 'count'>[]): string {
@@ -16,21 +15,6 @@ export function formatIons(ions: readonly Pick<SaltIon, 'formula' | 'count'>[]):
 /** `·6H2O` for six waters of crystallization, `·H2O` for one, nothing for none. */
 export function hydrateSuffix(water: number): string {
   return water > 0 ? `·${water === 1 ? '' : water}H2O` : '';
-}
-
-/** Turns the digits of a formula into subscripts, except a hydrate's leading count. */
-function subscriptDigits(formula: string): string {
-  let out = '';
-  let afterDot = false;
-  for (const c of formula) {
-    if (c === '·') afterDot = true;
-    else if (c >= '0' && c <= '9') {
-      out += afterDot ? c : SUBSCRIPT_DIGITS[Number(c)];
-      continue;
-    } else afterDot = false;
-    out += c;
-  }
-  return out;
 }
 
 /**
@@ -54,5 +38,5 @@ export function formatSalt(salt: Pick<Salt, 'ions' | 'water'>, options: { style?
   checkSaltShape(salt);
   const anhydrous = formatIons(salt.ions);
   const plain = anhydrous + hydrateSuffix(salt.water);
-  return options?.style === 'unicode' ? subscriptDigits(plain) : plain;
+  return options?.style === 'unicode' ? formulaText(plain) : plain;
 }

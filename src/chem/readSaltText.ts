@@ -5,6 +5,8 @@
  *
  * @module
  */
+import { chargeNumber, chargeText, ionText } from '../notation/charge.js';
+import { formulaText } from '../notation/formula.js';
 import type { Dataset } from '../data/dataset.js';
 import type { IonRecord } from '../data/schemas.js';
 import { IonheatError } from '../error.js';
@@ -32,10 +34,6 @@ interface Piece {
   options: Option[];
 }
 
-const superscript = (charge: number): string => {
-  const n = Math.abs(charge);
-  return `${n === 1 ? '' : n}${charge > 0 ? '+' : '-'}`;
-};
 
 /** Ions a run of units [i, j) could be, with how many of each ion the run holds. */
 function piecesOf(units: readonly FormulaUnit[], i: number, j: number, index: IonIndex): Option[] {
@@ -143,8 +141,8 @@ function describeOptions(pieces: readonly Piece[]): string {
     .map((p) => {
       const charges = [...new Set(p.options.map((o) => o.ion.charge))];
       const o = p.options[0]!;
-      const total = charges.map((c) => (c * o.multiplicity > 0 ? '+' : '') + c * o.multiplicity).join(' or ');
-      return `${o.multiplicity > 1 ? o.multiplicity + ' × ' : ''}${o.ion.formula}${charges.map(superscript).join('/')} (${total})`;
+      const total = charges.map((c) => chargeNumber(c * o.multiplicity)).join(' or ');
+      return `${o.multiplicity > 1 ? o.multiplicity + ' × ' : ''}${formulaText(o.ion.formula)}${charges.map(chargeText).join('/')} (${total})`;
     })
     .join(', ');
 }
@@ -205,7 +203,7 @@ export function readSaltText(formula: string, dataset: Dataset): Salt {
     throw new IonheatError('UNBALANCED_CHARGE', `the charges in "${syntax.mainText}" do not balance: ${describeOptions(reading)}${single}`, { text: syntax.text, position: 0 });
   }
   if (candidates.size > 1) {
-    throw new IonheatError('AMBIGUOUS_FORMULA', `"${syntax.mainText}" can be read as ${[...candidates.values()].map((ions) => formatIons(ions) + ' (' + ions.map((i) => i.count + ' ' + i.ion).join(' + ') + ')').join(' or ')}; write the ions unambiguously`, { text: syntax.text, position: 0 });
+    throw new IonheatError('AMBIGUOUS_FORMULA', `"${syntax.mainText}" can be read as ${[...candidates.values()].map((ions) => formatIons(ions) + ' (' + ions.map((i) => i.count + ' ' + ionText(i.ion)).join(' + ') + ')').join(' or ')}; write the ions unambiguously`, { text: syntax.text, position: 0 });
   }
   const ions = [...candidates.values()][0]!;
   return buildSalt('ionic', ions, syntax.water, index, dataset);

@@ -16,7 +16,8 @@ import { quadrature } from '../quantity/propagate.js';
 import { makeEstimate, type Basis, type Estimate } from '../quantity/estimate.js';
 import type { CycleStep } from './cycleStep.js';
 import { elementSteps, gaseousIon } from './gaseousIon.js';
-import { ionText, subscriptFormula } from './ionText.js';
+import { ionText } from '../notation/charge.js';
+import { formulaText } from '../notation/formula.js';
 import { thermalElectronEnthalpy } from './thermalElectronEnthalpy.js';
 
 const BORN_HABER_OPTIONS = optionNames<BornHaberOptions>('bornHaberCycle', { solve: true, latticeEnthalpy: true, formationEnthalpy: true });
@@ -99,7 +100,7 @@ function affinityUnknown(salt: Salt, dataset: Dataset): { ion: string; element: 
   if (ion.charge === -2) steps.push(affinity.get(element) ?? missing(`no first electron affinity of ${element} (electron-affinities.json)`, salt));
   const ordinal = ion.charge === -1 ? 'first' : 'second';
   const from = ion.charge === -1 ? `${element}(g)` : ionText(`${element}[-]`) + '(g)';
-  steps.push({ kind: 'electron-attachment', label: `${ordinal} electron affinity of ${element} (solved)`, equation: `${from} + e⁻ → ${ionText(ion.id)}(g)`, value: 0, u: 0, source: 'solved', fromMemory: false, count: 1, solved: true });
+  steps.push({ kind: 'electron-attachment', label: `${ordinal} electron affinity of ${element} (solved; the step is −EA)`, equation: `${from} + e⁻ → ${ionText(ion.id)}(g)`, value: 0, u: 0, source: 'solved', fromMemory: false, count: 1, solved: true });
   return { ion: ion.id, element, charge: ion.charge, count: anions[0]!.count, steps, electron: thermalElectronEnthalpy(ion.charge) };
 }
 
@@ -167,7 +168,7 @@ export function bornHaberCycle(salt: Salt | string, options: BornHaberOptions = 
   path.sort((a, b) => ORDER[a.kind] - ORDER[b.kind]);
 
   const gasIons = s.ions.map((i) => `${i.count > 1 ? i.count + ' ' : ''}${ionText(i.ion)}(g)`).join(' + ');
-  const crystal = `${subscriptFormula(s.formula)}(s)`;
+  const crystal = `${formulaText(s.formula)}(s)`;
   const tabulated = saltRecords('compound-formation.json', s, dataset).find((r) => r.phase === 'cr');
   const formationKnown: KnownValue | undefined =
     options.formationEnthalpy ?? (tabulated ? { value: tabulated.value, u: dataset.uncertaintyOf('compound-formation.json', tabulated) ?? 0, source: tabulated.source } : undefined);
@@ -220,7 +221,10 @@ export function bornHaberCycle(salt: Salt | string, options: BornHaberOptions = 
       notes.push(`electron affinity of ${ea.element} for ${ionText(ea.ion)}: energy released at 0 K (the tabulating convention), ${ea.charge === -2 ? 'the second electron; a negative value means the electron is bound only in the lattice' : 'per electron'}`);
     }
   }
-  const steps = [...path, latticeStep, formationStep];
+  const steps = [...path, latticeStep, formationStep].map((st) => {
+    const citation = st.solved ? undefined : dataset.source(st.source)?.citation;
+    return citation ? { ...st, reference: citation } : st;
+  });
   const memory = steps.filter((st) => st.fromMemory).map((st) => st.label);
   if (memory.length > 0) notes.push(`entered from memory, not checked against the source: ${[...new Set(memory)].join('; ')}`);
   const sources = steps.flatMap((st) => (st.source === 'solved' ? [] : [st.source])).concat(latticeKnown?.sources ?? []);

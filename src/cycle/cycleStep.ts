@@ -31,6 +31,8 @@ export interface CycleStep {
   u: number;
   /** Source key of `data/sources.json` (or `solved` for the step the cycle solved for). */
   source: string;
+  /** The full citation of `source` (from `data/sources.json`), for legends and reports; absent for a solved or given value. */
+  reference?: string;
   /** True where the number behind the step was entered from memory. */
   fromMemory: boolean;
   /** Times the step occurs per formula unit (already included in `value`). */

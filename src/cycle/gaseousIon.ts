@@ -9,7 +9,7 @@ import { builtinDataset } from '../data/builtin.js';
 import { exactSum } from '../quantity/exactSum.js';
 import { quadrature } from '../quantity/propagate.js';
 import type { CycleStep } from './cycleStep.js';
-import { ionText } from './ionText.js';
+import { ionText } from '../notation/charge.js';
 import { thermalElectronEnthalpy } from './thermalElectronEnthalpy.js';
 
 /** A gaseous ion's formation enthalpy with the steps behind it. */
@@ -100,7 +100,7 @@ export function elementSteps(dataset: Dataset = builtinDataset()): ElementSteps 
         r.element,
         step({
           kind: 'electron-attachment',
-          label: `first electron affinity of ${r.element} (${r.value} kJ/mol released)`,
+          label: `first electron affinity of ${r.element} (the step is −EA; EA = ${r.value} kJ/mol released)`,
           equation: `${r.element}(g) + e⁻ → ${charged(r.element, -1)}(g)`,
           value: -r.value,
           u: dataset.uncertaintyOf('electron-affinities.json', r) ?? 0,
@@ -160,7 +160,7 @@ function build(dataset: Dataset): ReadonlyMap<string, GaseousIon> {
           ]);
           const ea2 = step({
             kind: 'electron-attachment',
-            label: `second electron affinity of ${el} (from the tabulated ΔfH° of gaseous ${ionText(ion.id)})`,
+            label: `second electron affinity of ${el} (the step is −EA; from the tabulated ΔfH° of gaseous ${ionText(ion.id)})`,
             equation: `${charged(el, -1)}(g) + e⁻ → ${ionText(ion.id)}(g)`,
             value: second,
             u: tableStep.u,

@@ -8,7 +8,7 @@
  */
 import type { Dataset } from '../data/dataset.js';
 import type { IonKind } from '../data/schemas.js';
-import { ionText } from '../cycle/ionText.js';
+import { ionText } from '../notation/charge.js';
 
 /** A tabulated ion property with its provenance. */
 export interface SourcedValue {

@@ -69,6 +69,8 @@ export interface PackTimeCourse {
     skinConductanceWPerK: TimeCourseParameter;
   };
   startC: number;
+  /** The fill as run: each solid's formula and grams, the grams of water and the container's heat capacity, J/K. */
+  fill: { solids: { formula: string; massG: number }[]; waterG: number; containerJPerK: number };
   /** The adiabatic final temperature of the same fill, with its 95 % interval, °C. */
   adiabaticFinal: Estimate;
   /** The heat capacity used throughout, J/K (that of the adiabatic final state). */
@@ -93,6 +95,16 @@ export const DEFAULTS = {
   skinC: 33,
   skinConductanceWPerK: 0.25,
 } as const;
+
+/** Each parameter in words, with the command-line option that sets it (the library option is the key of `parameters`). */
+const PARAMETER_WORDS: Record<keyof typeof DEFAULTS, readonly [string, string]> = {
+  durationS: ['duration', '--duration'],
+  dissolutionTimeConstantS: ['dissolution time constant', '--tau'],
+  ambientC: ['air temperature', '--ambient'],
+  ambientConductanceWPerK: ['heat exchange with the air', '--g-ambient'],
+  skinC: ['skin temperature', '--skin'],
+  skinConductanceWPerK: ['heat exchange with the skin', '--g-skin'],
+};
 
 const UNITS: Record<keyof typeof DEFAULTS, string> = {
   durationS: 's',
@@ -249,7 +261,7 @@ export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, 
   const notes = [
     'lumped model: one temperature for the whole pack, first-order dissolution towards the equilibrium of the current temperature, linear heat exchange with air and skin; the heat capacity is that of the adiabatic final state throughout',
   ];
-  const assumed = Object.entries(parameters).filter(([, p]) => p.assumed).map(([k, p]) => `${k} = ${p.value} ${p.unit}`);
+  const assumed = (Object.keys(parameters) as (keyof typeof PARAMETER_WORDS)[]).filter((k) => parameters[k].assumed).map((k) => `${PARAMETER_WORDS[k][0]} ${parameters[k].value} ${parameters[k].unit} (${PARAMETER_WORDS[k][1]})`);
   if (assumed.length > 0) notes.push(`assumed values for illustration, not measurements: ${assumed.join(', ')}; give your own for a real pack`);
   if (frozeAt !== null) notes.push(`from about ${Math.round(frozeAt)} s the pack sits at the freezing floor of the solution; ice would form, and its later melting is not followed`);
   const cautions = packCautions(
@@ -259,6 +271,7 @@ export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, 
   return {
     parameters,
     startC: prepared.startC,
+    fill: { solids: prepared.solids.map((x) => ({ formula: x.salt.formula, massG: x.massG })), waterG: prepared.waterG, containerJPerK: prepared.containerJPerK },
     adiabaticFinal: adiabaticResult.finalTemperature,
     heatCapacityJPerK: C,
     points,

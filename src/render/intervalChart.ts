@@ -9,8 +9,13 @@
 import { drawChecked } from './chartInput.js';
 import type { Basis, Estimate } from '../quantity/estimate.js';
 import { formatEstimate } from '../quantity/formatEstimate.js';
-import type { Direction, ObjectiveName, ScreenRow, Suitability } from '../screen/screenRow.js';
-import { el, linearScale, niceTicks, num, svgDocument, text, theme, tickLabel } from './svg.js';
+import { focusRange } from './focusRange.js';
+import type { Direction, FillSpec, ObjectiveName, ScreenRow, Suitability } from '../screen/screenRow.js';
+import { formulaText } from '../notation/formula.js';
+import { formatNumber } from '../notation/minus.js';
+import { textWidth } from './textBox.js';
+import { el, linearScale, niceTicks, num, svgDocument, text, tickLabel } from './svg.js';
+import { palette } from './palette.js';
 
 /** A vertical line to draw across the chart, such as a target temperature. */
 export interface ChartMark {
@@ -34,7 +39,7 @@ export interface IntervalChartOptions {
 
 /** What the chart needs of a screen: its settings and its rows (ranked rows carry `rank`). */
 export interface ChartableScreen {
-  settings: { objective: ObjectiveName; direction: Direction };
+  settings: { objective: ObjectiveName; direction: Direction; fill?: FillSpec | null; spec?: string | null };
   rows: readonly ScreenRow[];
   /** The counts of the whole run, when `rows` holds only some of the rows (a streamed screen keeps only the best). */
   summary?: { read: number; computed: number; failed: number; excluded: number };
@@ -59,20 +64,12 @@ const OBJECTIVE_TITLE: Record<ObjectiveName, string> = {
   'plateau-duration': 'Plateau duration of the standard warmer',
 };
 
-/** Subscript digits for display; a hydrate's leading count after `·` stays normal. */
-function displayFormula(formula: string): string {
-  const subscripts = '₀₁₂₃₄₅₆₇₈₉';
-  let out = '';
-  let afterDot = false;
-  for (const c of formula) {
-    if (c === '·') afterDot = true;
-    else if (c >= '0' && c <= '9') {
-      out += afterDot ? c : subscripts[Number(c)];
-      continue;
-    } else afterDot = false;
-    out += c;
-  }
-  return out;
+/** What the screen ran with, in words: the fill and the specification, or that there were none. */
+function inputsLine(settings: ChartableScreen['settings']): string {
+  const f = settings.fill;
+  const fill = f ? `fill: ${formatNumber(f.saltMassG)} g of each salt in ${formatNumber(f.waterMassG)} g water, start ${formatNumber(f.startC)} °C` : 'no standard fill';
+  const spec = settings.spec ? `spec: ${settings.spec}` : 'no spec';
+  return `Inputs — ${fill}; ${spec}`;
 }
 
 /** A value marker of a given basis, centred on (x, y), of half-size r. */
@@ -94,13 +91,6 @@ function marker(basis: Basis, x: number, y: number, r: number, fill: string, str
 function valueText(e: Estimate): string {
   const f = formatEstimate(e);
   return `${f.value}  [${f.low}, ${f.high}]`;
-}
-
-/** Rough width of a text in pixels at a font size (system sans-serif). */
-function textWidth(s: string, size: number): number {
-  let w = 0;
-  for (const c of s) w += c >= '₀' && c <= '₉' ? 0.45 : c === ' ' ? 0.3 : c >= 'A' && c <= 'Z' ? 0.68 : 0.56;
-  return w * size;
 }
 
 /**
@@ -157,24 +147,22 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
   const rowH = n <= 15 ? 26 : n <= 40 ? 20 : 16;
   const font = n <= 40 ? 12 : 11;
   const markerR = rowH <= 16 ? 4 : 5;
-  const labels = shown.map((r) => `${r.rank !== undefined ? `${r.rank}. ` : ''}${displayFormula(r.formula ?? r.input.formula)}`);
+  const labels = shown.map((r) => `${r.rank !== undefined ? `${r.rank}. ` : ''}${formulaText(r.formula ?? r.input.formula)}`);
   const labelW = Math.min(260, Math.max(90, ...labels.map((l) => textWidth(l, font) + 24)));
   const valueTexts = shown.map((r) => valueText(r.objective!));
   const valueW = Math.max(120, ...valueTexts.map((v) => textWidth(v, font) + 16));
   const left = labelW;
   const right = width - valueW - 16;
 
-  // Domain: every interval, zero and every mark.
   const marks = [...(options.marks ?? [])].filter((m) => Number.isFinite(m.at));
-  // Domain: every value, zero and every mark, and the interval ends but for the widest few (with more than ten rows,
-  // the lowest and highest tenth of the ends are left out): a bar that runs past the axis ends in an arrow, and its
-  // numbers stand at the right. One wild interval would otherwise squeeze every other row into a few pixels.
-  const values = [0, ...shown.map((r) => r.objective!.value), ...marks.map((m) => m.at)];
-  const lows = shown.map((r) => r.objective!.low).sort((a, b) => a - b);
-  const highs = shown.map((r) => r.objective!.high).sort((a, b) => a - b);
-  const cut = n > 10 ? Math.floor(n / 10) : 0;
-  const lo = Math.min(...values, ...(lows.length > 0 ? [lows[cut]!] : []));
-  const hi = Math.max(...values, ...(highs.length > 0 ? [highs[highs.length - 1 - cut]!] : []));
+  // Domain: the values that matter, zero and every mark, and the interval ends near them. A wild value or interval
+  // is clipped at the axis (an arrow, and its numbers stand whole at the right), so one exotic model row cannot
+  // squeeze every other row into a few pixels.
+  const [lo, hi] = focusRange(
+    shown.map((r) => r.objective!.value),
+    shown.flatMap((r) => [r.objective!.low, r.objective!.high]),
+    [0, ...marks.map((m) => m.at)],
+  );
   const { ticks, domain } = niceTicks(lo, hi, width > 800 ? 8 : 6);
   const x = linearScale(domain, [left, right]);
 
@@ -187,6 +175,8 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
   parts.push(text(16, y, title, { class: 'heading' }));
   y += 20;
   parts.push(text(16, y, subtitle, { class: 'muted label' }));
+  y += 18;
+  parts.push(text(16, y, inputsLine(result.settings), { class: 'muted label' }));
   y += 22;
   const bases = [...new Set(shown.map((r) => r.objective!.basis))];
   const legendBases: Basis[] = (['measured', 'cycle', 'anchored', 'model'] as const).filter((b) => bases.includes(b) || bases.length === 0);
@@ -194,16 +184,16 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
   parts.push(text(lx, y + 4, 'Basis:', { class: 'label' }));
   lx += 48;
   for (const b of legendBases) {
-    parts.push(marker(b, lx + 5, y, 5, theme.ink, theme.ink));
+    parts.push(marker(b, lx + 5, y, 5, palette.ink, palette.ink));
     parts.push(text(lx + 15, y + 4, BASIS_LABEL[b], { class: 'label' }));
     lx += 28 + textWidth(BASIS_LABEL[b], 12);
   }
   lx += 10;
-  parts.push(el('rect', { x: lx, y: y - 6, width: 26, height: 12, fill: '#fdf3d7', stroke: '#e0b64a', 'stroke-dasharray': '3 2' }));
+  parts.push(el('rect', { x: lx, y: y - 6, width: 26, height: 12, fill: palette.unsureTint, stroke: palette.unsure, 'stroke-dasharray': '3 2' }));
   parts.push(text(lx + 32, y + 4, 'undetermined: interval spans zero', { class: 'label' }));
   y += 22;
 
-  const axisTop = y + 30;
+  const axisTop = y + 30 + 14 * marks.length;
   const axis = (at: number, below: boolean): string[] =>
     ticks.map((t) => text(x(t), below ? at + 14 : at - 4, tickLabel(t), { class: 'small muted', 'text-anchor': 'middle' }));
 
@@ -219,19 +209,20 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
     unsuitable: cool ? 'Works the other way (heats)' : 'Works the other way (cools)',
   };
   let index = 0;
+  let clippedValues = 0;
   for (const group of GROUP_ORDER) {
     const rows = shown.map((r, i) => ({ r, i })).filter(({ r }) => r.suitability === group);
     if (rows.length === 0) continue;
     rowY += 6;
-    body.push(text(12, rowY + 12, groupTitle[group], { class: 'label', 'font-weight': '600', fill: group === 'undetermined' ? '#9a6b00' : theme.ink }));
+    body.push(text(12, rowY + 12, groupTitle[group], { class: 'label', 'font-weight': '600', fill: group === 'undetermined' ? palette.unsure : palette.ink }));
     rowY += 20;
     const y0 = rowY;
     for (const { r, i } of rows) {
       const e = r.objective!;
       const cy = rowY + rowH / 2;
-      if (group === 'undetermined') shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: '#fdf3d7' }));
-      else if (index % 2 === 1) shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: '#f5f7fa' }));
-      const colour = group === 'suitable' ? (cool ? theme.cool : theme.heat) : group === 'undetermined' ? '#b7791f' : theme.neutral;
+      if (group === 'undetermined') shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: palette.unsureTint }));
+      else if (index % 2 === 1) shading.push(el('rect', { x: 4, y: rowY, width: width - 8, height: rowH, fill: palette.zebra }));
+      const colour = group === 'suitable' ? (cool ? palette.cold : palette.hot) : group === 'undetermined' ? palette.unsure : palette.neutral;
       body.push(text(left - 10, cy + font * 0.36, labels[i]!, { 'text-anchor': 'end', 'font-size': font, ...(group === 'unsuitable' ? { class: 'muted' } : {}), ...(group === 'undetermined' ? { 'font-style': 'italic' } : {}) }));
       const x0 = Math.max(left, Math.min(right, x(e.low)));
       const x1 = Math.max(left, Math.min(right, x(e.high)));
@@ -242,7 +233,15 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
         else body.push(el('line', { x1: end, y1: cy - h, x2: end, y2: cy + h, stroke: colour, 'stroke-width': 1.2 }));
       }
       const hollow = group === 'undetermined';
-      body.push(marker(e.basis, Math.max(left, Math.min(right, x(e.value))), cy, markerR, hollow ? '#ffffff' : colour, group === 'suitable' ? theme.ink : colour));
+      const vx = x(e.value);
+      if (vx < left || vx > right) {
+        // The value itself lies beyond the axis: a double chevron at the edge, pointing out.
+        const edge = vx < left ? left : right;
+        const d = vx < left ? -1 : 1;
+        const w = markerR * 1.2;
+        body.push(el('path', { d: `M${num(edge - d * 2 * w)} ${num(cy - w)}L${num(edge - d * w)} ${num(cy)}L${num(edge - d * 2 * w)} ${num(cy + w)}M${num(edge - d * w)} ${num(cy - w)}L${num(edge)} ${num(cy)}L${num(edge - d * w)} ${num(cy + w)}`, fill: 'none', stroke: colour === palette.neutral ? palette.muted : colour, 'stroke-width': 2 }));
+        clippedValues++;
+      } else body.push(marker(e.basis, vx, cy, markerR, hollow ? palette.background : colour, group === 'suitable' ? palette.ink : colour));
       body.push(text(right + 12, cy + font * 0.36, valueTexts[i]!, { 'font-size': font, class: group === 'unsuitable' ? 'muted' : '' }));
       rowY += rowH;
       index++;
@@ -252,21 +251,24 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
   const bodyBottom = rowY + 6;
 
   // Grid, zero and marks, drawn under the rows' markers but over the shading.
-  const grid: string[] = ticks.map((t) => el('line', { x1: x(t), y1: axisTop, x2: x(t), y2: bodyBottom, stroke: theme.grid, 'stroke-width': 1 }));
+  const grid: string[] = ticks.map((t) => el('line', { x1: x(t), y1: axisTop, x2: x(t), y2: bodyBottom, stroke: palette.grid, 'stroke-width': 1 }));
   const overlay: string[] = [];
   const hintY = axisTop - 20;
   if (domain[0] <= 0 && domain[1] >= 0) {
-    overlay.push(el('line', { x1: x(0), y1: axisTop - 2, x2: x(0), y2: bodyBottom, stroke: theme.ink, 'stroke-width': 1.5 }));
+    overlay.push(el('line', { x1: x(0), y1: axisTop - 2, x2: x(0), y2: bodyBottom, stroke: palette.ink, 'stroke-width': 1.5 }));
     if (objective === 'enthalpy' || objective === 'heat-per-gram') {
       const heats = '← heats (exothermic)';
       const cools = 'cools (endothermic) →';
-      if (x(0) - left > textWidth(heats, 11) + 8) overlay.push(text(x(0) - 6, hintY, heats, { class: 'small', 'text-anchor': 'end', fill: theme.heat }));
-      if (right - x(0) > textWidth(cools, 11) + 8) overlay.push(text(x(0) + 6, hintY, cools, { class: 'small', fill: theme.cool }));
+      if (x(0) - left > textWidth(heats, 11) + 8) overlay.push(text(x(0) - 6, hintY, heats, { class: 'small', 'text-anchor': 'end', fill: palette.hot }));
+      if (right - x(0) > textWidth(cools, 11) + 8) overlay.push(text(x(0) + 6, hintY, cools, { class: 'small', fill: palette.cold }));
     } else overlay.push(text(x(0) + 4, hintY, objective === 'fill-temperature' ? '0 °C' : 'zero', { class: 'small', 'font-weight': '600' }));
   }
   marks.forEach((m, i) => {
-    overlay.push(el('line', { x1: x(m.at), y1: hintY - 10 - 12 * i, x2: x(m.at), y2: bodyBottom, stroke: theme.accent, 'stroke-width': 1.5, 'stroke-dasharray': '6 3' }));
-    overlay.push(text(x(m.at) + 4, hintY - 12 * i - 2, m.label, { class: 'small', fill: theme.accent }));
+    // Each mark's label on a line of its own above the zero hints, turned to the left where it would run off the chart.
+    const ly = hintY - 14 * (i + 1);
+    const leftward = x(m.at) + 4 + textWidth(m.label, 11) > width - 8;
+    overlay.push(el('line', { x1: x(m.at), y1: ly + 3, x2: x(m.at), y2: bodyBottom, stroke: palette.limit, 'stroke-width': 1.5, 'stroke-dasharray': '6 3' }));
+    overlay.push(text(x(m.at) + (leftward ? -4 : 4), ly, m.label, { class: 'small', fill: palette.limit, ...(leftward ? { 'text-anchor': 'end' } : {}) }));
   });
 
   // Footer: axis title, what is not shown, the caution.
@@ -283,6 +285,10 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
   footY += 22;
   if (shown.some((r) => x(r.objective!.low) < left || x(r.objective!.high) > right)) {
     footer.push(text(16, footY, 'An arrow at the end of a bar marks an interval that runs past the axis; the numbers at the right give it whole.', { class: 'small muted' }));
+    footY += 16;
+  }
+  if (clippedValues > 0) {
+    footer.push(text(16, footY, `» at the edge: ${clippedValues} value${clippedValues === 1 ? '' : 's'} beyond the axis, left out of its range so that the others can be read.`, { class: 'small muted' }));
     footY += 16;
   }
   footer.push(text(16, footY, `${n} of ${total} candidate${total === 1 ? '' : 's'} drawn${missing.length > 0 ? `; ${missing.join(', ')}` : ''}.`, { class: 'small muted' }));

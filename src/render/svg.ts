@@ -6,6 +6,8 @@
  *
  * @module
  */
+import { fontStack, palette } from './palette.js';
+import { formatNumber } from '../notation/minus.js';
 
 /** Escapes text for an SVG (XML) text node or attribute value. */
 export function escapeXml(text: string): string {
@@ -40,31 +42,18 @@ export function text(x: number, y: number, content: string, attributes: Attribut
   return el('text', { x, y, ...attributes }, content, { text: true });
 }
 
-/** The house palette and type, so every chart looks of one family. */
-export const theme = {
-  font: "system-ui, -apple-system, 'Segoe UI', Roboto, 'Helvetica Neue', Arial, sans-serif",
-  ink: '#1f2933',
-  muted: '#616e7c',
-  grid: '#e4e7eb',
-  cool: '#1c6dd0',
-  heat: '#d64545',
-  neutral: '#7b8794',
-  accent: '#8a5cf6',
-  background: '#ffffff',
-} as const;
-
 /**
  * A complete standalone SVG document with a title (for screen readers and
  * file viewers), a white background and the house styles.
  */
 export function svgDocument(width: number, height: number, title: string, body: readonly string[], description = ''): string {
-  const style = `text{font-family:${theme.font};fill:${theme.ink}}.muted{fill:${theme.muted}}.small{font-size:11px}.label{font-size:12px}.heading{font-size:15px;font-weight:600}`;
+  const style = `text{font-family:${fontStack};fill:${palette.ink}}.muted{fill:${palette.muted}}.small{font-size:11px}.label{font-size:12px}.heading{font-size:15px;font-weight:600}`;
   return (
     `<svg xmlns="http://www.w3.org/2000/svg" width="${num(width)}" height="${num(height)}" viewBox="0 0 ${num(width)} ${num(height)}" role="img">` +
     el('title', {}, title, { text: true }) +
     (description ? el('desc', {}, description, { text: true }) : '') +
     el('style', {}, style) +
-    el('rect', { x: 0, y: 0, width, height, fill: theme.background }) +
+    el('rect', { x: 0, y: 0, width, height, fill: palette.background }) +
     body.join('') +
     '</svg>\n'
   );
@@ -100,6 +89,5 @@ export function niceTicks(lo: number, hi: number, count = 6): { ticks: number[];
 
 /** A tick label without floating-point noise (0.30000000000000004 → 0.3). */
 export function tickLabel(x: number): string {
-  const s = Number(x.toPrecision(10)).toString();
-  return s.startsWith('-') ? `−${s.slice(1)}` : s;
+  return formatNumber(Number(x.toPrecision(10)));
 }

@@ -107,7 +107,7 @@ describe('parseSalt: bad input gets a typed error a chemist understands', () => 
   });
 
   it('names the charges it found when they do not balance', () => {
-    expect(() => parseSalt('NaCl2')).toThrow(/Na\+ \(\+1\), 2 × Cl- \(-2\)/);
+    expect(() => parseSalt('NaCl2')).toThrow(/Na⁺ \(\+1\), 2 × Cl⁻ \(−2\)/);
   });
 
   it('points at the position of the problem', () => {

@@ -3,7 +3,7 @@
 // down for exothermic ones (common practice for these diagrams).
 import { describe, expect, it } from 'vitest';
 import { bornHaberCycle, cycleDiagram } from '../../src/index.js';
-import { theme } from '../../src/render/svg.js';
+import { palette } from '../../src/render/palette.js';
 
 /** Arrowheads as drawn: colour, and whether the tip points up. */
 function arrowheads(svg: string): { fill: string; up: boolean }[] {
@@ -32,9 +32,9 @@ describe('cycleDiagram', () => {
       expect(heads).toHaveLength(cycle.steps.length);
       cycle.steps.forEach((step, i) => {
         const head = heads[i]!;
-        // The solved step's direction follows its value too, drawn in the accent colour.
+        // The solved step's direction follows its value too, drawn in the solved colour; endothermic is the cold colour in every chart.
         expect(head.up, step.label).toBe(step.value > 0);
-        expect(head.fill, step.label).toBe(step.solved ? theme.accent : step.value > 0 ? theme.heat : theme.cool);
+        expect(head.fill, step.label).toBe(step.solved ? palette.solved : step.value > 0 ? palette.cold : palette.hot);
         expect(svg).toContain(step.label.replace(/&/g, '&amp;'));
       });
     });

@@ -44,7 +44,7 @@ describe('an inHouse source and "your value"', () => {
   it('dissolve and pack say "your value" in text output', async () => {
     const path = file('mine.json', { sources: lab, tables: { 'solution-enthalpies': [kno3(34.7)] } });
     const d = await runCliInMemory(['dissolve', 'KNO3', '--data', path]);
-    expect(d.out).toContain('(measured, your value: myLab in mine.json)');
+    expect(d.out.replace(/\n\s+/g, ' ')).toContain('(measured, your value: myLab in mine.json)'); // text wraps at 100 columns
     expect(d.out).toMatch(/measured \(your value\)\s+table/);
     const p = await runCliInMemory(['pack', '--salt', 'KNO3', '--salt-mass', '10', '--water', '100', '--data', path]);
     // The pack shows the integral enthalpy at the fill's molality, beside the infinite-dilution value (your 34.70 at

@@ -21,7 +21,7 @@ describe('temperature–ratio chart', () => {
   it('is a well-formed standalone SVG with title and axis units', () => {
     expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
     expect(wellFormed(svg)).toBe(true);
-    expect(svg).toContain('<title>Final temperature against salt-to-water ratio: KNO3</title>');
+    expect(svg).toContain('<title>Final temperature against salt-to-water ratio: KNO₃</title>');
     expect(svg).toContain('final temperature (°C)');
     expect(svg).toContain('grams of solid per gram of water');
     expect(svg).not.toMatch(/NaN|Infinity|undefined/);
@@ -35,7 +35,9 @@ describe('temperature–ratio chart', () => {
   });
   it('draws the burn threshold for a hot fill', () => {
     const hot = packCurveSvg(packRatioCurve({ solids: [{ formula: 'CaCl2', massG: 1 }], waterG: 100 }, { points: 40 }));
-    expect(hot).toContain('contact-burn threshold');
+    expect(hot).toContain('Contact-burn threshold 44 °C (ISO 13732-1)');
+    expect(hot).toContain('burn threshold 44 °C (long contact)');
+    expect(hot).toContain('boiling');
   });
 });
 

@@ -9,7 +9,8 @@ describe('warmer chart', () => {
     expect(svg.startsWith('<svg')).toBe(true);
     expect(svg).toContain('<title>Sodium acetate warmer</title>');
     expect(svg).toMatch(/plateau 58 °C \(95 % 57–59\) for about 21\.\d min; 43 % crystallised at once/);
-    expect(svg).toContain('44 °C contact-burn threshold');
+    expect(svg).toContain('contact-burn threshold 44 °C (ISO 13732-1)');
+    expect(svg).toMatch(/burn threshold 44 °C: \d+(\.\d)? min above/);
     expect(svg.match(/<polyline/g)).toHaveLength(1);
     // 60 samples plus the jump from the start temperature at the trigger
     expect(svg.match(/<polyline points="([^"]*)"/)![1]!.split(' ')).toHaveLength(61);

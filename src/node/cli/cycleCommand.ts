@@ -11,6 +11,9 @@ import { cycleDiagram } from '../../render/cycleDiagram.js';
 import { numberOption, readArgs } from './args.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
+import { bulletLines } from './paragraphs.js';
+import { outputWidth } from './io.js';
+import { formatNumber } from '../../notation/minus.js';
 
 function readSolve(value: string | undefined): CycleUnknown {
   const s = value ?? 'lattice';
@@ -92,11 +95,17 @@ export const cycleCommand: Command = {
     io.stdout(`Born–Haber cycle of ${formatSalt(salt, { style: 'unicode' })}, 298.15 K, kJ/mol\n\n`);
     const rows = cycle.steps.map((s, i) => {
       const r = rounded(s.value, s.u);
-      return [String(i + 1), s.label, s.equation, `${r.value > 0 ? '+' : ''}${r.value}`, String(r.u), s.solved ? 'solved' : s.source];
+      return [String(i + 1), s.label, s.equation, formatNumber(r.value, { plus: true }), String(r.u), s.solved ? 'solved' : s.source];
     });
     io.stdout(textTable(['#', 'step', 'equation', 'ΔH', 'u', 'source'], rows, new Set([0, 3, 4])));
-    io.stdout(`\n${result.quantity}: ${result.value} ± ${result.u} kJ/mol (95 % interval ${result.low} … ${result.high}; basis ${result.basis})\n`);
-    for (const note of result.notes) io.stdout(`  note: ${note}\n`);
+    io.stdout(`\n${result.quantity}: ${formatNumber(result.value)} ± ${result.u} kJ/mol (95 % interval ${formatNumber(result.low)} … ${formatNumber(result.high)}; basis ${result.basis})\n`);
+    // Say how the result and the solved step's sign relate, so that −EA beside +ΔH of the step reads as one fact.
+    const solvedAt = cycle.steps.findIndex((s) => s.solved);
+    if (solvedAt >= 0 && cycle.solve !== 'formation') {
+      const symbol = cycle.solve === 'lattice' ? 'ΔH_L' : 'EA';
+      io.stdout(`  sign: step ${solvedAt + 1} is −${symbol} = ${formatNumber(rounded(cycle.steps[solvedAt]!.value, cycle.steps[solvedAt]!.u).value, { plus: true })} kJ/mol (${cycle.solve === 'lattice' ? 'the lattice enthalpy is taken in to part the crystal' : 'the electron affinity is the energy released on attachment'})\n`);
+    }
+    io.stdout(bulletLines(result.notes, outputWidth(io), '  note: ').join('\n') + (result.notes.length > 0 ? '\n' : ''));
     if (svgPath) io.stdout(`diagram written to ${svgPath}\n`);
     return 0;
   },

@@ -9,6 +9,10 @@ import { numberOption, readArgs } from './args.js';
 import { userSourceOf } from '../../solution/userValueCheck.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
+import { bulletLines } from './paragraphs.js';
+import { outputWidth } from './io.js';
+import { formatNumber, withTrueMinus } from '../../notation/minus.js';
+import { wrapText } from '../../notation/wrapText.js';
 
 /** The caution every dissolve result carries (common practice). */
 const GENERAL_CAUTION =
@@ -43,7 +47,7 @@ function toJson(r: DissolveResult, cautions: string[], integral: { molality: num
   };
 }
 
-const signed = (x: number): string => (x > 0 ? `+${x}` : String(x));
+const signed = (x: number): string => formatNumber(x, { plus: true });
 
 function line(e: Estimate, dataset: Dataset): string[] {
   const r = roundEstimate(e);
@@ -96,23 +100,25 @@ export const dissolveCommand: Command = {
       out.push(`Integral enthalpy of solution to ${integral.molality} mol/kg, ${r.temperature.celsius} °C: ${signed(i.value)} ± ${i.u} kJ/mol (${i.method}); 95 % interval ${signed(i.low)} … ${signed(i.high)}`);
     }
     out.push(`Verdict: ${VERDICT_WORDS[r.verdict]}; P(endothermic) = ${r.probabilityEndothermic.toFixed(3)}`);
-    const pg = roundEstimate(r.perGram.salt);
-    out.push(`Heat absorbed per gram of salt: ${signed(pg.value)} ± ${pg.u} J/g`);
-    if (r.perGram.saturatedFill) {
-      const f = roundEstimate(r.perGram.saturatedFill);
-      out.push(`Heat absorbed per gram of a saturated fill (salt + water at 25 °C): ${signed(f.value)} ± ${f.u} J/g`);
-    }
+    // The words follow the sign, so that the number after them is always positive: heat absorbed (cools) or released (heats).
+    const perGram = (e: Estimate, what: string) => {
+      const g = roundEstimate(e);
+      const released = g.value < 0;
+      return `Heat ${released ? 'released' : 'absorbed'} per gram of ${what}: ${formatNumber(Math.abs(g.value))} ± ${g.u} J/g${g.high < 0 ? ' (heats)' : g.low > 0 ? ' (cools)' : ''}`;
+    };
+    out.push(perGram(r.perGram.salt, 'salt'));
+    if (r.perGram.saturatedFill) out.push(perGram(r.perGram.saturatedFill, 'a saturated fill (salt + water at 25 °C)'));
     out.push('', 'Every estimate (kJ/mol, + = endothermic; ± is one standard uncertainty):', '');
-    io.stdout(out.join('\n') + '\n');
+    io.stdout(out.flatMap((l) => (l === '' ? [''] : wrapText(withTrueMinus(l), outputWidth(io), '', '  '))).join('\n') + '\n');
     io.stdout(textTable(['basis', 'method', 'value', '95 % interval'], r.estimates.map((e) => line(e, dataset)), new Set([2, 3])));
     const tail: string[] = [];
     if (r.hydration?.absolute) {
       const h = roundEstimate(r.hydration.absolute);
-      tail.push(`Hydration enthalpy of the ions, Σν·ΔhydH°: ${h.value} ± ${h.u} kJ/mol (${h.method})`);
+      tail.push(`Hydration enthalpy of the ions, Σν·ΔhydH°: ${formatNumber(h.value)} ± ${h.u} kJ/mol (${h.method})`);
     }
     const notes = [...new Set([...r.notes, ...r.best.notes])];
-    if (notes.length > 0) tail.push('', 'Notes:', ...notes.map((n) => `  - ${n}`));
-    tail.push('', 'Cautions:', ...cautions.map((c) => `  - ${c}`));
+    if (notes.length > 0) tail.push('', 'Notes:', ...bulletLines(notes, outputWidth(io)));
+    tail.push('', 'Cautions:', ...bulletLines(cautions, outputWidth(io)));
     io.stdout('\n' + tail.join('\n') + '\n');
     return 0;
   },

@@ -14,6 +14,8 @@ export interface CliIO {
   readStdin(): Promise<string>;
   /** Working directory for relative paths. */
   cwd: string;
+  /** Width text output wraps to, in characters (see {@link outputWidth}); 100 when not given. */
+  columns?: number;
   /** Standard input as a stream, for inputs read record by record (optional: commands fall back to readStdin). */
   stdinStream?(): NodeJS.ReadableStream;
   /**
@@ -57,6 +59,24 @@ export interface OutputChannel {
  * never thrown and never turned into a process exit. The one `error`
  * listener is removed by {@link OutputChannel.release}.
  */
+/** Width of text output when standard output is not a terminal and `COLUMNS` is not set. */
+export const DEFAULT_COLUMNS = 100;
+
+/**
+ * The width text output wraps to: `COLUMNS` when set to a sensible number, else the terminal's width when standard
+ * output is a terminal, else {@link DEFAULT_COLUMNS}.
+ */
+export function terminalColumns(env: Record<string, string | undefined>, ttyColumns: number | undefined): number {
+  const fromEnv = Number(env.COLUMNS);
+  if (Number.isInteger(fromEnv) && fromEnv >= 20 && fromEnv <= 1000) return fromEnv;
+  return ttyColumns !== undefined && ttyColumns >= 20 ? ttyColumns : DEFAULT_COLUMNS;
+}
+
+/** The width a command's text wraps to. */
+export function outputWidth(io: Pick<CliIO, 'columns'>): number {
+  return io.columns ?? DEFAULT_COLUMNS;
+}
+
 export function outputChannel(stream: NodeJS.WritableStream): OutputChannel {
   let stoppedBy: NodeJS.ErrnoException | undefined;
   let waiting: (() => void)[] = [];
@@ -144,6 +164,7 @@ export function processIO(): ProcessIO {
     stderr: (t) => void err.write(t),
     stdoutGone: () => out.gone(),
     stderrIsTTY: Boolean(process.stderr.isTTY),
+    columns: terminalColumns(process.env, process.stdout.isTTY ? process.stdout.columns : undefined),
     cwd: process.cwd(),
     stdinStream: () => process.stdin,
     readStdin: async () => {

@@ -5,6 +5,7 @@
  *
  * @module
  */
+import { withTrueMinus } from '../../notation/minus.js';
 import { builtinDataset } from '../../data/builtin.js';
 import { isIonheatError } from '../../error.js';
 import { loadDataset } from '../loadDataset.js';
@@ -127,11 +128,11 @@ async function dispatch(argv: readonly string[], io: CliIO): Promise<number> {
   } catch (e) {
     // Messages may quote the user's text: control characters are shown, never sent to the terminal.
     if (isIonheatError(e)) {
-      io.stderr(`ionheat: ${escapeControls(e.message)}\n`);
+      io.stderr(`ionheat: ${withTrueMinus(escapeControls(e.message))}\n`);
       return 2;
     }
     if (e instanceof Error && (e as { usage?: boolean }).usage) {
-      io.stderr(`ionheat: ${escapeControls(e.message)}\n`);
+      io.stderr(`ionheat: ${withTrueMinus(escapeControls(e.message))}\n`);
       return 2;
     }
     // A defect in ionheat itself: say so in one line, without a stack trace.

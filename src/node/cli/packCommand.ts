@@ -15,6 +15,11 @@ import { userSourceOf } from '../../solution/userValueCheck.js';
 import { packDesignMargin, type PackDesignMargin } from '../../pack/designMargin.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
+import { bulletLines } from './paragraphs.js';
+import { outputWidth } from './io.js';
+import { formatNumber, withTrueMinus } from '../../notation/minus.js';
+import { formulaText } from '../../notation/formula.js';
+import { wrapText } from '../../notation/wrapText.js';
 import { writeChart } from './writeChart.js';
 import { warmerSalts } from '../../warmer/warmerMelt.js';
 
@@ -189,19 +194,19 @@ function marginJson(m: PackDesignMargin) {
   };
 }
 
-function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeCourse | undefined, dataset: Dataset, margin: PackDesignMargin | undefined): string {
+function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeCourse | undefined, dataset: Dataset, margin: PackDesignMargin | undefined, width: number): string {
   const out: string[] = [];
   const f = result.fill;
   const solids = f.solids.map((s) => `${r(s.massG, 3)} g ${formatSalt(parseSalt(s.formula, dataset), { style: 'unicode' })}`).join(' + ');
   out.push(`Pack: ${solids} in ${f.waterG} g water, start ${f.startC} °C${f.containerJPerK > 0 ? `, container ${f.containerJPerK} J/K` : ''}\n`);
   const t = rounded(result.finalTemperature);
   out.push(`final temperature   ${t.value} °C   (95 % interval ${t.low} to ${t.high} °C, ${result.interval.method === 'bounds' ? 'bounds' : `Monte Carlo, ${result.interval.samples} draws, seed ${result.interval.seed}`})`);
-  out.push(`change              ${result.temperatureChange >= 0 ? '+' : '−'}${Math.abs(r(result.temperatureChange, 2))} K${result.clamp ? `   (${result.clamp.kind} clamp)` : ''}\n`);
+  out.push(`change              ${formatNumber(r(result.temperatureChange, 2), { plus: true })} K${result.clamp ? `   (${result.clamp.kind} clamp)` : ''}\n`);
   out.push(
     textTable(
       ['solid', 'loaded g', 'dissolved g', 'undissolved g', 'mol/kg', 'ΔsolH(m) kJ/mol', 'heat kJ'],
       result.dissolved.map((d) => [
-        d.formula,
+        formulaText(d.formula),
         d.loadedMass.toFixed(2),
         d.dissolvedMass.toFixed(2),
         d.undissolvedMass.toFixed(2) + (d.undissolvedSolid && d.undissolvedSolid.formula !== d.formula ? ` (as ${d.undissolvedSolid.formula})` : ''),
@@ -226,13 +231,15 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
         (b ? `; ${(b.secondsInside / 60).toFixed(1)} min inside ${b.lowC}–${b.highC} °C` : '') +
         (course.secondsAboveBurnThreshold > 0 ? `; ${(course.secondsAboveBurnThreshold / 60).toFixed(1)} min above 44 °C` : ''),
     );
-    for (const n of course.notes.slice(0, 2)) out.push(`  ${n}`);
+    out.push(...bulletLines(course.notes.slice(0, 2), width, '  '));
   }
   out.push('\nCautions:');
-  for (const c of [...(margin?.caution ? [margin.caution] : []), ...(course ? course.cautions : result.cautions)]) out.push(`  • ${c}`);
+  out.push(...bulletLines([...(margin?.caution ? [margin.caution] : []), ...(course ? course.cautions : result.cautions)], width, '  • '));
   out.push('\nNotes:');
-  for (const n of result.notes) out.push(`  - ${n}`);
-  return out.join('\n') + '\n';
+  out.push(...bulletLines(result.notes, width));
+  // Sentences wrap to the width; the table (one entry of several lines) and the bullets (wrapped already) stay as they are.
+  const wrapped = out.map((entry) => (entry.trim().includes('\n') ? entry : entry.split('\n').flatMap((l) => wrapText(l, width, '', '  ')).join('\n')));
+  return withTrueMinus(wrapped.join('\n')) + '\n';
 }
 
 /** Rewrites the library's `solids[i].formula "X": …` into the option the user typed. */
@@ -377,7 +384,7 @@ export const packCommand: Command = {
       io.stdout(JSON.stringify(jsonReport(result, curve, course, withCurve, dataset, margin), null, 2) + '\n');
       return 0;
     }
-    io.stdout(textReport(result, curve, course, dataset, margin));
+    io.stdout(textReport(result, curve, course, dataset, margin, outputWidth(io)));
     for (const w of written) io.stdout(`chart written to ${w}\n`);
     return 0;
   },

@@ -3,6 +3,7 @@ import { formatSalt } from '../../chem/formatSalt.js';
 import { readArgs } from './args.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
+import { chargeNumber, ionText } from '../../notation/charge.js';
 
 /** `ionheat salt <formula>`: how ionheat reads a formula. */
 export const saltCommand: Command = {
@@ -17,7 +18,7 @@ export const saltCommand: Command = {
       return 0;
     }
     io.stdout(`${formatSalt(salt, { style: 'unicode' })}  (${salt.kind}, ${salt.molarMass.toFixed(3)} g/mol${salt.water ? `, ${salt.water} H₂O of crystallization` : ''})\n\n`);
-    io.stdout(textTable(['ion', 'charge', 'count'], salt.ions.map((i) => [i.ion, String(i.charge), String(i.count)]), new Set([1, 2])));
+    io.stdout(textTable(['ion', 'id', 'charge', 'count'], salt.ions.map((i) => [ionText(i.ion), i.ion, chargeNumber(i.charge), String(i.count)]), new Set([2, 3])));
     return 0;
   },
 };

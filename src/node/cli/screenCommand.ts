@@ -9,6 +9,7 @@ import { constants as osConstants } from 'node:os';
 import { Readable } from 'node:stream';
 import { IonheatError } from '../../error.js';
 import { intervalChart } from '../../render/intervalChart.js';
+import { specThresholds } from '../../screen/specThresholds.js';
 import { createScreener } from '../../screen/createScreener.js';
 import { enumerate } from '../../screen/enumerate.js';
 import { parseFillSpec } from '../../screen/parseFillSpec.js';
@@ -17,6 +18,7 @@ import { checkOutputTarget, fileIdentity, writeFileSafely } from '../writeFileSa
 import { escapeControls } from '../terminalText.js';
 import { objectiveNameSchema, type ObjectiveName, type ScreenRow } from '../../screen/screenRow.js';
 import { readArgs } from './args.js';
+import { outputWidth } from './io.js';
 import type { Command } from './command.js';
 import { openCandidates, type InputRecord } from '../table/readCandidateRows.js';
 import { csvWriter, jsonWriter, rankedTable, summaryLine, type StreamWriter } from '../table/screenWriters.js';
@@ -138,7 +140,7 @@ export const screenCommand: Command = {
     const streaming = format === 'csv' || format === 'json';
     // The CSV writer starts once the input's header is known, so that it can leave out columns the input cannot fill.
     let writer: StreamWriter | undefined;
-    const table = streaming ? undefined : rankedTable(settings, format === 'md' ? 'md' : 'table');
+    const table = streaming ? undefined : rankedTable(settings, format === 'md' ? 'md' : 'table', outputWidth(io));
     const gone = () => io.stdoutGone?.();
     let pending = '';
     const startWriter = () => {
@@ -216,7 +218,7 @@ export const screenCommand: Command = {
     let chartFailure: IonheatError | undefined;
     if (chartTarget !== undefined && fatal === undefined) {
       const rows = rankRows(best.sort((a, b) => compareRanked(a, b, settings.objective, settings.direction)).slice(0, CHART_ROWS), settings.objective, settings.direction);
-      const svg = intervalChart({ settings, rows, summary }, { maxRows: CHART_ROWS });
+      const svg = intervalChart({ settings, rows, summary }, { maxRows: CHART_ROWS, marks: specThresholds(settings.spec, settings.objective) });
       try {
         writeFileSafely(chartTarget, svg, 'the chart', '--svg');
       } catch (e) {

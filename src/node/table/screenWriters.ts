@@ -6,6 +6,9 @@
  * @module
  */
 import type { Estimate } from '../../quantity/estimate.js';
+import { formulaText, formulasInText } from '../../notation/formula.js';
+import { withTrueMinus } from '../../notation/minus.js';
+import { wrapText } from '../../notation/wrapText.js';
 import { formatEstimate } from '../../quantity/formatEstimate.js';
 import { compareRanked, isRankable, type RankKey } from '../../screen/rankRows.js';
 import type { ScreenRow, ScreenSettings, ScreenSummary } from '../../screen/screenRow.js';
@@ -87,13 +90,66 @@ function headerOf(settings: ScreenSettings, rows: readonly ScreenRow[], withCost
 
 const CAUTION = 'Screening estimates: confirm by measurement; they defer to local codes, product-safety regulation and licensed practice. Hazard classes are from the hazards table; the safety data sheet of the material used takes precedence.';
 
-/** A plain-text table of collected rows (in the order given), with a heading and the caution. */
-export function textTableOf(rows: readonly ScreenRow[], settings: ScreenSettings): string {
+/** Widest a screen's text table may be, characters: long cells are moved to notes below it. */
+export const SCREEN_TABLE_COLUMNS = 120;
+
+/** Longest cell kept in the table for the salt, the hazards and the spec; longer text becomes a numbered note. */
+const CELL_LIMIT = { salt: 16, objective: 28, hazards: 22, spec: 6 } as const;
+
+/**
+ * A plain-text table of collected rows (in the order given), no wider than {@link SCREEN_TABLE_COLUMNS}: formulas
+ * with subscripts, and every cell too long for its column (a long hazard list, why a spec fails, an error, a note)
+ * moved below the table as a numbered note wrapped to `width`; then the caution.
+ */
+export function textTableOf(rows: readonly ScreenRow[], settings: ScreenSettings, width = 100): string {
   const withCost = rows.some((r) => r.input.pricePerKg !== undefined);
   const header = headerOf(settings, rows, withCost);
-  const right = new Set([0, 1]);
-  const body = rows.map((r) => cellsOf(r, settings, withCost));
-  return `${textTable(header, body, right)}\n${CAUTION}\n`;
+  header[header.length - 1] = 'see';
+  const notes: string[] = [];
+  const body = rows.map((r) => fitCells(cellsOf(r, settings, withCost), r.line, header, settings, notes));
+  return `${textTable(header, body, new Set([0, 1]))}${notesBelow(notes, width)}\n${wrapText(CAUTION, width).join('\n')}\n`;
+}
+
+/** The numbered notes below a text table, wrapped to `width` (empty when there are none). */
+function notesBelow(notes: readonly string[], width: number): string {
+  return notes.length > 0 ? `\n${notes.flatMap((n) => wrapText(formulasInText(n), width, '', '    ')).join('\n')}\n` : '';
+}
+
+/**
+ * One row's cells fitted to the text table: formulas with subscripts, true minus signs, and every cell too long for
+ * its column (a long hazard list, why a spec fails, an error, a note) moved to a numbered note in `notes`.
+ */
+function fitCells(raw: readonly string[], line: number, header: readonly string[], settings: ScreenSettings, notes: string[]): string[] {
+  const hazardsAt = header.indexOf('hazards');
+  const specAt = settings.spec !== null ? header.indexOf('spec') : -1;
+  const cells = raw.map((c) => withTrueMinus(c));
+  const moved: string[] = [];
+  const salt = cells[2]!;
+  cells[2] = formulaText(salt);
+  if ([...salt].length > CELL_LIMIT.salt) {
+    moved.push(`salt ${salt}`);
+    cells[2] = `${[...salt].slice(0, CELL_LIMIT.salt - 1).join('')}…`;
+  }
+  if ([...cells[3]!].length > CELL_LIMIT.objective) {
+    moved.push(`${settings.objective} ${cells[3]}`);
+    cells[3] = `${[...cells[3]!.split(' [')[0]!].slice(0, CELL_LIMIT.objective - 2).join('')} …`;
+  }
+  if ([...cells[hazardsAt]!].length > CELL_LIMIT.hazards) {
+    moved.push(`hazards: ${cells[hazardsAt]}`);
+    cells[hazardsAt] = `${cells[hazardsAt]!.split(', ')[0]}, …`;
+  }
+  if (specAt >= 0 && [...cells[specAt]!].length > CELL_LIMIT.spec) {
+    moved.push(`spec ${cells[specAt]}`);
+    cells[specAt] = cells[specAt]!.startsWith('fails') ? 'fails' : cells[specAt]!.slice(0, CELL_LIMIT.spec);
+  }
+  const last = cells.length - 1;
+  if (cells[last] !== '') moved.push(cells[last]!);
+  cells[last] = '';
+  if (moved.length > 0) {
+    notes.push(`[${notes.length + 1}] line ${line}: ${moved.join('; ')}`);
+    cells[last] = `[${notes.length}]`;
+  }
+  return cells;
 }
 
 /** A Markdown table of collected rows, with the caution below it. */
@@ -130,7 +186,7 @@ export interface RankedTable {
  * cells at once (control characters made visible, so NUL can join them), so
  * a run of any length holds about a hundred bytes per row, never the rows.
  */
-export function rankedTable(settings: ScreenSettings, format: 'table' | 'md'): RankedTable {
+export function rankedTable(settings: ScreenSettings, format: 'table' | 'md', width = 100): RankedTable {
   const entries: TableEntry[] = [];
   let withCost = false;
   let unit: string | undefined;
@@ -149,18 +205,22 @@ export function rankedTable(settings: ScreenSettings, format: 'table' | 'md'): R
       const costAt = 5; // the cost column follows rank, line, salt, objective, basis, verdict (rank left out here)
       const rowsInOrder = [...order, ...entries.filter((e) => !e.rankable)];
       entries.length = 0;
+      const header = headerOf(settings, unit ? [{ objective: { unit } } as ScreenRow] : [], withCost);
+      if (format === 'table') header[header.length - 1] = 'see';
+      const notes: string[] = [];
       function* body(): Generator<string[]> {
+        notes.length = 0; // the table reads the body twice (widths, then lines): number the notes afresh each time
         for (const e of rowsInOrder) {
           const cells = e.cells.split('\u0000');
           if (!withCost) cells.splice(costAt, 1);
-          yield [rankOf.has(e) ? String(rankOf.get(e)) : '', ...cells];
+          const all = [rankOf.has(e) ? String(rankOf.get(e)) : '', ...cells];
+          yield format === 'table' ? fitCells(all, e.line, header, settings, notes) : all;
         }
       }
-      const header = headerOf(settings, unit ? [{ objective: { unit } } as ScreenRow] : [], withCost);
       if (format === 'md') yield* markdownLines(header, body());
       else {
         for (const line of textTableLines(header, body, new Set([0, 1]))) yield `${line}\n`;
-        yield `\n${CAUTION}\n`;
+        yield `${notesBelow(notes, width)}\n${wrapText(CAUTION, width).join('\n')}\n`;
       }
     },
   };

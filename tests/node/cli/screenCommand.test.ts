@@ -110,7 +110,18 @@ describe('ionheat screen: a CSV with good rows, bad rows, blank lines, an inject
     expect(body).toHaveLength(8);
     expect(r.out).toMatch(/failed: "Xy" at position 3 is not a chemical element/);
     expect(r.out).toMatch(/same as line 2/);
-    expect(r.out).toMatch(/defer to local codes, product-safety regulation and licensed practice/);
+    expect(r.out.replace(/\s+/g, ' ')).toMatch(/defer to local codes, product-safety regulation and licensed practice/);
+  });
+
+  it('keeps the table within 120 columns, with long cells numbered below it and the rest wrapped to the width', async () => {
+    const r = await run(['screen', '--enumerate', '--fill', '30:100@22', '--spec', 'best.low > 0']);
+    const lines = r.out.split('\n');
+    expect(Math.max(...lines.map((l) => [...l].length))).toBeLessThanOrEqual(120);
+    // The failed Li2O row points to its note below the table, which gives the reason in full.
+    expect(r.out).toMatch(/^\s+5\s+Li₂O\s+\[\d+\]$/m);
+    expect(r.out).toMatch(/^\[\d+\] line 5: failed: Li₂O reacts with water/m);
+    const below = lines.slice(lines.findIndex((l) => l.startsWith('[1]')));
+    expect(Math.max(...below.map((l) => [...l].length))).toBeLessThanOrEqual(100);
   });
 });
 
