@@ -41,6 +41,7 @@ function toJson(r: DissolveResult, cautions: string[], integral: { molality: num
     ...(r.hydration ? { hydration: { absolute: rounded(r.hydration.absolute) ?? null, conventional: rounded(r.hydration.conventional) ?? null } } : {}),
     temperature: { celsius: r.temperature.celsius, heatCapacityOfSolution: rounded(r.temperature.heatCapacityOfSolution) ?? null },
     ...(integral && i ? { integral: { molality: integral.molality, value: i.value, low: i.low, high: i.high, unit: 'kJ/mol', basis: i.basis, method: i.method, sources: i.sources } } : {}),
+    ...(r.hypotheticalHydrate ? { hypotheticalHydrate: r.hypotheticalHydrate } : {}),
     molarMass: r.salt.molarMass,
     notes: r.notes,
     cautions,
@@ -94,6 +95,12 @@ export const dissolveCommand: Command = {
     const best = roundEstimate(r.best);
     const out: string[] = [];
     out.push(`${formatSalt(r.salt, { style: 'unicode' })}  (${r.salt.molarMass.toFixed(2)} g/mol)`);
+    if (r.hypotheticalHydrate) {
+      // Said first: every number below extrapolates the hydrate rule to a solid no table lists.
+      const h = r.hypotheticalHydrate;
+      const known = h.knownWaters.length > 0 ? `known forms: ${h.knownWaters.map((w) => (w === 0 ? 'anhydrous' : `·${w}H₂O`)).join(', ')}` : 'no form of this salt is known to the tables';
+      out.push(`Hypothetical hydrate (${h.reason}; ${known}): the numbers below extrapolate the hydrate rule and describe no real solid.`);
+    }
     out.push(`Enthalpy of solution at infinite dilution, ${r.temperature.celsius} °C: ${signed(best.value)} ± ${best.u} kJ/mol (${basisText(r.best, dataset)}); 95 % interval ${signed(best.low)} … ${signed(best.high)}`);
     if (integral) {
       const i = roundEstimate(integral.estimate);

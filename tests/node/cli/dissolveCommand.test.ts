@@ -6,6 +6,17 @@ import { runCliInMemory } from '../runCliInMemory.js';
 const run = (args: string[]) => runCliInMemory(args);
 
 describe('ionheat dissolve', () => {
+  it('says first that a hydrate no table lists is hypothetical, in text and JSON', async () => {
+    const text = await run(['dissolve', 'KCl·50H2O']);
+    expect(text.status).toBe(0);
+    expect(text.out.split('\n')[1]).toMatch(/^Hypothetical hydrate \(more waters than any known hydrate; known forms: anhydrous/);
+    const j = JSON.parse((await run(['dissolve', 'KCl·50H2O', '--json'])).out);
+    expect(j.hypotheticalHydrate).toMatchObject({ reason: 'more waters than any known hydrate' });
+    expect(j.hypotheticalHydrate.knownWaters).toContain(0);
+    const real = JSON.parse((await run(['dissolve', 'KCl', '--json'])).out);
+    expect(real.hypotheticalHydrate).toBeUndefined();
+  });
+
   it('--json prints one object with the contract fields', async () => {
     const r = await run(['dissolve', 'NH4NO3', '--json']);
     expect(r.status).toBe(0);
