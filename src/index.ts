@@ -22,7 +22,7 @@ export { roundToUncertainty } from './quantity/rounding.js';
 export * as constants from './quantity/constants.js';
 
 // Data
-export { Dataset, type Tables, type TableOverrides } from './data/dataset.js';
+export { Dataset, type Tables, type TableOverrides, type OverrideProblem } from './data/dataset.js';
 export type { BoundedCache } from './data/boundedCache.js';
 export { builtinDataset } from './data/builtin.js';
 export * as schemas from './data/schemas.js';
@@ -75,6 +75,8 @@ export { measuredSolutionEnthalpy } from './solution/measuredSolution.js';
 export { solutionEnthalpyFromCycle } from './solution/cycleSolution.js';
 export { anchoredSolutionEnthalpies, type AnchorSet, type AnchorCombination } from './solution/anchoredSolution.js';
 export type { AnchorSalt } from './solution/anchorIndex.js';
+export type { SaltIonClass } from './lattice/saltIonClass.js';
+export type { HypotheticalHydrate, HypotheticalReason } from './solution/knownHydrates.js';
 export { solutionEnthalpyFromModel } from './solution/modelSolution.js';
 export { hydrateFromParent, hydrateRuleScatter, WATER_OF_CRYSTALLIZATION_ENTHALPY, type HydrateRuleInput, type HydrateRuleScatter } from './solution/hydrateRule.js';
 export { kirchhoffCorrection, solutionHeatCapacity } from './solution/solutionHeatCapacity.js';

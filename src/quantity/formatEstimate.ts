@@ -34,7 +34,8 @@ function fixed(x: number, exponent: number, signed: boolean): string {
  * uncertainty to two significant digits and the value and interval ends to
  * the same decimal place, trailing zeros kept (`0.20`, not `0.2`), a true
  * minus sign, and a `+` on positive values when `signed` is set (useful for
- * enthalpies, where the sign is the message).
+ * enthalpies, where the sign is the message). No more than six significant
+ * digits are written, however small the uncertainty.
  *
  * @param e - the estimate's value, standard uncertainty and interval ends (one unit, any unit)
  * @param options - display choices
@@ -46,6 +47,7 @@ function fixed(x: number, exponent: number, signed: boolean): string {
  * const e = makeEstimate({ quantity: 'enthalpy of solution', value: 34.89, u: 0.2, unit: 'kJ/mol', basis: 'measured', method: 'table' });
  * formatEstimate(e, { signed: true }).value; // '+34.89'
  * formatEstimate(e).u; // '0.20'
+ * formatEstimate({ value: 19.99999, u: 1e-9, low: 19.99987, high: 20 }).low; // '19.9999'
  * ```
  */
 export function formatEstimate(e: Pick<Estimate, 'value' | 'u' | 'low' | 'high'>, options: { signed?: boolean } = {}): FormattedEstimate {
@@ -55,6 +57,10 @@ export function formatEstimate(e: Pick<Estimate, 'value' | 'u' | 'low' | 'high'>
     const plain = (x: number) => fixed(x, -Math.min(6, Math.max(0, 4 - Math.floor(Math.log10(Math.abs(x) || 1)))), signed);
     return { value: plain(e.value), u: '0', low: plain(e.low), high: plain(e.high) };
   }
-  const { exponent } = roundToUncertainty(e.value, e.u);
+  // At most six significant digits: an uncertainty far below the value's own size (a fill a sparingly soluble salt
+  // barely changes) would otherwise print a dozen decimals that tell a reader nothing.
+  const size = Math.max(Math.abs(e.value), Math.abs(e.low), Math.abs(e.high));
+  const floor = size > 0 ? Math.floor(Math.log10(size)) - 5 : -Infinity;
+  const exponent = Math.max(roundToUncertainty(e.value, e.u).exponent, floor);
   return { value: fixed(e.value, exponent, signed), u: fixed(e.u, exponent, false), low: fixed(e.low, exponent, signed), high: fixed(e.high, exponent, signed) };
 }

@@ -39,7 +39,7 @@ interface RulePair {
   miss: number;
   /** The pair's own θ, (ΔfH°(hydrate) − ΔfH°(parent))/waters, kJ/mol. */
   theta: number;
-  /** The salt family the pair calibrates ({@link hydrateRuleFamily}). */
+  /** The salt family the pair calibrates (`hydrateRuleFamily`). */
   family: string;
 }
 
@@ -164,12 +164,12 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
  * miss/√Δn and the rule's uncertainty for Δn waters is that times √Δn.
  *
  * Without `family`, θ is Jenkins and Glasser's {@link WATER_OF_CRYSTALLIZATION_ENTHALPY}
- * and every pair counts. With `family` (see {@link hydrateRuleFamily}), θ is
+ * and every pair counts. With `family` (see `hydrateRuleFamily`), θ is
  * fitted to the pairs of that family, θ_f = Σ Δn·θᵢ / Σ Δn (θᵢ each pair's
  * step per water), and the scatter is measured about it and mixed with the
- * pooled scatter (about the θ fitted to every pair) as {@link FAMILY_PRIOR_PAIRS}
+ * pooled scatter (about the θ fitted to every pair) as `FAMILY_PRIOR_PAIRS`
  * pseudo-pairs, s² = (N_f·s_f² + 4·s²_all)/(N_f + 4); a family with fewer
- * than {@link MIN_FAMILY_PAIRS} pairs uses every pair and the pooled fit instead,
+ * than `MIN_FAMILY_PAIRS` pairs uses every pair and the pooled fit instead,
  * and its θ is then uncertain by the spread of the fitted family θs (`thetaU`). `excludeFormula`
  * leaves out the pairs involving one salt (its own values are hidden in
  * leave-one-out), so neither θ nor the scatter sees them.

@@ -14,7 +14,7 @@ export interface CliIO {
   readStdin(): Promise<string>;
   /** Working directory for relative paths. */
   cwd: string;
-  /** Width text output wraps to, in characters (see {@link outputWidth}); 100 when not given. */
+  /** Width text output wraps to, in characters (see `outputWidth`); 100 when not given. */
   columns?: number;
   /** Standard input as a stream, for inputs read record by record (optional: commands fall back to readStdin). */
   stdinStream?(): NodeJS.ReadableStream;
