@@ -8,12 +8,12 @@
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { basisOrder, makeEstimate, type Basis, type Estimate } from '../quantity/estimate.js';
-import { COVERAGE_95 } from '../quantity/constants.js';
 import { finalTemperatureInterval, heatCapacityRelativeU, type TemperatureInterval } from './finalTemperatureInterval.js';
 import type { FillEquilibrium } from './fillEquilibrium.js';
 import { packCautions } from './packCautions.js';
 import { preparePackFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
+import { integralFromInfinite } from '../solution/toMolality.js';
 import type { SolubilityStatus } from './saltSolubility.js';
 
 /** One solid at the end, grams of the solid as loaded unless said otherwise. */
@@ -121,19 +121,7 @@ function clampMessage(kind: PackClamp['kind'], t: number, solution: FillSolution
 
 /** The integral enthalpy used for one solid, as an estimate: ΔsolH°(∞, T₀)'s interval widened by u(φL). */
 function integralEstimate(infinite: Estimate, value: number, uL: number, molality: number, basis: string, sources: readonly string[]): Estimate {
-  const shift = value - infinite.value;
-  return makeEstimate({
-    quantity: 'integral enthalpy of solution',
-    value,
-    u: Math.hypot(infinite.u, uL),
-    low: value - Math.hypot(infinite.value - infinite.low, COVERAGE_95 * uL),
-    high: value + Math.hypot(infinite.high - infinite.value, COVERAGE_95 * uL),
-    unit: 'kJ/mol',
-    basis: infinite.basis,
-    method: `infinite-dilution+${basis}`,
-    sources: [...infinite.sources, ...sources],
-    notes: [`to ${molality.toFixed(3)} mol/kg: φL = ${shift.toFixed(3)} kJ/mol`],
-  });
+  return integralFromInfinite(infinite, value, uL, basis, sources, [`to ${molality.toFixed(3)} mol/kg: φL = ${(value - infinite.value).toFixed(3)} kJ/mol`]);
 }
 
 /**

@@ -20,6 +20,19 @@ export function toMolality(infinite: Estimate, salt: Salt, molality: number, tem
   const phiL = brineEnthalpy(model, molality, tK) / 1000;
   const uL = brineEnthalpyU(model, molality, tK) / 1000;
   const value = infinite.value + phiL;
+  const notes = [`to ${Number(molality.toPrecision(4))} mol/kg at ${temperatureC} °C: ΔsolH°(∞) ${infinite.value.toFixed(2)} kJ/mol plus φL ${phiL.toFixed(2)} ± ${uL.toFixed(2)} kJ/mol`, ...model.notes];
+  return integralFromInfinite(infinite, value, uL, model.basis, model.sources, notes, quantity);
+}
+
+/**
+ * The estimate of an integral enthalpy `value` (kJ/mol) reached from the
+ * infinite-dilution estimate with a φL of standard uncertainty `uL`: u and
+ * each side of the 95 % interval combine those of ΔsolH°(∞) with u(φL) in
+ * quadrature.
+ *
+ * @internal
+ */
+export function integralFromInfinite(infinite: Estimate, value: number, uL: number, brineBasis: string, sources: readonly string[], notes: readonly string[], quantity = 'integral enthalpy of solution'): Estimate {
   return makeEstimate({
     quantity,
     value,
@@ -28,8 +41,8 @@ export function toMolality(infinite: Estimate, salt: Salt, molality: number, tem
     high: value + Math.hypot(infinite.high - infinite.value, COVERAGE_95 * uL),
     unit: 'kJ/mol',
     basis: infinite.basis,
-    method: `infinite-dilution+${model.basis}`,
-    sources: [...infinite.sources, ...model.sources],
-    notes: [`to ${Number(molality.toPrecision(4))} mol/kg at ${temperatureC} °C: ΔsolH°(∞) ${infinite.value.toFixed(2)} kJ/mol plus φL ${phiL.toFixed(2)} ± ${uL.toFixed(2)} kJ/mol`, ...model.notes],
+    method: `infinite-dilution+${brineBasis}`,
+    sources: [...infinite.sources, ...sources],
+    notes: [...notes],
   });
 }
