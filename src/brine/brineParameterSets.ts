@@ -7,9 +7,8 @@
  */
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
-import { parseSalt } from '../chem/parseSalt.js';
+import { tableFormulaSalt } from '../chem/tableFormulaSalt.js';
 import type { Salt } from '../chem/salt.js';
-import { isIonheatError } from '../error.js';
 import type { BrinePitzerRecord } from '../data/schemas.js';
 import { hasTemperatureDependence, pitzerCoefficients, type PitzerCoefficients } from './pitzerTemperature.js';
 import type { PitzerParameters } from './pitzerBrine.js';
@@ -48,13 +47,8 @@ export function brineRecords(dataset: Dataset = builtinDataset()): readonly Brin
   return dataset.memo('brine.records', () => {
     const out: BrineRecordParameters[] = [];
     for (const record of dataset.records('brine-pitzer.json')) {
-      let salt: Salt;
-      try {
-        salt = parseSalt(record.formula, dataset);
-      } catch (e) {
-        if (isIonheatError(e)) continue;
-        throw e;
-      }
+      const salt = tableFormulaSalt(record.formula, dataset);
+      if (!salt) continue;
       const z = saltCharges(salt);
       if (!z) continue;
       const pitzer: PitzerParameters = {

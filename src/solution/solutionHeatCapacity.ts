@@ -10,8 +10,8 @@ import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { Salt } from '../chem/salt.js';
 import { saltRecords, WATER } from '../chem/saltRecords.js';
-import { parseSalt } from '../chem/parseSalt.js';
-import { IonheatError, isIonheatError } from '../error.js';
+import { tableFormulaSalt } from '../chem/tableFormulaSalt.js';
+import { IonheatError } from '../error.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { widenEstimate } from './widenEstimate.js';
 import { exactSum, type Term } from '../quantity/exactSum.js';
@@ -86,13 +86,8 @@ export function typicalSolutionHeatCapacity(dataset: Dataset = builtinDataset())
     const values: number[] = [];
     for (const record of dataset.records('heat-capacities.json')) {
       if (record.phase !== 'cr') continue;
-      let salt: Salt;
-      try {
-        salt = parseSalt(record.formula, dataset);
-      } catch (e) {
-        if (isIonheatError(e)) continue;
-        throw e;
-      }
+      const salt = tableFormulaSalt(record.formula, dataset);
+      if (!salt) continue;
       const cp = solutionHeatCapacity(salt, dataset);
       if (cp) values.push(cp.value);
     }

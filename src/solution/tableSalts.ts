@@ -5,10 +5,9 @@
  * @module
  */
 import type { Dataset } from '../data/dataset.js';
-import { parseSalt } from '../chem/parseSalt.js';
+import { tableFormulaSalt } from '../chem/tableFormulaSalt.js';
 import { saltRecordIndex, WATER } from '../chem/saltRecords.js';
 import type { Salt } from '../chem/salt.js';
-import { isIonheatError } from '../error.js';
 
 /**
  * Canonical formula → parsed salt for every formula of compound-formation.json
@@ -23,11 +22,8 @@ export function tableSalts(dataset: Dataset): ReadonlyMap<string, Salt> {
     for (const table of ['compound-formation.json', 'solution-enthalpies.json'] as const) {
       for (const formula of saltRecordIndex(table, dataset).keys()) {
         if (formula === WATER || salts.has(formula)) continue;
-        try {
-          salts.set(formula, parseSalt(formula, dataset));
-        } catch (e) {
-          if (!isIonheatError(e)) throw e;
-        }
+        const salt = tableFormulaSalt(formula, dataset);
+        if (salt) salts.set(formula, salt);
       }
     }
     return salts;
