@@ -45,6 +45,14 @@ export interface Check {
   agree: boolean;
   /** The record's note says why it differs from this reference. */
   explained: boolean;
+  /** Where the compared number is a nested quantity of the record (warmer-melts.json), its field; the provenance (`fromMemory`, `checkedAgainst`, `note`) is that quantity's own. */
+  field?: string;
+}
+
+/** The object that carries a check's provenance: the record, or its nested quantity. */
+export function checkedObject(tables: Record<string, any>, check: Check): any {
+  const record = tables[check.table].records[check.index];
+  return check.field ? record[check.field] : record;
 }
 
 /** A family of comparisons: one quantity of one table against one reference, with its tolerance and why. */
@@ -72,6 +80,7 @@ const COMBINED_WITH: Record<string, string[]> = {
 /** What was compared, where a record holds more than the compared number. */
 const QUANTITY: Record<string, string> = {
   densityCrc: 'density',
+  warmerSolidCpPerry: 'solid heat capacity per gram',
   densityCrcOrganic: 'density',
   gasIonCycle: 'cycle: atom + ionization energies',
   solutionClosureCrc: 'closure: ions minus crystal',
@@ -127,6 +136,12 @@ export const FAMILIES: Record<string, Family> = {
     table: 'heat-capacities.json',
     reference: 'chemicals-crc-thermo',
     why: 'Cp°(298 K): CRC prints 0.1 J/(mol·K) from the same NBS/CODATA sources; 0.5 J/(mol·K) or 1 % covers rounding and NBS vs CODATA revisions, below the 2 % the pack balance can notice.',
+  },
+  warmerSolidCpPerry: {
+    name: 'warmerSolidCpPerry',
+    table: 'warmer-melts.json',
+    reference: 'chemicals-perry-cp',
+    why: "specific heat capacity of a warmer's solid hydrate, J/(g·K), against Perry's constant for that hydrate (cal/(mol·K) × 4.184 at 298.15 K, divided by the molar mass): Perry gives these hydrate constants to three or four digits with no stated error, so 3 % as in heatCapacityPerry; the record's own standard uncertainty (about 10 %) is far wider.",
   },
   densityCrc: {
     name: 'densityCrc',
@@ -364,10 +379,11 @@ function plainDissolution(reaction: string, salt: { ions: readonly { formula: st
 /** Runs every comparison; records with no counterpart in a reference produce no check. */
 export function crossChecks(tables: Record<string, any>, refs: Record<string, ReferenceFile>): Check[] {
   const checks: Check[] = [];
-  const add = (family: string, index: number, record: any, subject: string, ours: number, ref: number, tolerance: number, refLabel: string) => {
+  const add = (family: string, index: number, record: any, subject: string, ours: number, ref: number, tolerance: number, refLabel: string, field?: string) => {
     const f = FAMILIES[family]!;
     const agree = Math.abs(ours - ref) <= tolerance + 1e-9;
-    checks.push({ family, table: f.table, index, subject, ours, ref, tolerance, reference: f.reference, refLabel, agree, explained: !agree && explains(record.note, f.reference) });
+    const note = field ? record[field]?.note : record.note;
+    checks.push({ family, table: f.table, index, subject, ours, ref, tolerance, reference: f.reference, refLabel, agree, explained: !agree && explains(note, f.reference), ...(field ? { field } : {}) });
   };
   const recs = (table: string): any[] => tables[table].records;
 
@@ -410,6 +426,17 @@ export function crossChecks(tables: Record<string, any>, refs: Record<string, Re
     const t = 298.15;
     const cp = 4.184 * (p.a + p.b * t + p.c / (t * t) + p.d * t * t);
     add('heatCapacityPerry', i, r, r.formula, r.value, Number(cp.toFixed(2)), (cp * (p.errorPercent ?? 3)) / 100, `${p.formula} (Perry 2-151)`);
+  });
+
+  // --- Warmer melts: the solid hydrate's heat capacity per gram, from Perry's molar constant.
+  (tables['warmer-melts.json']?.records ?? []).forEach((r: any, i: number) => {
+    const key = saltHill(r.formula);
+    const p = one((perry.get(key) ?? []).filter((x) => x.subphase === null));
+    if (!p) return;
+    const t = 298.15;
+    const molar = 4.184 * (p.a + p.b * t + p.c / (t * t) + p.d * t * t);
+    const perGram = molar / parseSalt(r.formula).molarMass;
+    add('warmerSolidCpPerry', i, r, `${r.formula} solid`, r.solidHeatCapacity.value, Number(perGram.toFixed(4)), 0.03 * perGram, `${p.formula} (Perry 2-151)`, 'solidHeatCapacity');
   });
 
   // --- CRC densities.
