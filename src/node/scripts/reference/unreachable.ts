@@ -1,8 +1,8 @@
 /**
  * Why the records still marked `fromMemory` cannot be checked from anything
  * this project can reach: one entry per data table that holds such records.
- * Printed by `npm run provenance` (docs/provenance.md, "What no reachable copy
- * can check"); tests/data/reference-crosscheck.test.ts fails when a table with
+ * Printed by `npm run provenance` into docs/provenance.md, under the heading
+ * "What no reachable copy can check"; tests/data/reference-crosscheck.test.ts fails when a table with
  * records from memory has no entry here, so the report never goes silent on one.
  *
  * Reachable means: the package registries of the machine (npm and Debian; PyPI
