@@ -13,8 +13,17 @@
  * @module
  */
 
-/** Table file name → why its remaining records from memory have no open copy to be compared with. */
+/**
+ * Table file name → why its remaining records from memory have no open copy to
+ * be compared with. A table may have an entry before it holds such records (new
+ * ions or salts entered from memory land in these tables); the report shows an
+ * entry only while its table holds records from memory.
+ */
 export const UNREACHABLE: Record<string, string> = {
+  'ion-formation-aq.json':
+    'NBS aqueous-ion enthalpies of formation of ions that the CRC aqueous-ion copy does not list; the NBS tables themselves are in no reachable package.',
+  'ion-heat-capacities-aq.json': 'NBS partial molar heat capacities of aqueous ions that the CRC aqueous-ion copy does not list.',
+  'ions.json': 'ions whose composition and charge no copy lists as an aqueous ion, a crystalline substance or a Shannon entry.',
   'thermochemical-radii.json':
     'Roobottom, Jenkins, Passmore and Glasser (1999): no reachable package carries thermochemical radii (chemicals, pymatgen and the PHREEQC databases do not); the one public copy found, the CRC lattice-energy table, was read for NH4+ only.',
   'ion-volumes.json':
