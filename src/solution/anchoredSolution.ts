@@ -492,7 +492,8 @@ export interface FloorGroupKey {
  * spread of its sets that each would have needed for its 95 % interval to
  * hold its own value (each pool salt estimated from the others); and never
  * less than the largest such need within the smaller, more specific groups
- * passed over. The anchors' stated uncertainties are added on top rather
+ * passed over, as seen by any estimator (a small group is small for each of
+ * them, and the structure-bound ones see fewer of its salts). The anchors' stated uncertainties are added on top rather
  * than taken out, which errs wide but keeps a wider input from ever
  * narrowing a result. `excludeFormula` leaves one salt's own miss out
  * (leave-one-out). `mode` `cross` gives the floor of the sets that span
@@ -525,6 +526,14 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
       atLeast = Math.max(atLeast, largest(g.needed, skip));
       ratioAtLeast = Math.max(ratioAtLeast, largest(g.ratios, ratioSkip));
     }
+    // The largest need any estimator saw in a small group stands for all of them: Born–Mayer sees only the
+    // rock-salt silver halides, and AgCl alone would let AgBr claim ±12 kJ/mol.
+    for (const other of floorGroups(dataset, options.mode).values()) {
+      const h = other.groups.get(key);
+      if (!h) continue;
+      const hs = options.excludeFormula !== undefined ? (h.position.get(options.excludeFormula) ?? -1) : -1;
+      if (h.needed.length - (hs >= 0 ? 1 : 0) > 0) atLeast = Math.max(atLeast, largest(h.needed, hs));
+    }
   }
   return { relative: atLeast, spreadScale: 1, salts: 0, group: 'none' };
 }
@@ -547,19 +556,27 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
  * is one form for every charge type, its radius errors enter as
  * ν·|z₊z₋|/(r₊ + r₋), so sets that mix charge types leave them uncancelled
  * (K₂CO₃ from KClO₃ + Na₂CO₃ − NaClO₃ missed by about 180 kJ/mol, Al₂(SO₄)₃
- * from 1:1 and 2:2 salts by about 1000). No estimator is therefore allowed
- * to mix charge types; a salt with no anchor set of its own charge type
- * gets no anchored estimate. The standard uncertainty is √(u_data² + spread² + f²):
- * the anchors' own uncertainties, the weighted spread of the sets, and a
- * floor f calibrated so that 95 % of the pool salts, each estimated from
- * the others, fall inside their intervals. The salt itself is never an
- * anchor; `excludeMeasured` also leaves its own miss out of the floor.
+ * from 1:1 and 2:2 salts by about 1000) when they were mixed in among sets
+ * of one type under the same calibration. Sets of the target's own charge
+ * type are therefore used wherever one exists. Only a salt with none gets
+ * one fallback estimate, method `anchored-cross-kapustinskii`, from sets
+ * that span charge types, with Kapustinskii differences alone (the one
+ * form with the same constants for every charge type), a substituting
+ * cation N that bonds like M (noble-gas core or not, both), and a bracket
+ * scale, typical spread and floors of their own, calibrated by estimating
+ * every pool salt from such sets only. The standard uncertainty is
+ * √(u_data² + (κ·spread)² + f²): the anchors' own uncertainties, the
+ * weighted spread of the sets (scaled by κ ≤ 1 where the pool shows it
+ * overstating the misses), and a floor f calibrated so that 95 % of the
+ * pool salts, each estimated from the others, fall inside their intervals
+ * (see {@link anchoredFloor}). The salt itself is never an anchor;
+ * `excludeMeasured` also leaves its own miss out of the calibration.
  *
  * @param salt - an anhydrous salt of one cation and one anion
  * @param options - leave-one-out switches
  * @param options.excludeMeasured - leave the salt's own miss out of the floor calibration
  * @param dataset - measured and cycle enthalpies of solution of the anchor salts, and the lattice estimators' inputs (default: built-in)
- * @returns basis `anchored`, method `anchored-<estimator>`; empty when no set applies
+ * @returns basis `anchored`, method `anchored-<estimator>` (or `anchored-cross-kapustinskii`); empty when no set applies
  * @see Jenkins, H. D. B.; Glasser, L. on difference rules in thermochemistry; the four-salt difference is common practice in estimating thermochemical quantities
  * @example
  * ```ts

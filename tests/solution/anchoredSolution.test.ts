@@ -168,3 +168,18 @@ describe('sets that span charge types (the fallback of a salt with no set of its
     expect(anchoredFloor('kapustinskii', { chargeType: '1:2', ionClass: 'polyatomic anion' }).spreadScale).toBeLessThan(1);
   });
 });
+
+describe('floors of small groups', () => {
+  it('take the largest need any estimator saw in the group: AgBr (Born–Mayer sees only AgCl beside it) holds its NBS cycle value', () => {
+    // NBS formation enthalpies (Wagman et al. 1982) through the cycle: AgBr about +84.4 kJ/mol; its own crystal value hidden from the estimate.
+    const reference = solutionEnthalpyFromCycle(parseSalt('AgBr'))!.value;
+    for (const e of anchoredSolutionEnthalpies(parseSalt('AgBr'), { excludeMeasured: true })) {
+      expect(e.low, e.method).toBeLessThanOrEqual(reference);
+      expect(e.high, e.method).toBeGreaterThanOrEqual(reference);
+    }
+    const group = { chargeType: '1:1', ionClass: 'covalent-prone' } as const;
+    const bornMayer = anchoredFloor('born-mayer', group, { excludeFormula: 'AgBr' });
+    expect(bornMayer.relative).toBeGreaterThanOrEqual(anchoredFloor('kapustinskii', { chargeType: '1:1', ionClass: 'monatomic' }, { excludeFormula: 'AgBr' }).relative);
+    expect(bornMayer.group).toMatch(/at least the largest miss/);
+  });
+});

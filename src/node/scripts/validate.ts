@@ -357,7 +357,10 @@ ${estimatorNotes(cycleRows)}
   scatter grows as √Δn (±30–70 kJ/mol for the decahydrates and dodecahydrates).
 - **Coverage.** The intervals are calibrated leave-one-salt-out on the anchor pool, so they hold about 95 %
   overall, but a charge type of a few salts falls short when one or two of them are unlike the rest (Ag₂SO₄
-  and Na₂S among the 1:2 salts; the Ag⁺ halides among the covalent-prone 1:1 salts).
+  and Na₂S among the 1:2 salts), and a few 1:1 salts with polyatomic anions unlike their neighbours (LiOH,
+  LiBrO₃, KClO₃, CsClO₄) fall just outside. Widening the anchored intervals to hold model-basis estimates that
+  disagree with them was measured and not done: in every such disagreement the anchored interval held the
+  reference and the model estimate was the one off.
 `;
   const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..', '..');
   const out = join(root, 'docs', 'solution-validation.md');
