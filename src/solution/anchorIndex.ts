@@ -144,6 +144,16 @@ export function ionDistance(a: string, b: string, dataset: Dataset): number {
   return dr + (x.charge !== y.charge ? ION_DISTANCE.charge : 0) + (x.kind !== y.kind ? ION_DISTANCE.kind : 0) + (x.charge > 0 && x.nobleCore !== y.nobleCore ? ION_DISTANCE.core : 0);
 }
 
+/**
+ * Whether two cations bond alike: both with a noble-gas core, or both
+ * without (d-block and post-transition cations, whose covalent lattice
+ * excess depends on the anion they meet).
+ */
+export function cationCoresAlike(a: string, b: string, dataset: Dataset): boolean {
+  const f = ionFeatures(dataset);
+  return f.get(a)?.nobleCore === f.get(b)?.nobleCore;
+}
+
 function byName(a: string, b: string): number {
   return a < b ? -1 : a > b ? 1 : 0;
 }
