@@ -50,8 +50,13 @@ export interface BrineModel {
   notes: string[];
 }
 
-/** Allowance for the fit itself inside its range: relative part and per-molality part (assumed, see docs/methods.md). */
-export const FIT_ALLOWANCE = { osmoticPerMolality: 0.005, osmoticPerMolalityKelvin: 0.0006, enthalpyRelative: 0.03, enthalpyPerMolality: 20, heatCapacityRelative: 0.05, heatCapacityPerMolality: 2 } as const;
+/**
+ * Allowance for the fit itself inside its range: relative part and per-molality part (assumed, see docs/methods.md).
+ * The heat-capacity part grows as √m and with the charge type (c = ν|zMzX|/2): 8 J/(mol·K) per c·√(mol/kg) is the
+ * smallest whole number for which φCp° + φJ covers 90 % of the apparent molar heat capacities of Laliberté (2009)
+ * at 25 °C, 1–6 mol/kg, for the salts with their own heat-capacity terms (tests/brine/apparentHeatCapacity.test.ts).
+ */
+export const FIT_ALLOWANCE = { osmoticPerMolality: 0.005, osmoticPerMolalityKelvin: 0.0006, enthalpyRelative: 0.03, enthalpyPerMolality: 20, heatCapacityRelative: 0.05, heatCapacityPerRootMolality: 8 } as const;
 
 /**
  * Discrepancy scales of a non-electrolyte without data: assumed, not

@@ -85,8 +85,9 @@ export function brineHeatCapacity(model: BrineModel, m: number, tK: number): num
   return model.pitzer ? relativeApparentHeatCapacity(model.pitzer, m, tK) : 0;
 }
 
-/** Standard uncertainty of φJ, J/(mol·K). */
+/** Standard uncertainty of φJ, J/(mol·K): inside the fitted range 5 % of φJ + 8·c·√m (checked against Laliberté 2009, see FIT_ALLOWANCE). */
 export function brineHeatCapacityU(model: BrineModel, m: number, tK: number): number {
-  const fit = model.own.heatCapacity ? FIT_ALLOWANCE.heatCapacityRelative * Math.abs(brineHeatCapacity(model, Math.min(m, model.maxMolality), tK)) + FIT_ALLOWANCE.heatCapacityPerMolality * Math.min(m, model.maxMolality) : 0;
+  const inRange = Math.min(m, model.maxMolality);
+  const fit = model.own.heatCapacity ? FIT_ALLOWANCE.heatCapacityRelative * Math.abs(brineHeatCapacity(model, inRange, tK)) + FIT_ALLOWANCE.heatCapacityPerRootMolality * model.chargeScale * Math.sqrt(inRange) : 0;
   return fit + model.scales.heatCapacity * model.chargeScale * excess(model, m, model.own.heatCapacity);
 }
