@@ -3,7 +3,6 @@
 // solutions (parameters as carried by the chemicals package 1.5.2, MIT licence, copied into
 // tests/reference/brine-laliberte-heat-capacity.json), and the CaCl2·6H2O fill that depends on it.
 import { describe, expect, it } from 'vitest';
-import reference from '../reference/brine-laliberte-heat-capacity.json';
 import { packFinalTemperature } from '../../src/index.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { builtinDataset } from '../../src/data/builtin.js';
@@ -11,27 +10,11 @@ import { brineModel } from '../../src/brine/brineModel.js';
 import { brineHeatCapacity, brineHeatCapacityU } from '../../src/brine/brineProperties.js';
 import { aqueousHeatCapacity, solidHeatCapacity } from '../../src/pack/solidHeatCapacity.js';
 import { integralEnthalpyOfSolution } from '../../src/solution/integralEnthalpy.js';
+import { laliberteApparentSpecificHeat, laliberteMolarHeatCapacity, laliberteSalts } from '../../src/node/scripts/brineReferenceData.js';
 
-type LalibertéSalt = (typeof reference.salts)[keyof typeof reference.salts];
-const salts = reference.salts as Record<string, LalibertéSalt>;
-
-/** Laliberté's apparent specific heat capacity of the solute, J/(g·K), at t (°C) and solute mass fraction w. */
-function apparentSpecificHeat(s: LalibertéSalt, t: number, w: number): number {
-  const [a1, a2, a3, a4, a5, a6] = s.a as [number, number, number, number, number, number];
-  return a1 * Math.exp(a2 * t + a3 * Math.exp(0.01 * t) + a4 * w) + a5 * w ** a6;
-}
-
-/** Laliberté's φCp, J/(mol·K), at molality m (mol/kg) and t (°C). */
-function laliberteMolar(formula: string, m: number, t = 25): { value: number; w: number; u: number } {
-  const s = salts[formula]!;
-  const w = (m * s.molarMass) / (1000 + m * s.molarMass);
-  const cpApp = apparentSpecificHeat(s, t, w);
-  // Reference uncertainty: 0.2 % of the solution's heat capacity (an assumed allowance for the fit of the
-  // solution's specific heat), carried over to the apparent molar quantity of m moles in (1000 + m·M) g.
-  const cpSolution = (1 - w) * 4.18 + w * cpApp;
-  const u = (0.002 * cpSolution * (1000 + m * s.molarMass)) / m;
-  return { value: cpApp * s.molarMass, w, u };
-}
+const salts = laliberteSalts();
+const apparentSpecificHeat = laliberteApparentSpecificHeat;
+const laliberteMolar = (formula: string, m: number, t = 25) => laliberteMolarHeatCapacity(salts[formula]!, m, t);
 
 function toolMolar(formula: string, m: number): { value: number; u: number } | undefined {
   const salt = parseSalt(formula);
