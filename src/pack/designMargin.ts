@@ -92,7 +92,7 @@ const g2 = (x: number): string => (Math.abs(x) < 0.005 ? 0 : x).toFixed(2);
  * ```ts
  * const m = packDesignMargin({ solids: [{ formula: 'CaCl2', massG: 1 }], waterG: 100, startC: 20 }, 40);
  * m.kind; // 'hot'
- * m.design.saltMassG; // ≈ 12.47 g of CaCl2 in 100 g of water
+ * m.design.saltMassG; // ≈ 11.62 g of CaCl2 in 100 g of water
  * m.massInterval.low < m.design.saltMassG; // true
  * m.threshold.largestSafeMassG > m.design.saltMassG; // true
  * ```

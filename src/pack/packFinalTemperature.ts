@@ -264,7 +264,7 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
  * r.iceMass; // 0
  * // 30 g CaCl2 in 100 g water: a hot pack, with the contact-burn caution first
  * const hot = packFinalTemperature({ solids: [{ formula: 'CaCl2', massG: 30 }], waterG: 100, startC: 20 });
- * hot.finalTemperature.value; // ≈ 62.6 °C
+ * hot.finalTemperature.value; // ≈ 72.0 °C
  * hot.cautions[0].startsWith('Contact-burn risk'); // true
  * ```
  */

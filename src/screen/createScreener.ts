@@ -228,7 +228,7 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  * // a hot pack: 30 g CaCl2 in 100 g water from 20 °C
  * const hot = createScreener({ direction: 'heat', fill: '30:100@20' }).row('CaCl2');
  * hot.suitability; // 'suitable'
- * hot.fill.finalTemperature.value; // ≈ 62.6 °C
+ * hot.fill.finalTemperature.value; // ≈ 72.0 °C
  * ```
  */
 export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
