@@ -19,13 +19,17 @@ describe('container heat capacity', () => {
 });
 
 describe('a solid without solubility data', () => {
-  // KOH has a measured ΔsolH (−57.61 kJ/mol, CRC) but no solubility record: it is taken to dissolve completely.
-  const r = packFinalTemperature({ solids: [{ formula: 'KOH', massG: 10 }], waterG: 100, startC: 20 });
+  // KCH3COO has a measured ΔsolH (−15.33 kJ/mol, CRC) but no solubility record: it is taken to dissolve completely.
+  const r = packFinalTemperature({ solids: [{ formula: 'KCH3COO', massG: 10 }], waterG: 100, startC: 20 });
   it('dissolves completely and says so', () => {
     expect(r.dissolved[0]!.undissolvedMass).toBe(0);
     expect(r.dissolved[0]!.solubility).toBeNull();
-    expect(r.notes.some((n) => n.includes('no solubility data for KOH'))).toBe(true);
-    expect(r.cautions.some((c) => c.startsWith('KOH (corrosive'))).toBe(true);
+    expect(r.notes.some((n) => n.includes('no solubility data for KCH3COO'))).toBe(true);
+  });
+  it('keeps the hazard cautions of a caustic salt now that KOH has a curve (CRC)', () => {
+    const koh = packFinalTemperature({ solids: [{ formula: 'KOH', massG: 10 }], waterG: 100, startC: 20 });
+    expect(koh.dissolved[0]!.solubilityStatus).toBe('measured');
+    expect(koh.cautions.some((c) => c.startsWith('KOH (corrosive'))).toBe(true);
   });
 });
 
