@@ -315,7 +315,9 @@ function waterActivityLn(fill: PreparedFill, tK: number, perturbation: Perturbat
     if (!(m > 0)) continue;
     const b = fill.solids[i]!.brine;
     let phi = brineOsmoticWith(b, m, w.osmoticTerms[i]!);
-    if (z !== 0) phi += z * brineOsmoticU(b, m, tK);
+    // φ is positive: its shift is taken on the log scale, φ·exp(z·u/φ), the same as φ + z·u to first order, so that
+    // a wide allowance (u/φ near 0.5 past a fitted range) cannot drive it to zero and the liquidus to 0 °C.
+    if (z !== 0 && phi > 0) phi *= Math.exp((z * brineOsmoticU(b, m, tK)) / phi);
     sum += b.particles * m * Math.max(phi, 0.05);
   }
   return -fill.water.molarMass * sum;

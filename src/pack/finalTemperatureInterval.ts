@@ -89,8 +89,10 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
     if (!nearSaturation(s.moles * s.anhydrousMolarMass, solution.state.liquidWaterG, state, relative)) return;
     inputs.push({ label: `solubility of ${s.salt.anhydrous} (measured, ${(100 * relative).toFixed(0)} %)`, u: relative, perturb: (shift) => ({ solubilityRelative: shiftAt(i, shift) }) });
   });
-  // The osmotic coefficients set where ice forms and where the brine boils: an input wherever either happens.
-  if (solution.state.iceG > 0 || solution.clamp) inputs.push({ label: 'osmotic coefficients (freezing and boiling points)', u: 1, perturb: (shift) => ({ osmoticZ: shift }) });
+  // The osmotic coefficients set where ice forms and where the brine boils: an input wherever either can happen
+  // (below 0 °C or above 99 °C), not only where it does at the solved state, so that the interval does not jump
+  // where ice first forms as the salt-to-water ratio grows.
+  if (solution.state.iceG > 0 || solution.clamp || solution.temperature < 0 || solution.temperature > 99) inputs.push({ label: 'osmotic coefficients (freezing and boiling points)', u: 1, perturb: (shift) => ({ osmoticZ: shift }) });
   if (fill.heatCapacityOverride) {
     const { value, u } = fill.heatCapacityOverride;
     inputs.push({ label: 'your heat capacity', u: u / value, perturb: (shift) => ({ heatCapacityRelative: shift }) });
@@ -269,9 +271,12 @@ function propagatedInterval(fill: PreparedFill, solution: FillSolution, options:
     const downShift = input.down ?? COVERAGE_95 * input.u;
     const plusSolution = solveFillTemperature(fill, input.perturb(upShift));
     const minusSolution = solveFillTemperature(fill, input.perturb(-downShift));
+    // Only a limit on the far side of the solved temperature bounds the interval: a re-solve that stops at a
+    // eutectic above it (its brine freezing sooner) is a shift upwards, not a floor.
     for (const s of [plusSolution, minusSolution]) {
-      if (s.clamp?.kind === 'boiling') ceiling = Math.min(ceiling, s.clamp.temperature);
-      else if (s.clamp) floor = floor === -Infinity ? s.clamp.temperature : Math.min(floor, s.clamp.temperature);
+      if (s.clamp?.kind === 'boiling') {
+        if (s.clamp.temperature >= t) ceiling = Math.min(ceiling, s.clamp.temperature);
+      } else if (s.clamp && s.clamp.temperature <= t) floor = floor === -Infinity ? s.clamp.temperature : Math.min(floor, s.clamp.temperature);
     }
     const plus = plusSolution.temperature;
     const minus = minusSolution.temperature;

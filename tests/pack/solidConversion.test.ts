@@ -2,7 +2,7 @@
 // solubility's own uncertainty in the pack interval. Shared numbers (see handFills.test.ts): 100 g of water
 // hold 417.935 J/K (NBS 1982 Cp°(H2O, l), IUPAC 2021 M(H2O)).
 import { describe, expect, it } from 'vitest';
-import { packFinalTemperature } from '../../src/index.js';
+import { packFinalTemperature, packRatioCurve } from '../../src/index.js';
 import { preparePackFill } from '../../src/pack/packFill.js';
 import { solveFillTemperature } from '../../src/pack/solveFillTemperature.js';
 import { uncertainInputs } from '../../src/pack/finalTemperatureInterval.js';
@@ -93,5 +93,24 @@ describe('the measured solubility in the interval: 50 g KNO3 in 100 g water at 2
   it('is no input where the salt is far from saturation (10 g KNO3)', () => {
     const dilute = preparePackFill({ solids: [{ formula: 'KNO3', massG: 10 }], waterG: 100, startC: 20 });
     expect(uncertainInputs(dilute, solveFillTemperature(dilute)).some((i) => i.label.startsWith('solubility'))).toBe(false);
+  });
+});
+
+describe('the interval band of the NH4NO3 ratio curve is continuous across ice, saturation and the eutectic', () => {
+  // 100 g water at 20 °C, NH4NO3 from 0 to 1.6 g per g water (40 points, 0.041 g/g apart): ice can form from
+  // about 0.28 g/g, the salt saturates at the eutectic near 0.64 g/g (CRC curve and eutectic) and leaves it near
+  // 1 g/g. Before, the band's top jumped by 4.4 K where ice first formed (the osmotic coefficients counted only
+  // once ice was there) and by 7.8 K where the fill left the eutectic, and its bottom collapsed onto the value
+  // where a re-solve stopped at a eutectic above it. Between neighbours the ends may now move by the slope of
+  // the curve itself plus at most 2 K.
+  const curve = packRatioCurve({ solids: [{ formula: 'NH4NO3', massG: 1 }], waterG: 100, startC: 20 }, { points: 40, maxRatio: 1.6 });
+  it('moves each end of the band by at most 2 K more than the value between neighbouring points', () => {
+    const pts = curve.points;
+    for (let k = 1; k < pts.length; k++) {
+      const dT = Math.abs(pts[k]!.temperature - pts[k - 1]!.temperature);
+      expect(Math.abs(pts[k]!.low - pts[k - 1]!.low), `low at ${pts[k]!.ratio}`).toBeLessThanOrEqual(dT + 2);
+      expect(Math.abs(pts[k]!.high - pts[k - 1]!.high), `high at ${pts[k]!.ratio}`).toBeLessThanOrEqual(dT + 2);
+      expect(pts[k]!.low).toBeLessThan(pts[k]!.temperature + 1e-9);
+    }
   });
 });
