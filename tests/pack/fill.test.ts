@@ -25,7 +25,7 @@ describe('a solid without solubility data', () => {
     expect(r.dissolved[0]!.undissolvedMass).toBe(0);
     expect(r.dissolved[0]!.solubility).toBeNull();
     expect(r.notes.some((n) => n.includes('no solubility data for KOH'))).toBe(true);
-    expect(r.cautions.some((c) => c.startsWith('KOH (corrosive'))).toBe(true);
+    expect(r.cautions.some((c) => c.text.startsWith('KOH (corrosive'))).toBe(true);
   });
 });
 
