@@ -19,6 +19,7 @@ export { IonheatError, isIonheatError, errorCodes, type ErrorCode, type ErrorCon
 export { makeEstimate, roundEstimate, probabilityPositive, normalCdf, estimateSchema, basisSchema, basisOrder, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
 export { formatEstimate, type FormattedEstimate } from './quantity/formatEstimate.js';
 export { roundToUncertainty } from './quantity/rounding.js';
+export { cautionLine, cautionSchema, cautionKindSchema, cautionSeveritySchema, type Caution, type CautionKind, type CautionSeverity } from './quantity/caution.js';
 export * as constants from './quantity/constants.js';
 
 // Data
@@ -90,7 +91,7 @@ export { packRatioCurve, ratioForTargetTemperature, ratioForLargestChangePerGram
 export { packDesignMargin, FROSTBITE_THRESHOLD_C, type PackDesignMargin, type TemperatureBand } from './pack/designMargin.js';
 export { packTimeCourse, type PackTimeCourse, type TimeCourseOptions, type TimeCourseParameter, type TimeCoursePoint } from './pack/packTimeCourse.js';
 export { packCautions, CONTACT_BURN_THRESHOLD_C, SCREENING_LINE, type CautionInput } from './pack/packCautions.js';
-export { saltHazards, hazardCoverage, type HazardCoverage } from './pack/saltHazards.js';
+export { saltHazards, hazardCoverage, type HazardCoverage } from './solution/saltHazards.js';
 export { solubilityCurve, solubilityAt, type SolubilityCurve, type SolubilityPoint, type SolubilityAt } from './pack/solubilityCurve.js';
 export { saltSolubility, type SaltSolubility, type SolubilityStatus } from './pack/saltSolubility.js';
 export { freezingPointOfSolution, WATER_CRYOSCOPIC_CONSTANT } from './pack/freezingPoint.js';

@@ -11,6 +11,7 @@ import { basisOrder, makeEstimate, type Basis, type Estimate } from '../quantity
 import { finalTemperatureInterval, heatCapacityRelativeU, transitionBracket, type TemperatureInterval } from './finalTemperatureInterval.js';
 import type { FillEquilibrium } from './fillEquilibrium.js';
 import { packCautions } from './packCautions.js';
+import type { Caution } from '../quantity/caution.js';
 import { preparePackFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
 import { integralFromInfinite } from '../solution/toMolality.js';
@@ -99,7 +100,8 @@ export interface PackResult {
   heat: PackHeat;
   heatCapacity: PackHeatCapacity;
   clamp: PackClamp | null;
-  cautions: string[];
+  /** Burns, cold injury, boiling, undissolved salt, the salts' hazards and the screening line, each `{ kind, severity, text }`. */
+  cautions: Caution[];
   notes: string[];
   /** Source keys of data/sources.json behind the numbers. */
   sources: string[];
@@ -229,7 +231,7 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
       parts: { water: state.heatCapacityParts.water, dissolvedSalt: state.heatCapacityParts.dissolved, undissolvedSolid: state.heatCapacityParts.undissolved, container: state.heatCapacityParts.container, ice: state.heatCapacityParts.ice },
     },
     clamp,
-    cautions: packCautions({ startC: fill.startC, final: finalTemperature, clamp: clamp?.kind, salts: fill.solids.map((s) => s.salt) }, dataset),
+    cautions: packCautions({ startC: fill.startC, final: finalTemperature, clamp: clamp?.kind, salts: fill.solids.map((s) => s.salt), undissolved: dissolved }, dataset),
     notes: [...new Set(notes)],
     sources: [...sources].sort(),
   };
@@ -271,7 +273,8 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
  * // 30 g CaCl2 in 100 g water: a hot pack, with the contact-burn caution first
  * const hot = packFinalTemperature({ solids: [{ formula: 'CaCl2', massG: 30 }], waterG: 100, startC: 20 });
  * hot.finalTemperature.value; // ≈ 72.0 °C
- * hot.cautions[0].startsWith('Contact-burn risk'); // true
+ * hot.cautions[0].kind; // 'contact-burn'
+ * hot.cautions[0].severity; // 'danger'
  * ```
  */
 export function packFinalTemperature(fill: PackFill, options: PackOptions = {}, dataset: Dataset = builtinDataset()): PackResult {

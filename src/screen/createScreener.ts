@@ -32,6 +32,7 @@ import { latentWarmer } from '../warmer/latentWarmer.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
 import { screenSources } from './screenSources.js';
 import { RepeatIndex } from './repeatIndex.js';
+import { caution } from '../quantity/caution.js';
 import {
   directionSchema,
   objectiveNameSchema,
@@ -428,7 +429,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       const { salt, result, hazards, pack, warmer } = computed;
       const excludedBy = exclusion(salt, () => hazards);
       if (excludedBy !== undefined) {
-        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements, hazardData: hazards.data });
+        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: result.cautions, hazardData: hazards.data });
       }
       const notes: string[] = [];
       if (input.measuredEnthalpy !== undefined) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
@@ -437,7 +438,6 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       if (first !== undefined) notes.push(`the same candidate as line ${first}`);
       // A formula that reads through a likely slip is computed (both readings are real salts) but never ranked silently.
       const typo = read.salt ? undefined : typoSuspicion(input.formula, salt, dataset);
-      if (typo) notes.push(typo.message);
       const cost = input.pricePerKg === undefined ? undefined : costPerKJ(input.pricePerKg, result.perGram.salt, direction);
       if (input.pricePerKg !== undefined && cost === undefined) notes.push(`no cost per kJ: the 95 % interval of the heat per gram reaches zero or the wrong sign for ${direction === 'cool' ? 'cooling' : 'heating'}`);
       if (warmer && !warmer.ok) notes.push(`no standard warmer (100 g triggered at 20 °C): ${warmer.why}`);
@@ -455,7 +455,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         ...result,
         notes: notes.length > 0 ? [...result.notes, ...notes] : result.notes,
         hazards: hazards.classes,
-        cautions: hazards.statements,
+        cautions: typo ? [caution('suspected-typo', 'warning', `Suspected typo: ${typo.message}. The values given are those of ${salt.formula} as read; the row is ranked as undetermined.`), ...result.cautions] : result.cautions,
         hazardData: hazards.data,
         ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
         ...(warmerRow ? { warmer: warmerRow } : {}),

@@ -14,7 +14,7 @@ import { findIon } from '../chem/ionIndex.js';
 import { molarMass } from '../chem/molarMass.js';
 import type { Salt } from '../chem/salt.js';
 import { IonheatError } from '../error.js';
-import { saltHazards } from '../pack/saltHazards.js';
+import { saltHazards } from '../solution/saltHazards.js';
 
 /** Which salts {@link enumerate} produces. Every filter is optional; together they must all hold. */
 export interface EnumerateFilters {

@@ -3,7 +3,7 @@ import { saltArgument } from '../chem/saltArgument.js';
 import { builtinDataset } from '../data/builtin.js';
 import { hazardClassSchema, type HazardClass } from '../data/schemas.js';
 import type { Salt } from '../chem/salt.js';
-import { hazardCoverage, saltHazards, type HazardCoverage } from '../pack/saltHazards.js';
+import { hazardCoverage, saltHazards, type HazardCoverage } from '../solution/saltHazards.js';
 
 /** The hazard classes and statements of a salt, as one screen row shows them. */
 export interface HazardSummary {

@@ -32,6 +32,17 @@ import { hypotheticalHydrate, type HypotheticalHydrate } from './knownHydrates.j
 import { hydrationText, modelEstimate } from './modelSolution.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+import { caution, type Caution } from '../quantity/caution.js';
+import { hazardCautions } from './hazardCautions.js';
+
+/** The caution every dissolve result ends with (common practice). */
+export const DISSOLVE_SCREENING_CAUTION: Caution = Object.freeze(
+  caution(
+    'screening',
+    'notice',
+    'Screening estimate. A dissolving salt can scald or freeze skin, and some salts are oxidisers, toxic or restricted: follow the safety data sheet, local codes, product-safety regulation and licensed practice.',
+  ),
+);
 
 const DISSOLVE_OPTIONS = optionNames<DissolveOptions>('dissolve', { excludeMeasured: true, temperatureC: true });
 
@@ -81,7 +92,17 @@ export interface DissolveResult {
    * (`KCl·50H2O`) is refused instead (`NOT_APPLICABLE`).
    */
   hypotheticalHydrate?: HypotheticalHydrate;
+  /**
+   * Set when the formula as written reads through a likely slip of the keyboard while another salt is one slip
+   * away (`KN3` for `KNO3`): the values are those of the salt as read, and `suggestion` is the one probably meant.
+   */
+  suspectedTypo?: { suggestion: string; message: string };
   notes: string[];
+  /**
+   * What to take care of, each `{ kind, severity, text }`: a suspected typo (`suspected-typo`), a hypothetical
+   * hydrate (`data-quality`), the salt's hazards from the hazards table, and the closing screening line.
+   */
+  cautions: Caution[];
 }
 
 /** Within one basis, methods in order of preference (lower first); others after. */
@@ -166,6 +187,8 @@ interface SaltProfile {
   failure: { open?: IonheatError; hidden?: IonheatError };
   /** The salt's lattice values, once computed. */
   lattice?: SaltLattice;
+  /** The salt's hazard cautions, once computed. */
+  hazards?: readonly Caution[];
 }
 
 function profileOf(salt: Salt, dataset: Dataset, store: ProfileStore): SaltProfile {
@@ -408,7 +431,6 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
   if (Object.is(celsius, -0)) return dissolveWith(salt, { ...options, temperatureC: 0 }, dataset, store);
   const notes: string[] = [];
   const typo = typeof formula === 'string' ? typoSuspicion(formula, salt, dataset) : undefined;
-  if (typo) notes.push(typo.message);
   const hypothetical = hypotheticalHydrate(salt, dataset);
   if (hypothetical?.reason === 'more waters than any known hydrate' && hypothetical.knownWaters.length > 0) throw overHydrated(salt, hypothetical, dataset);
   if (hypothetical) notes.push(hypotheticalText(salt, hypothetical));
@@ -447,6 +469,13 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
     ...(hydration ? { hydration } : {}),
     temperature: { celsius, ...(heatCapacity ? { heatCapacityOfSolution: heatCapacity } : {}) },
     ...(hypothetical ? { hypotheticalHydrate: hypothetical } : {}),
+    ...(typo ? { suspectedTypo: { suggestion: typo.suggestion, message: typo.message } } : {}),
     notes,
+    cautions: [
+      ...(typo ? [caution('suspected-typo', 'warning', `Suspected typo: ${typo.message}. The values given are those of ${salt.formula} as read.`)] : []),
+      ...(hypothetical ? [caution('data-quality', 'warning', `Hypothetical hydrate: ${hypotheticalText(salt, hypothetical)}.`)] : []),
+      ...(profile.hazards ??= hazardCautions(salt, dataset).map((c) => (profile.kept ? Object.freeze(c) : c))),
+      DISSOLVE_SCREENING_CAUTION,
+    ],
   };
 }

@@ -18,6 +18,7 @@ import { parameter, type TimeCourseOptions, type TimeCourseParameter } from '../
 import { fillConstants, type CrystallisingFill, type LiquidusPoint } from './crystallisingFill.js';
 import { PLATEAU_BAND_K, runWarmer, type WarmerRun } from './warmerCourse.js';
 import { warmerMelt, type WarmerMelt } from './warmerMelt.js';
+import type { Caution } from '../quantity/caution.js';
 import { warmerCautions } from './warmerCautions.js';
 
 /** A warmer fill: the hydrate and its mass, extra water, the start temperature and the container. */
@@ -94,7 +95,8 @@ export interface WarmerResult {
   secondsAboveBurnThreshold: number;
   /** The energy balance of the nominal run, J: latent heat released = sensible heat stored (+ heat lost); residuals near zero. */
   energy: WarmerRun['energy'];
-  cautions: string[];
+  /** Burns at the plateau, recharging, the salt's hazards and the screening line, each `{ kind, severity, text }`. */
+  cautions: Caution[];
   notes: string[];
   sources: string[];
 }

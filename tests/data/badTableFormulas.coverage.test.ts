@@ -8,7 +8,7 @@ import { builtinDataset } from '../../src/data/builtin.js';
 import { IonheatError } from '../../src/error.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { measuredSolutionEnthalpy } from '../../src/solution/measuredSolution.js';
-import { saltHazards } from '../../src/pack/saltHazards.js';
+import { saltHazards } from '../../src/solution/saltHazards.js';
 import { solubilityCurve } from '../../src/pack/solubilityCurve.js';
 
 function refusal(f: () => unknown): IonheatError {

@@ -80,6 +80,7 @@ const cases: Record<string, Case> = {
   probabilityPositive: { samples: () => [[s().estimate], [{ value: 0, u: 0 }]], userArgs: 1 },
   normalCdf: { samples: () => [[1.96], [-3]], userArgs: 1 },
   formatEstimate: { samples: () => [[s().estimate, { signed: true }], [s().hydration]], userArgs: 2 },
+  cautionLine: { samples: () => [[{ kind: 'screening', severity: 'notice', text: 'Screening estimate.' }], [{ kind: 'contact-burn', severity: 'danger', text: 'Contact-burn risk' }]], userArgs: 1 },
   roundToUncertainty: { samples: () => [[787.3456, 1.2345], [-3.14159, 0.0271]], userArgs: 2 },
   // Data
   builtinDataset: { samples: () => [[]], userArgs: 0 },

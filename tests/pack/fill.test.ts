@@ -29,7 +29,7 @@ describe('a solid without solubility data', () => {
   it('keeps the hazard cautions of a caustic salt now that KOH has a curve (CRC)', () => {
     const koh = packFinalTemperature({ solids: [{ formula: 'KOH', massG: 10 }], waterG: 100, startC: 20 });
     expect(koh.dissolved[0]!.solubilityStatus).toBe('measured');
-    expect(koh.cautions.some((c) => c.startsWith('KOH (corrosive'))).toBe(true);
+    expect(koh.cautions.some((c) => c.text.startsWith('KOH (corrosive'))).toBe(true);
   });
 });
 

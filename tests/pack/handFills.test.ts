@@ -73,9 +73,9 @@ describe('dilute potassium nitrate cold fill: 10 g KNO3 in 100 g water at 20 °C
   it('has a 95 % interval around the value and carries the cold-injury caution, the KNO3 hazard and the closing line', () => {
     expect(r.finalTemperature.low).toBeLessThan(r.finalTemperature.value);
     expect(r.finalTemperature.high).toBeGreaterThan(r.finalTemperature.value);
-    expect(r.cautions.some((c) => c.startsWith('Cold injury'))).toBe(true);
-    expect(r.cautions.some((c) => c.startsWith('KNO3 (oxidizer'))).toBe(true);
-    expect(r.cautions.at(-1)).toBe(SCREENING_LINE);
+    expect(r.cautions.some((c) => c.text.startsWith('Cold injury'))).toBe(true);
+    expect(r.cautions.some((c) => c.text.startsWith('KNO3 (oxidizer'))).toBe(true);
+    expect(r.cautions.at(-1)?.text).toBe(SCREENING_LINE);
   });
 });
 
@@ -94,7 +94,7 @@ describe('dilute sodium chloride fill: 10 g NaCl in 100 g water at 20 °C', () =
   });
   it('closes its energy balance', () => expectClosure(r));
   it('says NaCl has no hazard class (both ions checked), not that it has no data', () => {
-    expect(r.cautions.some((c) => c.startsWith('NaCl: no hazard class in the ionheat hazards table'))).toBe(true);
+    expect(r.cautions.some((c) => c.text.startsWith('NaCl: no hazard class in the ionheat hazards table'))).toBe(true);
   });
 });
 
@@ -122,11 +122,12 @@ describe('anhydrous calcium chloride hot fill: 25 g CaCl2 in 100 g water at 20 �
   it('closes its energy balance', () => expectClosure(r));
   it('carries the contact-burn caution citing ISO 13732-1, said to be from memory', () => {
     expect(r.finalTemperature.value).toBeGreaterThan(CONTACT_BURN_THRESHOLD_C);
-    const burn = r.cautions.find((c) => c.startsWith('Contact-burn risk'));
+    const burn = r.cautions.find((c) => c.text.startsWith('Contact-burn risk'));
     expect(burn).toBeDefined();
-    expect(burn).toContain('ISO 13732-1');
-    expect(burn).toContain('from memory');
-    expect(r.cautions.at(-1)).toBe(SCREENING_LINE);
+    expect(burn?.kind).toBe('contact-burn');
+    expect(burn?.text).toContain('ISO 13732-1');
+    expect(burn?.text).toContain('from memory');
+    expect(r.cautions.at(-1)?.text).toBe(SCREENING_LINE);
   });
 });
 

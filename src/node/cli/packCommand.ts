@@ -16,6 +16,7 @@ import { packDesignMargin, type PackDesignMargin } from '../../pack/designMargin
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
 import { bulletLines } from './paragraphs.js';
+import { cautionLine } from '../../quantity/caution.js';
 import { outputWidth } from './io.js';
 import { formatNumber, withTrueMinus } from '../../notation/minus.js';
 import { formulaText } from '../../notation/formula.js';
@@ -234,7 +235,7 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
     out.push(...bulletLines(course.notes.slice(0, 2), width, '  '));
   }
   out.push('\nCautions:');
-  out.push(...bulletLines([...(margin?.caution ? [margin.caution] : []), ...(course ? course.cautions : result.cautions)], width, '  • '));
+  out.push(...bulletLines([...(margin?.caution ? [margin.caution] : []), ...(course ? course.cautions : result.cautions)].map(cautionLine), width, '  • '));
   out.push('\nNotes:');
   out.push(...bulletLines(result.notes, width));
   // Sentences wrap to the width; the table (one entry of several lines) and the bullets (wrapped already) stay as they are.

@@ -1,3 +1,4 @@
+import { cautionLine } from '../../quantity/caution.js';
 import { IonheatError, isIonheatError } from '../../error.js';
 import { parseSalt } from '../../chem/parseSalt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
@@ -6,6 +7,8 @@ import { warmerCourseSvg } from '../../render/warmerCourse.js';
 import { joinNegativeValues, numberOption, readArgs } from './args.js';
 import type { Command } from './command.js';
 import { writeChart } from './writeChart.js';
+import { bulletLines } from './paragraphs.js';
+import { outputWidth } from './io.js';
 
 const options = {
   salt: { type: 'string' },
@@ -75,7 +78,7 @@ function line(e: Estimate): string {
   return `${x.value} ${x.unit}   (95 % interval ${x.low} to ${x.high})`;
 }
 
-function textReport(w: WarmerResult): string {
+function textReport(w: WarmerResult, width: number): string {
   const f = w.fill;
   const out: string[] = [];
   out.push(`Warmer: ${f.massG} g ${f.formula}${f.extraWaterG > 0 ? ` + ${f.extraWaterG} g extra water` : ''}, supercooled at ${f.startC} °C${f.containerJPerK > 0 ? `, container ${f.containerJPerK} J/K` : ''}`);
@@ -89,9 +92,9 @@ function textReport(w: WarmerResult): string {
   out.push(`recharge above       ${w.rechargeTemperature ? line(w.rechargeTemperature) : 'not reachable by heating in water (see notes)'}`);
   out.push(`above 44 °C for about ${Math.round(w.secondsAboveBurnThreshold / 60)} min; energy balance closes to ${Math.abs(w.energy.course.residualJ).toExponential(1)} J`);
   out.push('\nCautions:');
-  for (const c of w.cautions) out.push(`  • ${c}`);
+  out.push(...bulletLines(w.cautions.map(cautionLine), width, '  • '));
   out.push('\nNotes:');
-  for (const n of w.notes) out.push(`  - ${n}`);
+  out.push(...bulletLines(w.notes, width));
   return out.join('\n') + '\n';
 }
 
@@ -153,7 +156,7 @@ export const warmerCommand: Command = {
       io.stdout(JSON.stringify(jsonReport(result), null, 2) + '\n');
       return 0;
     }
-    io.stdout(textReport(result));
+    io.stdout(textReport(result, outputWidth(io)));
     if (written) io.stdout(`chart written to ${written}\n`);
     return 0;
   },

@@ -38,7 +38,10 @@ describe('ionheat dissolve', () => {
     expect(j.perGram.salt.unit).toBe('J/g');
     expect(j.perGram.saturatedFill.unit).toBe('J/g');
     expect(j.estimates.length).toBeGreaterThanOrEqual(2);
-    expect(j.cautions.join(' ')).toMatch(/oxidiser/i);
+    // Structured cautions: the hazards table's classes for NH4NO3 (eu2019_1148), its restriction, the screening line last.
+    expect(j.cautions.map((c: { kind: string }) => c.kind)).toEqual(['hazard-class', 'restricted-salt', 'screening']);
+    expect(j.cautions[0]).toMatchObject({ kind: 'hazard-class', severity: 'warning' });
+    expect(j.cautions.map((c: { text: string }) => c.text).join(' ')).toMatch(/oxidiser/i);
   });
 
   it('--exclude-measured hides the measured value', async () => {
