@@ -16,7 +16,7 @@
 
 // Errors and the shared result shape
 export { IonheatError, isIonheatError, errorCodes, type ErrorCode, type ErrorContext } from './error.js';
-export { makeEstimate, roundEstimate, probabilityPositive, normalCdf, estimateSchema, basisSchema, basisOrder, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
+export { makeEstimate, roundEstimate, probabilityPositive, estimateSchema, basisSchema, basisOrder, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
 export { formatEstimate, type FormattedEstimate } from './quantity/formatEstimate.js';
 export { roundToUncertainty } from './quantity/rounding.js';
 export * as constants from './quantity/constants.js';

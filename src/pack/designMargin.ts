@@ -11,7 +11,7 @@
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { numberArgument } from '../quantity/argumentChecks.js';
-import { bracketedRoot } from './bracketedRoot.js';
+import { bracketedRoot } from '../numeric/bracketedRoot.js';
 import { CONTACT_BURN_THRESHOLD_C } from './packCautions.js';
 import type { PackFill, PackOptions } from './packFill.js';
 import { packFinalTemperature } from './packFinalTemperature.js';

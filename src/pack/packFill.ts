@@ -23,6 +23,7 @@ import type { SolubilityCurve } from './solubilityCurve.js';
 import { packSaltData, type PackSaltData } from './packSaltData.js';
 import type { SolubilityStatus } from './saltSolubility.js';
 import { solubilityBoundsOf, solubilityNote, type SolubilityBounds } from './solubilityBounds.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /** One solid of a fill. */
 export interface PackSolid {
@@ -218,7 +219,7 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
   if (!Array.isArray(fill.solids) || fill.solids.length === 0 || fill.solids.length > 100) throw invalid('solids', 'a pack fill needs from one to 100 solids (solids: [{ formula, massG }])');
   const waterG = checkPositive(fill.waterG, 'waterG', 'the water', 'g');
   const startGiven = fill.startC ?? DEFAULT_START_C;
-  const startC = startGiven === 0 ? 0 : startGiven; // −0 reported as 0
+  const startC = typeof startGiven === 'number' ? unsignedZero(startGiven) : startGiven;
   if (typeof startC !== 'number' || !Number.isFinite(startC) || startC < 0 || startC >= 100) {
     throw invalid('startC', `the start temperature (startC) must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${typeof startC === 'number' ? String(startC) : typeof startC} °C`);
   }

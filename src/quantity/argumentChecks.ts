@@ -8,6 +8,7 @@
 import { IonheatError } from '../error.js';
 import { estimateSchema, type Estimate } from './estimate.js';
 import { didYouMean } from './nearestName.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /** A short, safe rendering of any value for an error message (symbols, cycles and long text included). */
 export function describeValue(value: unknown): string {
@@ -45,7 +46,7 @@ export function numberArgument(value: unknown, field: string, what: string, rule
     const { min, max } = rule;
     const aboveMin = min === undefined || (rule.above ? value > min : value >= min);
     const belowMax = max === undefined || (rule.below ? value < max : value <= max);
-    if (aboveMin && belowMax && (!rule.integer || Number.isInteger(value))) return value === 0 ? 0 : value;
+    if (aboveMin && belowMax && (!rule.integer || Number.isInteger(value))) return unsignedZero(value);
   }
   throw numberError(value, field, what, rule);
 }
@@ -118,6 +119,5 @@ export function estimateArgument(value: unknown, field = 'estimate'): Estimate {
   const e = parsed.data;
   for (const k of ['value', 'u', 'low', 'high'] as const) numberArgument(e[k], `${field}.${k}`, `the ${k === 'u' ? 'uncertainty' : k} of ${field}`, { min: -ESTIMATE_LIMIT, max: ESTIMATE_LIMIT });
   if (!(e.low <= e.value && e.value <= e.high)) throw new IonheatError('INVALID_ARGUMENT', `${field}: the interval [${e.low}, ${e.high}] does not hold the value ${e.value}`, { field: `${field}.low` });
-  const clean = (x: number): number => (x === 0 ? 0 : x);
-  return { ...e, value: clean(e.value), low: clean(e.low), high: clean(e.high), u: clean(e.u) };
+  return { ...e, value: unsignedZero(e.value), low: unsignedZero(e.low), high: unsignedZero(e.high), u: unsignedZero(e.u) };
 }

@@ -18,6 +18,7 @@ import { anchorIndex, binaryIons, type AnchorSalt, type IndexedAnchor } from './
 import { saltIonClass, type SaltIonClass } from '../lattice/saltIonClass.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+import { quantile } from '../numeric/quantile.js';
 
 const ANCHORED_OPTIONS = optionNames<{ excludeMeasured?: boolean }>('anchoredSolutionEnthalpies', { excludeMeasured: true });
 
@@ -411,17 +412,6 @@ function floorGroups(dataset: Dataset): ReadonlyMap<LatticeModel, FloorCalibrati
   });
 }
 
-/** The 0.95 quantile of a sorted list with the element at `skip` left out (−1: none), linear between order statistics. */
-function quantile95(sorted: readonly number[], skip: number): number {
-  const n = sorted.length - (skip >= 0 ? 1 : 0);
-  if (n <= 0) return 0;
-  const at = (i: number): number => sorted[skip >= 0 && i >= skip ? i + 1 : i]!;
-  const h = (n - 1) * 0.95;
-  const lo = Math.floor(h);
-  const hi = Math.min(n - 1, lo + 1);
-  return at(lo) + (h - lo) * (at(hi) - at(lo));
-}
-
 /** The calibration group of a target: its charge type and the class of its ions. */
 export interface FloorGroupKey {
   chargeType: string;
@@ -451,7 +441,7 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
     const n = g.needed.length - (skip >= 0 ? 1 : 0);
     if (n >= MIN_FLOOR_GROUP || key === '*') {
       const label = key === '*' ? 'all charge types' : key.replace('|', ', ');
-      return { relative: Math.max(quantile95(g.needed, skip), atLeast), salts: n, group: atLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
+      return { relative: Math.max(quantile(g.needed, 0.95, skip), atLeast), salts: n, group: atLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
     }
     if (n > 0) atLeast = Math.max(atLeast, g.needed[skip === g.needed.length - 1 ? g.needed.length - 2 : g.needed.length - 1]!);
   }

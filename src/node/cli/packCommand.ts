@@ -22,6 +22,7 @@ import { formulaText } from '../../notation/formula.js';
 import { wrapText } from '../../notation/wrapText.js';
 import { writeChart } from './writeChart.js';
 import { warmerSalts } from '../../warmer/warmerMelt.js';
+import { unsignedZero } from '../../numeric/unsignedZero.js';
 
 const options = {
   salt: { type: 'string', multiple: true },
@@ -93,7 +94,7 @@ function positive(value: string | undefined, name: string, unit: string, require
 
 const r = (x: number, digits: number): number => {
   const v = Number(x.toFixed(digits));
-  return v === 0 ? 0 : v;
+  return unsignedZero(v);
 };
 
 /** An estimate rounded for reporting: u to two significant digits, value and interval to the same place (at most 4 decimals). */

@@ -6,6 +6,7 @@ import { warmerCourseSvg } from '../../render/warmerCourse.js';
 import { joinNegativeValues, numberOption, readArgs } from './args.js';
 import type { Command } from './command.js';
 import { writeChart } from './writeChart.js';
+import { unsignedZero } from '../../numeric/unsignedZero.js';
 
 const options = {
   salt: { type: 'string' },
@@ -41,7 +42,7 @@ function reported(e: Estimate) {
 
 const r = (x: number, digits: number): number => {
   const v = Number(x.toFixed(digits));
-  return v === 0 ? 0 : v;
+  return unsignedZero(v);
 };
 
 function jsonReport(w: WarmerResult) {
