@@ -84,7 +84,7 @@ export { heatPerGramOfSalt, heatPerGramOfFill, saturatedFill, type SaturatedFill
 
 // Pack design
 export { packFinalTemperature, type PackResult, type PackDissolvedSolid, type PackHeat, type PackHeatCapacity, type PackClamp } from './pack/packFinalTemperature.js';
-export { DEFAULT_START_C, type PackFill, type PackSolid, type PackOptions, type PackIntervalOptions } from './pack/packFill.js';
+export { DEFAULT_START_C, type PackFill, type PackSolid, type PackOptions, type PackIntervalOptions } from './pack/packInput.js';
 export type { TemperatureInterval } from './pack/finalTemperatureInterval.js';
 export { packRatioCurve, ratioForTargetTemperature, ratioForLargestChangePerGram, type PackRatioCurve, type PackCurvePoint, type PackDesignPoint, type PackTargetDesign, type PackCurveOptions } from './pack/packRatioCurve.js';
 export { packDesignMargin, FROSTBITE_THRESHOLD_C, type PackDesignMargin, type TemperatureBand } from './pack/designMargin.js';

@@ -11,7 +11,8 @@ import { basisOrder, makeEstimate, type Basis, type Estimate } from '../quantity
 import { finalTemperatureInterval, heatCapacityRelativeU, type TemperatureInterval } from './finalTemperatureInterval.js';
 import type { FillEquilibrium } from './fillEquilibrium.js';
 import { packCautions } from './packCautions.js';
-import { preparePackFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
+import { preparePackFill, type PreparedFill } from './packFill.js';
+import { type PackFill, type PackOptions } from './packInput.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
 import { integralFromInfinite } from '../solution/toMolality.js';
 import type { SolubilityStatus } from './saltSolubility.js';

@@ -12,7 +12,8 @@ import { IonheatError } from '../error.js';
 import { bracketedRoot } from '../numeric/bracketedRoot.js';
 import { finalTemperatureInterval } from './finalTemperatureInterval.js';
 import { goldenSectionMaximum } from '../numeric/goldenSectionMaximum.js';
-import { preparePackFill, scalePreparedFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
+import { preparePackFill, scalePreparedFill, type PreparedFill } from './packFill.js';
+import { type PackFill, type PackOptions } from './packInput.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
 
 const PACK_CURVE_OPTIONS = optionNames<PackCurveOptions>('packRatioCurve', { points: true, maxRatio: true, targetC: true, band: true });

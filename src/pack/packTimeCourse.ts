@@ -14,7 +14,8 @@ import { evaluateFill, fillScratch } from './fillEquilibrium.js';
 import { finalTemperatureInterval } from './finalTemperatureInterval.js';
 import { CONTACT_BURN_THRESHOLD_C, packCautions } from './packCautions.js';
 import { packResult } from './packFinalTemperature.js';
-import { preparePackFill, type PackFill, type PackOptions } from './packFill.js';
+import { preparePackFill } from './packFill.js';
+import { type PackFill, type PackOptions } from './packInput.js';
 import { BOILING_C, solveFillTemperature } from './solveFillTemperature.js';
 
 const BAND_KEYS = optionNames<{ lowC: number; highC: number }>('packTimeCourse', { lowC: true, highC: true });

@@ -33,6 +33,10 @@ export interface NumberRule {
   /** The value must be less than `max`. */
   below?: boolean;
   integer?: boolean;
+  /** The unit, written after each bound in an error (`g`, `°C`). */
+  unit?: string;
+  /** Why the range is what it is, added to an error (`where water is liquid at 1 bar`). */
+  reason?: string;
 }
 
 /**
@@ -42,23 +46,31 @@ export interface NumberRule {
  */
 export function numberArgument(value: unknown, field: string, what: string, rule: NumberRule = {}): number {
   // The common case first and without allocating: this runs inside solver loops.
-  if (typeof value === 'number' && Number.isFinite(value)) {
-    const { min, max } = rule;
-    const aboveMin = min === undefined || (rule.above ? value > min : value >= min);
-    const belowMax = max === undefined || (rule.below ? value < max : value <= max);
-    if (aboveMin && belowMax && (!rule.integer || Number.isInteger(value))) return unsignedZero(value);
-  }
-  throw numberError(value, field, what, rule);
+  if (withinRule(value, rule)) return unsignedZero(value);
+  throw new IonheatError('INVALID_ARGUMENT', `${what} (${field}) ${numberProblem(value, rule)}`, { field });
 }
 
-/** The error {@link numberArgument} throws, naming the first rule `value` breaks. */
-function numberError(value: unknown, field: string, what: string, rule: NumberRule): IonheatError {
-  const bad = (why: string): IonheatError => new IonheatError('INVALID_ARGUMENT', `${what} (${field}) ${why}, got ${describeValue(value)}`, { field });
-  if (typeof value !== 'number' || !Number.isFinite(value)) return bad('must be a finite number');
-  if (rule.integer && !Number.isInteger(value)) return bad('must be a whole number');
+/** Whether `value` is a finite number that keeps `rule`. */
+export function withinRule(value: unknown, rule: NumberRule): value is number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) return false;
   const { min, max } = rule;
-  if (min !== undefined && (rule.above ? !(value > min) : !(value >= min))) return bad(`must be ${rule.above ? 'greater than' : 'at least'} ${min}${max !== undefined ? ` and ${rule.below ? 'less than' : 'at most'} ${max}` : ''}`);
-  return bad(`must be ${rule.below ? 'less than' : 'at most'} ${max}${min !== undefined ? ` and ${rule.above ? 'greater than' : 'at least'} ${min}` : ''}`);
+  const aboveMin = min === undefined || (rule.above ? value > min : value >= min);
+  const belowMax = max === undefined || (rule.below ? value < max : value <= max);
+  return aboveMin && belowMax && (!rule.integer || Number.isInteger(value));
+}
+
+/** What is wrong with a `value` that breaks `rule`, in words: `must be at least 0.001 g and at most 1000000 g, got 0 g`. */
+export function numberProblem(value: unknown, rule: NumberRule): string {
+  const unit = rule.unit ? ` ${rule.unit}` : '';
+  const got = `, got ${describeValue(value)}${typeof value === 'number' && Number.isFinite(value) ? unit : ''}`;
+  if (typeof value !== 'number' || !Number.isFinite(value)) return `must be a finite number${unit ? ` of${unit}` : ''}${got}`;
+  if (rule.integer && !Number.isInteger(value)) return `must be a whole number${got}`;
+  const { min, max } = rule;
+  const reason = rule.reason ? `, ${rule.reason}` : '';
+  // The whole range, low end first, whichever end was crossed.
+  const low = min === undefined ? '' : `${rule.above ? 'greater than' : 'at least'} ${min}${unit}`;
+  const high = max === undefined ? '' : `${rule.below ? 'less than' : 'at most'} ${max}${unit}`;
+  return `must be ${low && high ? `${low} and ${high}` : low || high}${reason}${got}`;
 }
 
 /** The keys an options object may have, and whose options they are (`dissolve`), for errors that name both. */
