@@ -16,7 +16,7 @@
 
 // Errors and the shared result shape
 export { IonheatError, isIonheatError, errorCodes, type ErrorCode, type ErrorContext } from './error.js';
-export { makeEstimate, roundEstimate, probabilityPositive, normalCdf, estimateSchema, basisSchema, basisOrder, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
+export { makeEstimate, roundEstimate, probabilityPositive, estimateSchema, basisSchema, basisOrder, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
 export { formatEstimate, type FormattedEstimate } from './quantity/formatEstimate.js';
 export { roundToUncertainty } from './quantity/rounding.js';
 export { cautionLine, cautionSchema, cautionKindSchema, cautionSeveritySchema, type Caution, type CautionKind, type CautionSeverity } from './quantity/caution.js';
@@ -85,7 +85,7 @@ export { heatPerGramOfSalt, heatPerGramOfFill, saturatedFill, type SaturatedFill
 
 // Pack design
 export { packFinalTemperature, type PackResult, type PackDissolvedSolid, type PackHeat, type PackHeatCapacity, type PackClamp } from './pack/packFinalTemperature.js';
-export { DEFAULT_START_C, type PackFill, type PackSolid, type PackOptions, type PackIntervalOptions } from './pack/packFill.js';
+export { DEFAULT_START_C, type PackFill, type PackSolid, type PackOptions, type PackIntervalOptions } from './pack/packInput.js';
 export type { TemperatureInterval } from './pack/finalTemperatureInterval.js';
 export { packRatioCurve, ratioForTargetTemperature, ratioForLargestChangePerGram, type PackRatioCurve, type PackCurvePoint, type PackDesignPoint, type PackTargetDesign, type PackCurveOptions } from './pack/packRatioCurve.js';
 export { packDesignMargin, FROSTBITE_THRESHOLD_C, type PackDesignMargin, type TemperatureBand } from './pack/designMargin.js';

@@ -16,7 +16,7 @@ import { saltRecordIndex } from '../chem/saltRecords.js';
 import { isIonheatError } from '../error.js';
 import { cycleLatticeEnthalpy } from '../cycle/cycleLatticeEnthalpy.js';
 import { latticeModelPoint, latticeModels, type LatticeModel } from './latticeModel.js';
-import { studentQuantile975 } from './studentQuantile.js';
+import { studentQuantile975 } from '../numeric/studentQuantile.js';
 
 /** `monatomic` when every ion of the salt is monatomic, else `polyatomic`. */
 export type SaltIonKind = 'monatomic' | 'polyatomic';

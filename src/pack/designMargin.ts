@@ -11,10 +11,10 @@
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { numberArgument } from '../quantity/argumentChecks.js';
-import { bracketedRoot } from './bracketedRoot.js';
+import { bracketedRoot } from '../numeric/bracketedRoot.js';
 import { CONTACT_BURN_THRESHOLD_C } from './packCautions.js';
 import { caution, type Caution } from '../quantity/caution.js';
-import type { PackFill, PackOptions } from './packFill.js';
+import type { PackFill, PackOptions } from './packInput.js';
 import { packFinalTemperature } from './packFinalTemperature.js';
 import { packRatioCurve } from './packRatioCurve.js';
 

@@ -10,11 +10,13 @@ import { quadrature } from '../quantity/propagate.js';
 import type { Perturbation } from './fillEquilibrium.js';
 import { brineHeatCapacityU } from '../brine/brineProperties.js';
 import { ZERO_CELSIUS_K } from '../brine/debyeHuckelSlopes.js';
-import type { PackIntervalOptions, PreparedFill } from './packFill.js';
-import { seededNormal } from './seededNormal.js';
+import type { PreparedFill } from './packFill.js';
+import type { PackIntervalOptions } from './packInput.js';
+import { seededNormal } from '../numeric/seededNormal.js';
 import { withSolubilityBounds } from './solubilityBounds.js';
 import { measuredSolubilityRelativeU } from './saltSolubility.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
+import { quantile } from '../numeric/quantile.js';
 
 /** One uncertain input of the balance. @internal */
 export interface UncertainInput {
@@ -240,19 +242,13 @@ function propagatedInterval(fill: PreparedFill, solution: FillSolution, options:
       results[k] = solveFillTemperature(fill, { enthalpyShift, phaseShift, brineEnthalpyZ, brineHeatCapacityZ, osmoticZ, solubilityRelative: solubilityRelative.map((r) => Math.max(-0.9, r)), heatCapacityRelative: Math.max(-0.9, heatCapacityRelative) }).temperature;
     }
     results.sort();
-    const quantile = (q: number): number => {
-      const pos = q * (samples - 1);
-      const lo = Math.floor(pos);
-      const hi = Math.min(samples - 1, lo + 1);
-      return results[lo]! + (results[hi]! - results[lo]!) * (pos - lo);
-    };
     let mean = 0;
     for (const r of results) mean += r / samples;
     let variance = 0;
     for (const r of results) variance += (r - mean) ** 2 / (samples - 1);
     return {
-      low: Math.min(t, quantile(0.025)),
-      high: Math.max(t, quantile(0.975)),
+      low: Math.min(t, quantile(results, 0.025)),
+      high: Math.max(t, quantile(results, 0.975)),
       u: Math.sqrt(variance),
       method: 'monte-carlo',
       samples,

@@ -12,7 +12,8 @@ import { finalTemperatureInterval, heatCapacityRelativeU, transitionBracket, typ
 import type { FillEquilibrium } from './fillEquilibrium.js';
 import { packCautions } from './packCautions.js';
 import type { Caution } from '../quantity/caution.js';
-import { preparePackFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
+import { preparePackFill, type PreparedFill } from './packFill.js';
+import { type PackFill, type PackOptions } from './packInput.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
 import { integralFromInfinite } from '../solution/toMolality.js';
 import type { SolubilityStatus } from './saltSolubility.js';

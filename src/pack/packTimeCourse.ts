@@ -15,7 +15,8 @@ import { finalTemperatureInterval } from './finalTemperatureInterval.js';
 import { CONTACT_BURN_THRESHOLD_C, packCautions } from './packCautions.js';
 import type { Caution } from '../quantity/caution.js';
 import { packResult } from './packFinalTemperature.js';
-import { preparePackFill, type PackFill, type PackOptions } from './packFill.js';
+import { preparePackFill } from './packFill.js';
+import { type PackFill, type PackOptions } from './packInput.js';
 import { BOILING_C, solveFillTemperature } from './solveFillTemperature.js';
 
 const BAND_KEYS = optionNames<{ lowC: number; highC: number }>('packTimeCourse', { lowC: true, highC: true });

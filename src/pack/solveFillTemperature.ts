@@ -6,7 +6,7 @@
  *
  * @module
  */
-import { bracketedRoot } from './bracketedRoot.js';
+import { bracketedRoot } from '../numeric/bracketedRoot.js';
 import { evaluateFill, fillEquilibrium, fillScratch, frozenMargin, mixedFillState, type FillEquilibrium, type FillScratch, type Perturbation } from './fillEquilibrium.js';
 import type { PreparedFill } from './packFill.js';
 

@@ -8,6 +8,7 @@
 import { IonheatError } from '../error.js';
 import { estimateSchema, type Estimate } from './estimate.js';
 import { didYouMean } from './nearestName.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /** A short, safe rendering of any value for an error message (symbols, cycles and long text included). */
 export function describeValue(value: unknown): string {
@@ -32,6 +33,10 @@ export interface NumberRule {
   /** The value must be less than `max`. */
   below?: boolean;
   integer?: boolean;
+  /** The unit, written after each bound in an error (`g`, `°C`). */
+  unit?: string;
+  /** Why the range is what it is, added to an error (`where water is liquid at 1 bar`). */
+  reason?: string;
 }
 
 /**
@@ -41,23 +46,31 @@ export interface NumberRule {
  */
 export function numberArgument(value: unknown, field: string, what: string, rule: NumberRule = {}): number {
   // The common case first and without allocating: this runs inside solver loops.
-  if (typeof value === 'number' && Number.isFinite(value)) {
-    const { min, max } = rule;
-    const aboveMin = min === undefined || (rule.above ? value > min : value >= min);
-    const belowMax = max === undefined || (rule.below ? value < max : value <= max);
-    if (aboveMin && belowMax && (!rule.integer || Number.isInteger(value))) return value === 0 ? 0 : value;
-  }
-  throw numberError(value, field, what, rule);
+  if (withinRule(value, rule)) return unsignedZero(value);
+  throw new IonheatError('INVALID_ARGUMENT', `${what} (${field}) ${numberProblem(value, rule)}`, { field });
 }
 
-/** The error {@link numberArgument} throws, naming the first rule `value` breaks. */
-function numberError(value: unknown, field: string, what: string, rule: NumberRule): IonheatError {
-  const bad = (why: string): IonheatError => new IonheatError('INVALID_ARGUMENT', `${what} (${field}) ${why}, got ${describeValue(value)}`, { field });
-  if (typeof value !== 'number' || !Number.isFinite(value)) return bad('must be a finite number');
-  if (rule.integer && !Number.isInteger(value)) return bad('must be a whole number');
+/** Whether `value` is a finite number that keeps `rule`. */
+export function withinRule(value: unknown, rule: NumberRule): value is number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) return false;
   const { min, max } = rule;
-  if (min !== undefined && (rule.above ? !(value > min) : !(value >= min))) return bad(`must be ${rule.above ? 'greater than' : 'at least'} ${min}${max !== undefined ? ` and ${rule.below ? 'less than' : 'at most'} ${max}` : ''}`);
-  return bad(`must be ${rule.below ? 'less than' : 'at most'} ${max}${min !== undefined ? ` and ${rule.above ? 'greater than' : 'at least'} ${min}` : ''}`);
+  const aboveMin = min === undefined || (rule.above ? value > min : value >= min);
+  const belowMax = max === undefined || (rule.below ? value < max : value <= max);
+  return aboveMin && belowMax && (!rule.integer || Number.isInteger(value));
+}
+
+/** What is wrong with a `value` that breaks `rule`, in words: `must be at least 0.001 g and at most 1000000 g, got 0 g`. */
+export function numberProblem(value: unknown, rule: NumberRule): string {
+  const unit = rule.unit ? ` ${rule.unit}` : '';
+  const got = `, got ${describeValue(value)}${typeof value === 'number' && Number.isFinite(value) ? unit : ''}`;
+  if (typeof value !== 'number' || !Number.isFinite(value)) return `must be a finite number${unit ? ` of${unit}` : ''}${got}`;
+  if (rule.integer && !Number.isInteger(value)) return `must be a whole number${got}`;
+  const { min, max } = rule;
+  const reason = rule.reason ? `, ${rule.reason}` : '';
+  // The whole range, low end first, whichever end was crossed.
+  const low = min === undefined ? '' : `${rule.above ? 'greater than' : 'at least'} ${min}${unit}`;
+  const high = max === undefined ? '' : `${rule.below ? 'less than' : 'at most'} ${max}${unit}`;
+  return `must be ${low && high ? `${low} and ${high}` : low || high}${reason}${got}`;
 }
 
 /** The keys an options object may have, and whose options they are (`dissolve`), for errors that name both. */
@@ -118,6 +131,5 @@ export function estimateArgument(value: unknown, field = 'estimate'): Estimate {
   const e = parsed.data;
   for (const k of ['value', 'u', 'low', 'high'] as const) numberArgument(e[k], `${field}.${k}`, `the ${k === 'u' ? 'uncertainty' : k} of ${field}`, { min: -ESTIMATE_LIMIT, max: ESTIMATE_LIMIT });
   if (!(e.low <= e.value && e.value <= e.high)) throw new IonheatError('INVALID_ARGUMENT', `${field}: the interval [${e.low}, ${e.high}] does not hold the value ${e.value}`, { field: `${field}.low` });
-  const clean = (x: number): number => (x === 0 ? 0 : x);
-  return { ...e, value: clean(e.value), low: clean(e.low), high: clean(e.high), u: clean(e.u) };
+  return { ...e, value: unsignedZero(e.value), low: unsignedZero(e.low), high: unsignedZero(e.high), u: unsignedZero(e.u) };
 }

@@ -11,6 +11,8 @@ import { IonheatError } from '../error.js';
 import { COVERAGE_95 } from './constants.js';
 import { roundToExponent, roundToUncertainty } from './rounding.js';
 import { estimateArgument } from './argumentChecks.js';
+import { normalCdf } from '../numeric/normalCdf.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /**
  * How much an estimate can be trusted, most trusted first:
@@ -113,13 +115,12 @@ export function makeEstimate(input: EstimateInput): Estimate {
   if (!(low <= input.value && input.value <= high)) {
     throw new IonheatError('INVALID_ARGUMENT', `the interval [${low}, ${high}] does not hold the value ${input.value}`, { field: 'interval' });
   }
-  const clean = (x: number): number => (x === 0 ? 0 : x); // no −0 in results
   return {
     quantity: input.quantity,
-    value: clean(input.value),
-    u: clean(input.u),
-    low: clean(low),
-    high: clean(high),
+    value: unsignedZero(input.value),
+    u: unsignedZero(input.u),
+    low: unsignedZero(low),
+    high: unsignedZero(high),
     unit: input.unit,
     basis: input.basis,
     method: input.method,
@@ -161,8 +162,7 @@ export function roundEstimate(e: Estimate): Estimate {
   e = estimateArgument(e);
   const { value, u, exponent } = roundToUncertainty(e.value, e.u);
   if (e.u === 0) return { ...e };
-  const clean = (x: number): number => (x === 0 ? 0 : x);
-  return { ...e, value: clean(value), u, low: clean(roundToExponent(e.low, exponent)), high: clean(roundToExponent(e.high, exponent)) };
+  return { ...e, value: unsignedZero(value), u, low: unsignedZero(roundToExponent(e.low, exponent)), high: unsignedZero(roundToExponent(e.high, exponent)) };
 }
 
 /**
@@ -185,27 +185,4 @@ export function probabilityPositive(e: Pick<Estimate, 'value' | 'u'>): number {
   const z = e.value / e.u;
   if (e.u === 0 || !Number.isFinite(z)) return e.value > 0 ? 1 : 0;
   return normalCdf(z);
-}
-
-/**
- * The standard normal cumulative distribution Φ(x), by the complementary
- * error function (W. J. Cody's rational approximations are overkill here; the
- * Abramowitz–Stegun 7.1.26 form has |error| < 1.5e−7, enough for a probability
- * reported to three digits).
- *
- * @param x - the standard score z = (value − mean)/σ, dimensionless
- * @see Abramowitz, M.; Stegun, I. A. Handbook of Mathematical Functions (1964), eq. 7.1.26.
- * @example
- * ```ts
- * normalCdf(0); // 0.5
- * normalCdf(1.959963984540054); // ≈ 0.975
- * ```
- */
-export function normalCdf(x: number): number {
-  requireFinite(x, 'x');
-  const z = Math.abs(x) / Math.SQRT2;
-  const t = 1 / (1 + 0.3275911 * z);
-  const poly = t * (0.254829592 + t * (-0.284496736 + t * (1.421413741 + t * (-1.453152027 + t * 1.061405429))));
-  const erfc = poly * Math.exp(-z * z);
-  return x >= 0 ? 1 - erfc / 2 : erfc / 2;
 }

@@ -21,7 +21,7 @@ import type { Salt } from '../chem/salt.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { dissolve, type DissolveResult } from '../solution/dissolve.js';
 import { packFinalTemperature, type PackResult } from '../pack/packFinalTemperature.js';
-import { parseFillSpec } from './parseFillSpec.js';
+import { checkFillSpec } from './parseFillSpec.js';
 import { ownMeasuredEstimate, withOwnMeasurement } from './ownMeasurement.js';
 import { readCandidate, type CandidateInput, type CandidateLike } from './candidate.js';
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
@@ -122,21 +122,6 @@ type Computed =
 
 const SCREEN_OPTIONS = optionNames<ScreenOptions>('the screen', { objective: true, direction: true, spec: true, filters: true, excludeMeasured: true, sources: true, fill: true });
 const FILTER_KEYS = optionNames<ScreenFilters>('the screen filters', { excludeSalts: true, excludeIons: true, excludeHazards: true, minMolarMass: true, maxMolarMass: true });
-const FILL_SPEC_KEYS = optionNames<FillSpec>('a standard fill', { saltMassG: true, waterMassG: true, startC: true });
-
-/** A fill as given, checked: positive masses, a start where water is liquid. */
-function checkFill(fill: FillSpec | string): FillSpec {
-  if (typeof fill === 'string') return parseFillSpec(fill);
-  if (fill === null || typeof fill !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'fill: a standard fill is { saltMassG, waterMassG, startC } or text such as 40:80@22', { field: 'fill' });
-  checkOptionKeys(fill, FILL_SPEC_KEYS, 'fill');
-  const { saltMassG, waterMassG, startC } = fill;
-  const ok = (x: unknown): x is number => typeof x === 'number' && Number.isFinite(x);
-  if (!ok(saltMassG) || saltMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.saltMassG must be a positive number of grams, got ${describeValue(saltMassG)}`, { field: 'fill.saltMassG' });
-  if (!ok(waterMassG) || waterMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.waterMassG must be a positive number of grams, got ${describeValue(waterMassG)}`, { field: 'fill.waterMassG' });
-  if (!ok(startC) || startC < 0 || startC >= 100) throw new IonheatError('INVALID_ARGUMENT', `fill.startC must be a temperature from 0 °C up to (not including) 100 °C, where water is liquid; got ${describeValue(startC)}`, { field: 'fill.startC' });
-  return { saltMassG, waterMassG, startC };
-}
-
 /** The message of anything thrown, without trusting it (it may itself be a hostile object). */
 function thrownText(e: unknown): string {
   try {
@@ -242,7 +227,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
     if (isIonheatError(e)) throw e;
     throw new IonheatError('INVALID_ARGUMENT', `the options of the screen could not be read: ${thrownText(e)}`, { field: 'options' });
   }
-  const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
+  const fill: FillSpec | null = options.fill === undefined ? null : checkFillSpec(options.fill);
   const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
   if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: ${describeValue(options.objective)} is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
   const directionParsed = directionSchema.safeParse(options.direction ?? 'cool');

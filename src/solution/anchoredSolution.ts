@@ -18,6 +18,7 @@ import { anchorIndex, binaryIons, cationCoresAlike, type AnchorSalt, type Indexe
 import { saltIonClass, type SaltIonClass } from '../lattice/saltIonClass.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+import { quantile } from '../numeric/quantile.js';
 
 const ANCHORED_OPTIONS = optionNames<{ excludeMeasured?: boolean }>('anchoredSolutionEnthalpies', { excludeMeasured: true });
 
@@ -467,17 +468,6 @@ function floorGroups(dataset: Dataset, mode: SetMode = 'same'): ReadonlyMap<Latt
   });
 }
 
-/** The p quantile (default 0.95) of a sorted list with the element at `skip` left out (−1: none), linear between order statistics. */
-function quantile(sorted: readonly number[], skip: number, p = 0.95): number {
-  const n = sorted.length - (skip >= 0 ? 1 : 0);
-  if (n <= 0) return 0;
-  const at = (i: number): number => sorted[skip >= 0 && i >= skip ? i + 1 : i]!;
-  const h = (n - 1) * p;
-  const lo = Math.floor(h);
-  const hi = Math.min(n - 1, lo + 1);
-  return at(lo) + (h - lo) * (at(hi) - at(lo));
-}
-
 /** The calibration group of a target: its charge type and the class of its ions. */
 export interface FloorGroupKey {
   chargeType: string;
@@ -519,8 +509,8 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
     const n = g.needed.length - (skip >= 0 ? 1 : 0);
     if (n >= MIN_FLOOR_GROUP || key === '*') {
       const label = key === '*' ? 'all charge types' : key.replace('|', ', ');
-      const spreadScale = Math.min(1, Math.max(quantile(g.ratios, ratioSkip, SPREAD_SCALE_QUANTILE), ratioAtLeast));
-      return { relative: Math.max(quantile(g.needed, skip), atLeast), spreadScale, salts: n, group: atLeast > 0 || ratioAtLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
+      const spreadScale = Math.min(1, Math.max(quantile(g.ratios, SPREAD_SCALE_QUANTILE, ratioSkip), ratioAtLeast));
+      return { relative: Math.max(quantile(g.needed, 0.95, skip), atLeast), spreadScale, salts: n, group: atLeast > 0 || ratioAtLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
     }
     if (n > 0) {
       atLeast = Math.max(atLeast, largest(g.needed, skip));

@@ -4,11 +4,12 @@ import { parseSalt } from '../../chem/parseSalt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { latentWarmer, type WarmerFill, type WarmerOptions, type WarmerResult } from '../../warmer/latentWarmer.js';
 import { warmerCourseSvg } from '../../render/warmerCourse.js';
-import { joinNegativeValues, numberOption, readArgs } from './args.js';
+import { asFlagError, flagTable, joinNegativeValues, numberOption, readArgs } from './args.js';
 import type { Command } from './command.js';
 import { writeChart } from './writeChart.js';
 import { bulletLines } from './paragraphs.js';
 import { outputWidth } from './io.js';
+import { unsignedZero } from '../../numeric/unsignedZero.js';
 
 const options = {
   salt: { type: 'string' },
@@ -22,19 +23,21 @@ const options = {
   json: { type: 'boolean' },
 } as const;
 
-/** Options whose value is a number that may be negative (`--start -5`). */
-const NUMERIC = new Set(['mass', 'extra-water', 'start', 'container', 'ambient', 'g-ambient']);
-
-/** The library's field names as the options a user typed. */
-const OPTION_OF: Record<string, string> = {
+/** Each flag and the field of the warmer's fill or options it sets; an error about a field is reported under its flag. */
+const FIELD_OF_FLAG = {
   salt: 'salt',
-  massG: 'mass',
-  extraWaterG: 'extra-water',
-  startC: 'start',
-  containerJPerK: 'container',
-  ambientC: 'ambient',
-  ambientConductanceWPerK: 'g-ambient',
-};
+  mass: 'massG',
+  'extra-water': 'extraWaterG',
+  start: 'startC',
+  container: 'containerJPerK',
+  ambient: 'ambientC',
+  'g-ambient': 'ambientConductanceWPerK',
+} as const satisfies Partial<Record<keyof typeof options, string>>;
+
+const flagOfField = flagTable(FIELD_OF_FLAG);
+
+/** Options whose value is a number that may be negative (`--start -5`). */
+const NUMERIC = new Set(Object.keys(FIELD_OF_FLAG).filter((flag) => flag !== 'salt'));
 
 /** An estimate as the JSON report gives it: rounded by its uncertainty, with its unit. */
 function reported(e: Estimate) {
@@ -44,7 +47,7 @@ function reported(e: Estimate) {
 
 const r = (x: number, digits: number): number => {
   const v = Number(x.toFixed(digits));
-  return v === 0 ? 0 : v;
+  return unsignedZero(v);
 };
 
 function jsonReport(w: WarmerResult) {
@@ -146,10 +149,7 @@ export const warmerCommand: Command = {
     try {
       result = latentWarmer(fill, warmerOptions, dataset);
     } catch (e) {
-      // Name the option the user typed, not the library's field.
-      const option = isIonheatError(e) && e.field ? OPTION_OF[e.field] : undefined;
-      if (isIonheatError(e) && option && !e.message.startsWith('--')) throw new IonheatError(e.code, `--${option}: ${e.message}`, { field: option, ...(e.text !== undefined ? { text: e.text } : {}) });
-      throw e;
+      throw asFlagError(e, flagOfField);
     }
     const written = values.svg !== undefined ? writeChart(io.cwd, values.svg, warmerCourseSvg(result), 'svg') : undefined;
     if (values.json) {

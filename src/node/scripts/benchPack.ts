@@ -6,7 +6,7 @@
  */
 import { performance } from 'node:perf_hooks';
 import { packFinalTemperature } from '../../pack/packFinalTemperature.js';
-import type { PackFill } from '../../pack/packFill.js';
+import type { PackFill } from '../../pack/packInput.js';
 import { packRatioCurve } from '../../pack/packRatioCurve.js';
 
 /** Targets of the issue. */
