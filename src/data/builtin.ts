@@ -2,12 +2,14 @@
  * The built-in dataset: every table under `data/`, bundled into the package as
  * JSON so that the core entry needs no file access (it runs in a browser or a
  * notebook). Built on first use; the tables are validated by the test suite,
- * not at every start-up.
+ * not at every start-up, and the indexes and calibrations that take time to
+ * build come computed ahead (`builtinSnapshot.generated.ts`, `npm run generate`).
  *
  * @module
  */
 import type { SourceEntry } from './schemas.js';
 import { Dataset, type Tables } from './dataset.js';
+import { builtinSnapshot } from './builtinSnapshot.generated.js';
 import sources from '../../data/sources.json';
 import elements from '../../data/elements.json';
 import ions from '../../data/ions.json';
@@ -79,6 +81,9 @@ export function builtinDataset(): Dataset {
       'warmer-melts.json': warmerMelts,
     } as unknown as Tables,
     sources.sources as Record<string, SourceEntry>,
+    'built-in',
+    new Map(),
+    builtinSnapshot,
   );
   return builtin;
 }

@@ -10,6 +10,7 @@ import { IonheatError } from '../error.js';
 import { tableSchemas, type SourceEntry, type TableFile, type TableName, type TableRecord } from './schemas.js';
 import { tableKeys } from './tableKeys.js';
 import { BoundedCache } from './boundedCache.js';
+import { decodeSnapshot, encodeSnapshot } from './snapshotCodec.js';
 
 /** Entries a per-dataset cache holds by default: salts, formulas or results kept per key. */
 export const DATASET_CACHE_LIMIT = 4096;
@@ -52,6 +53,8 @@ export class Dataset {
   readonly #memo = new Map<string, unknown>();
   /** Which override set gave a user's source key (`source:key`) or record (`table:key`). */
   readonly #origins: ReadonlyMap<string, string>;
+  /** Indexes and calibrations computed ahead (when the package was built), by memo key, in the codec's JSON form. */
+  readonly #prebuilt: Readonly<Record<string, unknown>> | undefined;
   /** Where the tables came from, for messages: `built-in`, or the override files' names. */
   readonly label: string;
 
@@ -63,12 +66,15 @@ export class Dataset {
    * @param sources - citations by source key
    * @param label - where the tables came from, for messages
    * @param origins - which override set gave each user source (`source:key`) and record (`table:key`)
+   * @param prebuilt - memo values computed ahead from exactly these tables (see {@link Dataset.memoSnapshot}); a
+   *   dataset with other tables must not be given them
    */
-  constructor(tables: Tables, sources: Readonly<Record<string, SourceEntry>>, label = 'built-in', origins: ReadonlyMap<string, string> = new Map()) {
+  constructor(tables: Tables, sources: Readonly<Record<string, SourceEntry>>, label = 'built-in', origins: ReadonlyMap<string, string> = new Map(), prebuilt?: Readonly<Record<string, unknown>>) {
     this.#tables = deepFreeze({ ...tables });
     this.#sources = deepFreeze({ ...sources });
     this.label = label;
     this.#origins = origins;
+    this.#prebuilt = prebuilt;
   }
 
   /** The records of one table, in table order; empty when the dataset lacks the table. */
@@ -107,9 +113,26 @@ export class Dataset {
   memo<T>(key: string, build: () => T): T {
     const found = this.#memo.get(key);
     if (found !== undefined || this.#memo.has(key)) return found as T;
-    const value = build();
+    const value = this.#prebuilt !== undefined && Object.hasOwn(this.#prebuilt, key) ? (decodeSnapshot(this.#prebuilt[key], this) as T) : build();
     this.#memo.set(key, value);
     return value;
+  }
+
+  /**
+   * The memo values under `keys` (those built so far) in the JSON form the
+   * constructor's `prebuilt` takes: how `npm run generate` writes the
+   * indexes and calibrations of the built-in tables ahead. @internal
+   */
+  memoSnapshot(keys: readonly string[]): Record<string, unknown> {
+    const out: Record<string, unknown> = {};
+    const names = Object.keys(this.#tables) as TableName[];
+    for (const key of keys) if (this.#memo.has(key)) out[key] = encodeSnapshot(this.#memo.get(key), this, names);
+    return out;
+  }
+
+  /** The keys of the memo values built so far, in the order they were built. @internal */
+  memoKeys(): string[] {
+    return [...this.#memo.keys()];
   }
 
   /**

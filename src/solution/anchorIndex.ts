@@ -165,9 +165,9 @@ function gridOf(anchors: readonly AnchorSalt[], inPool: { cation: Set<string>; a
   return { cationIndex, anionIndex, byCation, byAnion, neighbours: pooled };
 }
 
-/** The anchor index of a dataset, built on first use. */
-export function anchorIndex(dataset: Dataset): AnchorIndex {
-  return dataset.memo('solution.anchorIndex', () => {
+/** The anchors of a dataset in formula order, built on first use (the costly part of the index: a lattice enthalpy by every estimator). */
+function anchorSalts(dataset: Dataset): readonly AnchorSalt[] {
+  return dataset.memo('solution.anchorSalts', () => {
     const salts = tableSalts(dataset);
     const anchors: AnchorSalt[] = [];
     for (const formula of [...salts.keys()].sort(byName)) {
@@ -191,6 +191,14 @@ export function anchorIndex(dataset: Dataset): AnchorIndex {
         lattice,
       });
     }
+    return anchors;
+  });
+}
+
+/** The anchor index of a dataset, built on first use. */
+export function anchorIndex(dataset: Dataset): AnchorIndex {
+  return dataset.memo('solution.anchorIndex', () => {
+    const anchors = anchorSalts(dataset);
     const byIons = new Map<string, Map<string, AnchorSalt>>();
     const inPool = { cation: new Set<string>(), anion: new Set<string>() };
     for (const a of anchors) {
