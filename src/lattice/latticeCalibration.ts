@@ -96,8 +96,8 @@ export function calibrationChargeType(salt: Salt): string {
 
 /** The ion kind of a salt for calibration. */
 export function saltIonKind(salt: Salt, dataset: Dataset): SaltIonKind {
-  const ions = dataset.memo('lattice.ionKinds', () => new Map(dataset.records('ions.json').map((i) => [i.id, i.kind])));
-  return salt.ions.every((i) => ions.get(i.ion) === 'monatomic') ? 'monatomic' : 'polyatomic';
+  const ions = dataset.index('ions.json');
+  return salt.ions.every((i) => ions.get(i.ion)?.kind === 'monatomic') ? 'monatomic' : 'polyatomic';
 }
 
 const NOBLE_GAS_Z = new Set([2, 10, 18, 36, 54, 86]);

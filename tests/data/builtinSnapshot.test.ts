@@ -5,6 +5,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { builtinSnapshotText } from '../../src/node/scripts/builtinSnapshot.js';
+import { builtinTablesText } from '../../src/node/scripts/builtinTables.js';
 import { freshDataset } from '../../src/node/scripts/freshDataset.js';
 import { builtinDataset } from '../../src/data/builtin.js';
 import { decodeSnapshot, encodeSnapshot } from '../../src/data/snapshotCodec.js';
@@ -27,8 +28,22 @@ function outcome(formula: string, dataset: Dataset): string {
   }
 }
 
-describe('the built-in snapshot', () => {
-  it('is what npm run generate writes from the tables today', () => {
+describe('the built-in tables and their snapshot', () => {
+  it('the tables module is what npm run generate writes from data/ today', () => {
+    const written = readFileSync(join(root, 'src', 'data', 'builtinTables.generated.ts'), 'utf8');
+    expect(written === builtinTablesText(), 'src/data/builtinTables.generated.ts is stale: run npm run generate').toBe(true);
+  });
+
+  it('the tables module leaves out only prose: every other field of data/*.json is carried', () => {
+    const file = JSON.parse(readFileSync(join(root, 'data', 'solubility.json'), 'utf8')) as { title: string; records: Record<string, unknown>[] };
+    const carried = builtinDataset().table('solubility.json')!;
+    expect(carried.title).toBe(file.title);
+    const strip = (r: Record<string, unknown>): unknown => JSON.parse(JSON.stringify(r, (k, v: unknown) => (k === 'note' || k === 'checkedAgainst' ? undefined : v)));
+    expect(carried.records).toEqual(file.records.map(strip));
+    expect(builtinDataset().source('wagman1982')?.citation).toMatch(/Wagman/);
+  });
+
+  it('the snapshot is what npm run generate writes from the tables today', () => {
     const written = readFileSync(join(root, 'src', 'data', 'builtinSnapshot.generated.ts'), 'utf8');
     expect(written === builtinSnapshotText(), 'src/data/builtinSnapshot.generated.ts is stale: run npm run generate').toBe(true);
   });
