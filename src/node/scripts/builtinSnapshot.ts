@@ -25,14 +25,14 @@ export const PREBUILT_KEYS: readonly string[] = [
   'chem.saltRecords.solubility.json',
   'chem.saltRecords.heat-capacities.json',
   'hydration.bornCalibration',
-  'lattice.calibration',
+  'lattice.calibrationResiduals',
   'solution.tableSalts',
   'solution.hydrateRulePairs',
   'solution.knownSaltForms',
   'solution.anchorSalts',
   'solution.anchorFloors',
   'brine.records',
-  'brine.calibration',
+  'brine.discrepancyScales',
 ];
 
 /** Salts and a fill whose computation builds every key above (a fixed list: the snapshot must not vary). */
