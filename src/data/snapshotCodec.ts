@@ -84,6 +84,12 @@ export function decodeSnapshot(json: unknown, tables: SnapshotTables): unknown {
     if (typeof j !== 'object' || j === null) return j;
     if (Array.isArray(j)) return j.map(read);
     const o = j as Record<string, unknown>;
+    const keys = Object.keys(o);
+    if (keys.length === 0 || keys[0]!.charCodeAt(0) !== 36 /* $ */) {
+      const out: Record<string, unknown> = {};
+      for (const k of keys) out[k] = read(o[k]);
+      return out;
+    }
     if ('$u' in o) return undefined;
     if ('$n' in o) return o.$n === '-0' ? -0 : Number(o.$n);
     if ('$r' in o) {
@@ -100,9 +106,7 @@ export function decodeSnapshot(json: unknown, tables: SnapshotTables): unknown {
     if ('$m' in o) return new Map((o.$m as [unknown, unknown][]).map(([k, x]) => [read(k), read(x)]));
     if ('$s' in o) return new Set((o.$s as unknown[]).map(read));
     if ('$salt' in o) return issueSalt(read(o.$salt) as Salt);
-    const out: Record<string, unknown> = {};
-    for (const k of Object.keys(o)) out[k] = read(o[k]);
-    return out;
+    throw new Error(`snapshot: unknown tag ${keys[0]}`);
   };
   return read(json);
 }

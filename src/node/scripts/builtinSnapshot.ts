@@ -33,6 +33,7 @@ export const PREBUILT_KEYS: readonly string[] = [
   'solution.anchorFloors',
   'brine.records',
   'brine.discrepancyScales',
+  'pack.hazardIndex',
 ];
 
 /** Salts and a fill whose computation builds every key above (a fixed list: the snapshot must not vary). */
