@@ -82,7 +82,7 @@ export const NON_ELECTROLYTE_SCALES: DiscrepancyScales = { osmotic: 0.02, enthal
  * @param dataset - the Pitzer table (default: built-in)
  */
 export function brineModel(salt: Salt, dataset: Dataset = builtinDataset()): BrineModel {
-  const cache = dataset.memo('brine.models', () => new Map<string, BrineModel>());
+  const cache = dataset.cache<string, BrineModel>('brine.models');
   const key = salt.anhydrous;
   let model = cache.get(key);
   if (!model) {

@@ -12,6 +12,7 @@
  * @module
  */
 import { z } from 'zod';
+import { HAZARD_CLASSES, STRUCTURE_TYPES } from './tableTerms.js';
 
 /** An identifier of an ion, written as formula and bracketed charge: `Na[+]`, `Ca[2+]`, `SO4[2-]`, `CO(NH2)2[0]`. */
 export const ionIdSchema = z
@@ -150,19 +151,7 @@ export const solutionEnthalpyRecordSchema = z.strictObject({
   ...provenance,
 });
 
-export const structureTypeSchema = z.enum([
-  'rock-salt',
-  'caesium-chloride',
-  'zinc-blende',
-  'wurtzite',
-  'fluorite',
-  'antifluorite',
-  'rutile',
-  'cadmium-iodide',
-  'cadmium-chloride',
-  'corundum',
-  'perovskite',
-]);
+export const structureTypeSchema = z.enum(STRUCTURE_TYPES);
 
 export const crystalRecordSchema = z.strictObject({
   formula: formulaTextSchema,
@@ -347,17 +336,7 @@ export const volumeCoefficientRecordSchema = z.strictObject({
   ...provenance,
 });
 
-export const hazardClassSchema = z.enum([
-  'oxidizer',
-  'irritant',
-  'corrosive',
-  'toxic',
-  'harmful',
-  'environmental',
-  'restricted',
-  'explosive-precursor',
-  'carcinogen',
-]);
+export const hazardClassSchema = z.enum(HAZARD_CLASSES);
 export const hazardRecordSchema = z.strictObject({
   /** A salt formula, or an ion id where the hazard follows the ion (every chromate). */
   subject: z.string().min(1).max(120),
@@ -473,8 +452,7 @@ export type MadelungRecord = z.infer<typeof madelungRecordSchema>;
 export type BornExponentRecord = z.infer<typeof bornExponentRecordSchema>;
 export type VolumeCoefficientRecord = z.infer<typeof volumeCoefficientRecordSchema>;
 export type HazardRecord = z.infer<typeof hazardRecordSchema>;
-export type HazardClass = z.infer<typeof hazardClassSchema>;
-export type StructureType = z.infer<typeof structureTypeSchema>;
+export type { HazardClass, StructureType } from './tableTerms.js';
 export type NobleGasCore = z.infer<typeof nobleGasCoreSchema>;
 export type IonKind = z.infer<typeof ionKindSchema>;
 export type WarmerMeltRecord = z.infer<typeof warmerMeltRecordSchema>;

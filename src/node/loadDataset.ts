@@ -20,6 +20,7 @@
  *
  * @module
  */
+import { mergeOverrides } from '../data/recordCheck.js';
 import { basename } from 'node:path';
 import { z } from 'zod';
 import { builtinDataset } from '../data/builtin.js';
@@ -81,7 +82,7 @@ export function applyOverrideDocument(document: unknown, label: string, base: Da
   }
   const tables: Record<string, unknown[]> = {};
   for (const [name, records] of Object.entries(parsed.data.tables)) tables[name.endsWith('.json') ? name : `${name}.json`] = records;
-  return base.withOverrides(tables as TableOverrides, label, parsed.data.sources ?? {}, { problems: implausibleOverrides(tables), refuseConflicts: true });
+  return mergeOverrides(base, tables as TableOverrides, label, parsed.data.sources ?? {}, { problems: implausibleOverrides(tables), refuseConflicts: true });
 }
 
 const TOP_LEVEL_KEYS = ['$schema', 'description', 'sources', 'tables'];

@@ -88,7 +88,7 @@ function build(salt: Salt, dataset: Dataset): PackSolubility {
  * @internal
  */
 export function packSolubility(salt: Salt, dataset: Dataset = builtinDataset()): PackSolubility {
-  const cache = dataset.memo('pack.solubility', () => new Map<string, PackSolubility>());
+  const cache = dataset.cache<string, PackSolubility>('pack.solubility');
   let known = cache.get(salt.anhydrous);
   if (!known) {
     known = build(salt, dataset);

@@ -6,7 +6,8 @@
  * @module
  */
 import { IonheatError } from '../error.js';
-import { estimateSchema, type Estimate } from './estimate.js';
+import type { Estimate } from './estimate.js';
+import { basisOrder } from './basisOrder.js';
 import { didYouMean } from './nearestName.js';
 import { unsignedZero } from '../numeric/unsignedZero.js';
 
@@ -119,17 +120,51 @@ export const ESTIMATE_LIMIT = 1e12;
 /**
  * `value` when it is a complete {@link Estimate} (every field of the shape,
  * finite numbers of magnitude at most 1e12, u ≥ 0, low ≤ value ≤ high),
- * else an `INVALID_ARGUMENT` error naming `field`. Extra keys are dropped.
+ * else an `INVALID_ARGUMENT` error naming `field`. A key an estimate does not have is refused.
  */
 export function estimateArgument(value: unknown, field = 'estimate'): Estimate {
-  const parsed = estimateSchema.safeParse(value);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    const at = issue && issue.path.length > 0 ? `${field}.${issue.path.join('.')}` : field;
-    throw new IonheatError('INVALID_ARGUMENT', `${field} must be an estimate as ionheat makes them (makeEstimate): ${at} ${issue ? issue.message.toLowerCase() : 'is malformed'}`, { field: at });
+  const problem = estimateShapeProblem(value);
+  if (problem) {
+    const at = problem.path ? `${field}.${problem.path}` : field;
+    throw new IonheatError('INVALID_ARGUMENT', `${field} must be an estimate as ionheat makes them (makeEstimate): ${at} ${problem.message}`, { field: at });
   }
-  const e = parsed.data;
+  const e = value as Estimate;
   for (const k of ['value', 'u', 'low', 'high'] as const) numberArgument(e[k], `${field}.${k}`, `the ${k === 'u' ? 'uncertainty' : k} of ${field}`, { min: -ESTIMATE_LIMIT, max: ESTIMATE_LIMIT });
   if (!(e.low <= e.value && e.value <= e.high)) throw new IonheatError('INVALID_ARGUMENT', `${field}: the interval [${e.low}, ${e.high}] does not hold the value ${e.value}`, { field: `${field}.low` });
   return { ...e, value: unsignedZero(e.value), low: unsignedZero(e.low), high: unsignedZero(e.high), u: unsignedZero(e.u) };
+}
+
+/** The fields of an estimate and what each must be (the shape of `estimateSchema`, checked here without zod, which is not loaded at start-up). */
+const ESTIMATE_FIELDS: Readonly<Record<keyof Estimate, 'string' | 'number' | 'basis' | 'strings'>> = {
+  quantity: 'string',
+  value: 'number',
+  u: 'number',
+  low: 'number',
+  high: 'number',
+  unit: 'string',
+  basis: 'basis',
+  method: 'string',
+  sources: 'strings',
+  notes: 'strings',
+};
+
+const typeName = (x: unknown): string => (x === null ? 'null' : Array.isArray(x) ? 'array' : typeof x);
+
+/** The first way `value` differs from an estimate's shape (`path` empty for the object itself), or undefined. */
+function estimateShapeProblem(value: unknown): { path: string; message: string } | undefined {
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) return { path: '', message: `invalid input: expected object, received ${typeName(value)}` };
+  const e = value as Record<string, unknown>;
+  for (const key in ESTIMATE_FIELDS) {
+    const x = e[key];
+    const kind = ESTIMATE_FIELDS[key as keyof Estimate];
+    if (kind === 'basis') {
+      if (!basisOrder.includes(x as never)) return { path: key, message: `invalid option: expected one of ${basisOrder.map((b) => `"${b}"`).join('|')}` };
+    } else if (kind === 'strings') {
+      if (!Array.isArray(x)) return { path: key, message: `invalid input: expected array, received ${typeName(x)}` };
+      for (let i = 0; i < x.length; i++) if (typeof x[i] !== 'string') return { path: `${key}.${i}`, message: `invalid input: expected string, received ${typeName(x[i])}` };
+    } else if (typeof x !== kind) return { path: key, message: `invalid input: expected ${kind}, received ${typeName(x)}` };
+  }
+  if ((e.u as number) < 0) return { path: 'u', message: 'too small: expected number to be >=0' };
+  for (const key in e) if (!Object.hasOwn(ESTIMATE_FIELDS, key)) return { path: '', message: `unrecognized key: "${key}"` };
+  return undefined;
 }

@@ -6,45 +6,18 @@
  *
  * @module
  */
-import { z } from 'zod';
 import { IonheatError } from '../error.js';
 import { COVERAGE_95 } from './constants.js';
 import { roundToExponent, roundToUncertainty } from './rounding.js';
 import { estimateArgument } from './argumentChecks.js';
 import { normalCdf } from '../numeric/normalCdf.js';
 import { unsignedZero } from '../numeric/unsignedZero.js';
+import { basisOrder } from './basisOrder.js';
+import type { Basis, Estimate } from './estimateSchema.js';
 
-/**
- * How much an estimate can be trusted, most trusted first:
- * `measured` (a tabulated measurement), `cycle` (closed from tabulated
- * formation enthalpies), `anchored` (a model difference added to measured
- * values of related salts), `model` (an estimator alone).
- */
-export const basisSchema = z.enum(['measured', 'cycle', 'anchored', 'model']);
-export type Basis = z.infer<typeof basisSchema>;
-/** The bases in order of trust. */
-export const basisOrder: readonly Basis[] = ['measured', 'cycle', 'anchored', 'model'];
+export { basisOrder } from './basisOrder.js';
+export type { Basis, Estimate } from './estimateSchema.js';
 
-export const estimateSchema = z.strictObject({
-  /** What is estimated, in words: `lattice enthalpy`, `enthalpy of solution`. */
-  quantity: z.string(),
-  value: z.number(),
-  /** Standard uncertainty (one standard deviation), same unit as `value`. */
-  u: z.number().nonnegative(),
-  /** Lower end of the 95 % interval. */
-  low: z.number(),
-  /** Upper end of the 95 % interval. */
-  high: z.number(),
-  unit: z.string(),
-  basis: basisSchema,
-  /** Machine-readable method name, e.g. `kapustinskii`, `born-haber`, `anchored`. */
-  method: z.string(),
-  /** Source keys of `data/sources.json` behind the number. */
-  sources: z.array(z.string()),
-  /** Flags and caveats a reader should see beside the number. */
-  notes: z.array(z.string()),
-});
-export type Estimate = z.infer<typeof estimateSchema>;
 
 /** What a caller supplies to {@link makeEstimate}; the interval defaults to value ± 1.96·u. */
 export interface EstimateInput {
@@ -102,7 +75,7 @@ export function makeEstimate(input: EstimateInput): Estimate {
   requireText(input.quantity, 'quantity');
   requireText(input.unit, 'unit');
   requireText(input.method, 'method');
-  if (!basisSchema.safeParse(input.basis).success) throw new IonheatError('INVALID_ARGUMENT', `the basis of an estimate is one of ${basisOrder.join(', ')}, got ${typeof input.basis === 'string' ? `"${input.basis}"` : typeof input.basis}`, { field: 'basis' });
+  if (!basisOrder.includes(input.basis)) throw new IonheatError('INVALID_ARGUMENT', `the basis of an estimate is one of ${basisOrder.join(', ')}, got ${typeof input.basis === 'string' ? `"${input.basis}"` : typeof input.basis}`, { field: 'basis' });
   requireTextList(input.sources, 'sources');
   requireTextList(input.notes, 'notes');
   requireFinite(input.value, 'value');

@@ -6,12 +6,13 @@
  *
  * @module
  */
+import { mergeOverrides } from '../data/recordCheck.js';
 import { describeValue, checkOptionKeys, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { BoundedCache } from '../data/boundedCache.js';
 import type { HazardClass, SourceEntry } from '../data/schemas.js';
-import { hazardClassSchema } from '../data/schemas.js';
+import { HAZARD_CLASSES, isTerm } from '../data/tableTerms.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import { typoSuspicion } from '../chem/typoSuspicion.js';
 import { findIon } from '../chem/ionIndex.js';
@@ -186,7 +187,7 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
     if (!findIon(id, dataset)) throw new IonheatError('UNKNOWN_ION', `excludeIons: "${id}" is not an ion id of the ${dataset.label} ion table (ids look like NH4[+], NO3[-])`, { field: 'excludeIons', text: id });
   }
   for (const h of filters.excludeHazards ?? []) {
-    if (!hazardClassSchema.safeParse(h).success) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: ${describeValue(h)} is not a hazard class (known: ${hazardClassSchema.options.join(', ')})`, { field: 'excludeHazards' });
+    if (!isTerm(HAZARD_CLASSES, h)) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: ${describeValue(h)} is not a hazard class (known: ${HAZARD_CLASSES.join(', ')})`, { field: 'excludeHazards' });
   }
   for (const [name, v] of [['minMolarMass', filters.minMolarMass], ['maxMolarMass', filters.maxMolarMass]] as const) {
     if (v !== undefined && !(Number.isFinite(v) && v > 0)) throw new IonheatError('INVALID_ARGUMENT', `${name} is a molar mass in g/mol and must be a positive number, got ${describeValue(v)}`, { field: name });
@@ -292,7 +293,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         },
       ];
     }
-    const merged = dataset.withOverrides(overrides, 'screening input', dataset.source(source) ? {} : { [source]: sources[source]! });
+    const merged = mergeOverrides(dataset, overrides, 'screening input', dataset.source(source) ? {} : { [source]: sources[source]! });
     datasets.set(key, merged);
     return merged;
   };

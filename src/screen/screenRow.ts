@@ -8,8 +8,8 @@
  */
 import { z } from 'zod';
 import { errorCodes } from '../error.js';
-import { estimateSchema } from '../quantity/estimate.js';
-import { saltSchema } from '../chem/salt.js';
+import { estimateSchema } from '../quantity/estimateSchema.js';
+import { saltSchema } from '../chem/saltSchema.js';
 import { hazardClassSchema } from '../data/schemas.js';
 import { candidateInputSchema } from './candidate.js';
 import { cautionSchema } from '../quantity/caution.js';

@@ -4,7 +4,7 @@
 // (The records below are deliberately broken; their numbers are the built-in
 // ones, CRC Handbook and NBS tables, and play no part in the checks.)
 import { describe, expect, it } from 'vitest';
-import { builtinDataset } from '../../src/data/builtin.js';
+import { builtinDataset } from '../../src/data/recordCheck.js';
 import { IonheatError } from '../../src/error.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { measuredSolutionEnthalpy } from '../../src/solution/measuredSolution.js';

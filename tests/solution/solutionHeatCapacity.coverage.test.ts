@@ -6,7 +6,7 @@
 // not checked against the NBS tables, given as an override because the
 // built-in table lacks it: the check is of the hydrate term of the sum.
 import { describe, expect, it } from 'vitest';
-import { builtinDataset } from '../../src/data/builtin.js';
+import { builtinDataset } from '../../src/data/recordCheck.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { solutionHeatCapacity } from '../../src/solution/solutionHeatCapacity.js';
 

@@ -186,8 +186,6 @@ export function runDemoPart(part: DemoPart, dataset?: Dataset): { result: Screen
 
 /** `ionheat demo`: the built-in demonstration. */
 export const demoCommand: Command = {
-  name: 'demo',
-  summary: 'run the demonstration: screen cold-pack and hand-warmer candidates for a first-aid supplier (prices invented)',
   usage: `ionheat demo [--out <dir>] [--json]
 
   --out <dir>   where to write the candidate lists (CSV), the charts (SVG) and the

@@ -54,8 +54,6 @@ const VERDICT_WORDS = { endothermic: 'endothermic — dissolving absorbs heat (c
 
 /** `ionheat dissolve <formula>`: the enthalpy of solution with its basis and verdict. */
 export const dissolveCommand: Command = {
-  name: 'dissolve',
-  summary: 'enthalpy of solution of a salt: best estimate, every basis, verdict, heat per gram',
   usage: [
     'ionheat dissolve <formula> [--exclude-measured] [--temperature <°C>] [--molality <mol/kg>] [--json]',
     '',

@@ -238,8 +238,6 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
 
 /** `ionheat pack`: the temperature a hot- or cold-pack fill reaches. */
 export const packCommand: Command = {
-  name: 'pack',
-  summary: 'design a hot or cold pack: final temperature (solubility-limited), 95 % interval, inverse design, time course, cautions',
   usage: [
     'ionheat pack --salt <formula> --salt-mass <g> --water <g> [--start <°C>] [--container <J/K>] [--target <°C>] [--json]',
     '',

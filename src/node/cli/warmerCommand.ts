@@ -107,8 +107,6 @@ function bad(field: string, message: string): IonheatError {
 
 /** `ionheat warmer`: a latent-heat warmer of a supercooled salt-hydrate melt. */
 export const warmerCommand: Command = {
-  name: 'warmer',
-  summary: 'a latent-heat warmer (supercooled hydrate melt): plateau, share crystallised at once, heat, plateau duration, recharge, cautions',
   usage: [
     'ionheat warmer --salt <hydrate> --mass <g> [--extra-water <g>] [--start <°C>] [--container <J/K>] [--ambient <°C> --g-ambient <W/K>] [--svg <file>] [--json]',
     '',
