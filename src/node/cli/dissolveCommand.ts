@@ -1,9 +1,9 @@
 import type { Dataset } from '../../data/dataset.js';
+import { GENERAL_CAUTION, VERDICT_WORDS, cautionsFor, perGramText as perGram } from './dissolveWords.js';
 import { formatSalt } from '../../chem/formatSalt.js';
 import type { Salt } from '../../chem/salt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { dissolve, type DissolveResult } from '../../solution/dissolve.js';
-import { hazardCoverage, saltHazards } from '../../pack/saltHazards.js';
 import { integralEnthalpyOfSolution } from '../../solution/integralEnthalpy.js';
 import { numberOption, readArgs } from './args.js';
 import { userSourceOf } from '../../solution/userValueCheck.js';
@@ -13,18 +13,6 @@ import { bulletLines } from './paragraphs.js';
 import { outputWidth } from './io.js';
 import { formatNumber, withTrueMinus } from '../../notation/minus.js';
 import { wrapText } from '../../notation/wrapText.js';
-
-/** The caution every dissolve result carries (common practice). */
-const GENERAL_CAUTION =
-  'Screening estimate. A dissolving salt can scald or freeze skin, and some salts are oxidisers, toxic or restricted: follow the safety data sheet, local codes, product-safety regulation and licensed practice.';
-
-/** Hazard statements of the salt (a hydrate shares its anhydrous salt's) and of its ions, from hazards.json. */
-function cautionsFor(salt: Salt, dataset: Dataset): string[] {
-  const found = saltHazards(salt, dataset).map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
-  const coverage = hazardCoverage(salt, dataset);
-  if (coverage.status === 'no hazard data') found.push(`No hazard data: the hazards table has no record for ${coverage.missingIons.join(' or ')}, which is not a sign of safety; check the safety data sheet.`);
-  return found;
-}
 
 const rounded = (e: Estimate | undefined): Estimate | undefined => (e ? roundEstimate(e) : undefined);
 
@@ -62,7 +50,6 @@ function basisText(e: Estimate, dataset: Dataset): string {
   return mine ? `${e.basis}, your value: ${e.sources.join(', ')} in ${mine}` : `${e.basis}, ${e.method}`;
 }
 
-const VERDICT_WORDS = { endothermic: 'endothermic — dissolving absorbs heat (cools)', exothermic: 'exothermic — dissolving releases heat (heats)', undetermined: 'undetermined — the 95 % interval spans zero' } as const;
 
 /** `ionheat dissolve <formula>`: the enthalpy of solution with its basis and verdict. */
 export const dissolveCommand: Command = {
@@ -107,12 +94,6 @@ export const dissolveCommand: Command = {
       out.push(`Integral enthalpy of solution to ${integral.molality} mol/kg, ${r.temperature.celsius} °C: ${signed(i.value)} ± ${i.u} kJ/mol (${i.method}); 95 % interval ${signed(i.low)} … ${signed(i.high)}`);
     }
     out.push(`Verdict: ${VERDICT_WORDS[r.verdict]}; P(endothermic) = ${r.probabilityEndothermic.toFixed(3)}`);
-    // The words follow the sign, so that the number after them is always positive: heat absorbed (cools) or released (heats).
-    const perGram = (e: Estimate, what: string) => {
-      const g = roundEstimate(e);
-      const released = g.value < 0;
-      return `Heat ${released ? 'released' : 'absorbed'} per gram of ${what}: ${formatNumber(Math.abs(g.value))} ± ${g.u} J/g${g.high < 0 ? ' (heats)' : g.low > 0 ? ' (cools)' : ''}`;
-    };
     out.push(perGram(r.perGram.salt, 'salt'));
     if (r.perGram.saturatedFill) out.push(perGram(r.perGram.saturatedFill, 'a saturated fill (salt + water at 25 °C)'));
     out.push('', 'Every estimate (kJ/mol, + = endothermic; ± is one standard uncertainty):', '');

@@ -21,10 +21,11 @@ import { dissolveCommand } from './dissolveCommand.js';
 import { screenCommand } from './screenCommand.js';
 import { packCommand } from './packCommand.js';
 import { warmerCommand } from './warmerCommand.js';
+import { workbenchCommand } from './workbenchCommand.js';
 import { version as PACKAGE_VERSION } from '../../../package.json';
 
 /** Every command, in the order `ionheat help` lists them. */
-export const commands: readonly Command[] = [demoCommand, saltCommand, latticeCommand, cycleCommand, dissolveCommand, packCommand, warmerCommand, screenCommand];
+export const commands: readonly Command[] = [demoCommand, saltCommand, latticeCommand, cycleCommand, dissolveCommand, packCommand, warmerCommand, screenCommand, workbenchCommand];
 
 function overview(): string {
   const width = Math.max(...commands.map((c) => c.name.length));
