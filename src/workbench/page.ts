@@ -335,8 +335,10 @@ packPanel();
 warmerPanel();
 screenPanel();
 dataPanel();
+// The forms and tabs respond from here on; the tables load in the worker meanwhile (data-ready below).
+document.body.dataset.interactive = String(Math.round(performance.now()));
 void ask({ kind: 'lists', input: null }).then((a) => {
   if (a.kind === 'lists') applyLists(a.lists);
-  document.body.dataset.ready = 'true';
+  document.body.dataset.ready = String(Math.round(performance.now()));
   status('Ready.');
 });

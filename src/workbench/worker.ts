@@ -66,9 +66,26 @@ async function answer(id: number, request: Request): Promise<Answer> {
     case 'clear-data':
       dataset = builtinDataset();
       return { id, kind: 'data', loaded: null, lists: lists() };
-    case 'lists':
-      return { id, kind: 'lists', lists: lists() };
+    case 'lists': {
+      const answer: Answer = { id, kind: 'lists', lists: lists() };
+      // After this answer is posted: the page is ready, and the warm-up runs while the person fills in a form.
+      setTimeout(warmUp, 0);
+      return answer;
+    }
   }
+}
+
+/**
+ * Salts of every basis, screened once when the page has loaded: the first computation builds the dataset's indexes
+ * and calibrations, which later requests then find ready.
+ */
+const WARM_UP = ['KNO3', 'RbSCN', 'CsI', 'MgSO4·7H2O'];
+
+let warmed = false;
+function warmUp(): void {
+  if (warmed) return;
+  warmed = true;
+  void screenOutcome({ source: { kind: 'text', text: `formula\n${WARM_UP.join('\n')}\n`, name: 'warm-up' }, fill: '40:80@22' }, dataset).catch(() => undefined);
 }
 
 scope.onmessage = (event) => {
