@@ -6,7 +6,6 @@
  * @module
  */
 import type { Answer, Lists, Request } from './protocol.js';
-import type { ScreenOutcome } from './screenView.js';
 import type { Cell, PanelView, Quantity, ShownNumber } from './view.js';
 
 const worker = new Worker(new URL('./worker.js', import.meta.url), { type: 'module' });
@@ -71,12 +70,28 @@ function sortNumber(text: string): number | undefined {
   return m ? Number(m[0].replace('−', '-')) : undefined;
 }
 
-function sortableTable(caption: string, header: string[], rows: Cell[][], numeric: number[]): HTMLTableElement {
+/** Rows shown at first: an enumerated screen has over a thousand, which a button shows in full. */
+const TABLE_LIMIT = 100;
+
+function sortableTable(caption: string, header: string[], rows: Cell[][], numeric: number[]): HTMLElement {
   const body = h('tbody');
+  const row = (r: Cell[]) => h('tr', {}, ...r.map((c, i) => h('td', { class: numeric.includes(i) || typeof c !== 'string' ? 'n' : undefined }, cellNode(c))));
+  let limit = TABLE_LIMIT;
+  let current = rows;
+  const more = h('button', { type: 'button', class: 'secondary show-all' }, `Show all ${rows.length} rows`);
+  const note = h('p', { class: 'help' });
   const fill = (order: Cell[][]) => {
-    body.replaceChildren(...order.map((r) => h('tr', {}, ...r.map((c, i) => h('td', { class: numeric.includes(i) || (typeof c !== 'string') ? 'n' : undefined }, cellNode(c))))));
+    current = order;
+    body.replaceChildren(...order.slice(0, limit).map(row));
+    const hidden = order.length - Math.min(limit, order.length);
+    more.hidden = hidden === 0;
+    note.textContent = hidden > 0 ? `Showing the first ${limit} of ${order.length} rows.` : '';
   };
-  fill(rows);
+  more.addEventListener('click', () => {
+    limit = Infinity;
+    fill(current);
+    status(`Showing all ${rows.length} rows.`);
+  });
   const heads = header.map((name, i) => {
     const button = h('button', { type: 'button', class: 'sort' }, name);
     const th = h('th', { scope: 'col', 'aria-sort': 'none' }, button);
@@ -100,7 +115,8 @@ function sortableTable(caption: string, header: string[], rows: Cell[][], numeri
     return th;
   });
   const table = h('table', {}, h('caption', {}, caption), h('thead', {}, h('tr', {}, ...heads)), body);
-  return table;
+  fill(rows);
+  return h('div', {}, h('div', { class: 'table-wrap', tabindex: '0', role: 'region', 'aria-label': caption }, table), note, more);
 }
 
 function cautionBox(cautions: string[]): HTMLElement | null {
@@ -113,7 +129,7 @@ function showView(out: HTMLElement, view: PanelView, extra: Node[] = []): void {
   const parts: Child[] = [cautionBox(view.cautions), h('h3', { class: 'result-heading' }, view.heading), ...view.lines.map((l) => h('p', { class: 'line' }, l))];
   if (view.quantities.length > 0) parts.push(h('dl', { class: 'quantities' }, ...view.quantities.flatMap(quantityRow)));
   parts.push(...extra);
-  for (const t of view.tables) parts.push(h('div', { class: 'table-wrap', tabindex: '0', role: 'region', 'aria-label': t.caption }, sortableTable(t.caption, t.header, t.rows, t.numeric)));
+  for (const t of view.tables) parts.push(sortableTable(t.caption, t.header, t.rows, t.numeric));
   for (const c of view.charts) {
     const figure = h('figure', { class: 'chart' }, h('figcaption', {}, c.title));
     const holder = h('div', { class: 'svg' });
@@ -131,14 +147,19 @@ function showError(out: HTMLElement, a: Extract<Answer, { kind: 'error' }>): voi
 }
 
 /** Runs one panel's request, with the output region marked busy meanwhile. */
-async function run(out: HTMLElement, request: Request, show: (a: Answer) => void, progress?: (done: number, total?: number) => void): Promise<void> {
+async function run(out: HTMLElement, request: Request, show: (a: Answer) => void | false | Promise<void>, progress?: (done: number, total?: number) => void): Promise<void> {
   out.setAttribute('aria-busy', 'true');
   const began = performance.now();
   const a = await ask(request, progress);
   out.setAttribute('aria-busy', 'false');
-  out.dataset.ms = String(Math.round(performance.now() - began));
+  const received = performance.now();
   if (a.kind === 'error') showError(out, a);
-  else show(a);
+  else {
+    const shown = show(a);
+    out.dataset.layoutMs = String(Math.round(performance.now() - received));
+    await shown;
+  }
+  out.dataset.ms = String(Math.round(performance.now() - began));
   out.dataset.done = String(Number(out.dataset.done ?? '0') + 1);
 }
 
@@ -217,8 +238,10 @@ function warmerPanel(): void {
   });
 }
 
-function download(name: string, text: string, type: string): HTMLAnchorElement {
-  const url = URL.createObjectURL(new Blob([text], { type }));
+let downloadUrls: string[] = [];
+function download(name: string, blob: Blob): HTMLAnchorElement {
+  const url = URL.createObjectURL(blob);
+  downloadUrls.push(url);
   return h('a', { href: url, download: name, class: 'download' }, `Download ${name}`);
 }
 
@@ -253,10 +276,12 @@ function screenPanel(): void {
       (a) => {
         progress.hidden = true;
         if (a.kind !== 'screen') return;
-        const o: ScreenOutcome = a.outcome;
+        const o = a.outcome;
         out.dataset.workerMs = String(o.elapsedMs);
-        const downloads = h('p', { class: 'downloads' }, download('screen.csv', o.csv, 'text/csv'), ' ', download('screen.json', o.json, 'application/json'), h('span', { class: 'words' }, ' — the same files as ionheat screen --format csv / --json'));
-        showView(out, o.view, [downloads]);
+        for (const u of downloadUrls) URL.revokeObjectURL(u);
+        downloadUrls = [];
+        const downloads = h('p', { class: 'downloads' }, download('screen.csv', a.csv), ' ', download('screen.json', a.json), h('span', { class: 'words' }, ' — the same files as ionheat screen --format csv / --json'));
+        return showView(out, o.view, [downloads]);
       },
       (done, total) => {
         if (total) {

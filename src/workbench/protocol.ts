@@ -35,7 +35,7 @@ export interface DataLoaded {
 
 export type Answer =
   | { id: number; kind: 'view'; view: PanelView }
-  | { id: number; kind: 'screen'; outcome: ScreenOutcome }
+  | { id: number; kind: 'screen'; outcome: Omit<ScreenOutcome, 'csv' | 'json'>; csv: Blob; json: Blob }
   | { id: number; kind: 'data'; loaded: DataLoaded | null; lists: Lists }
   | { id: number; kind: 'lists'; lists: Lists }
   | { id: number; kind: 'progress'; done: number; total?: number }

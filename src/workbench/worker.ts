@@ -59,8 +59,11 @@ async function answer(id: number, request: Request): Promise<Answer> {
       return { id, kind: 'view', view: packView(request.input, dataset) };
     case 'warmer':
       return { id, kind: 'view', view: warmerView(request.input, dataset) };
-    case 'screen':
-      return { id, kind: 'screen', outcome: await screenOutcome(request.input, dataset, (done, total) => scope.postMessage({ id, kind: 'progress', done, ...(total !== undefined ? { total } : {}) })) };
+    case 'screen': {
+      const { csv, json, ...outcome } = await screenOutcome(request.input, dataset, (done, total) => scope.postMessage({ id, kind: 'progress', done, ...(total !== undefined ? { total } : {}) }));
+      // The downloads go as blobs, passed by reference: megabytes of text would otherwise be copied on the page's thread.
+      return { id, kind: 'screen', outcome, csv: new Blob([csv], { type: 'text/csv' }), json: new Blob([json], { type: 'application/json' }) };
+    }
     case 'data':
       return { id, kind: 'data', loaded: loadData(request.input.text, request.input.name), lists: lists() };
     case 'clear-data':
