@@ -27,7 +27,7 @@ const POLICY = "default-src 'none'; script-src 'self'; worker-src 'self'; style-
 export function workbenchDirectory(): string {
   const here = typeof __dirname === 'string' ? __dirname : dirname(fileURLToPath(import.meta.url));
   const candidates = [join(here, 'workbench'), join(here, '..', 'workbench'), join(here, '..', '..', 'dist', 'workbench'), join(here, '..', '..', '..', 'dist', 'workbench')];
-  const found = candidates.find((d) => existsSync(join(d, 'index.html')));
+  const found = candidates.find((d) => existsSync(join(d, 'index.html')) && existsSync(join(d, 'worker.js')));
   if (!found) throw new IonheatError('INVALID_ARGUMENT', 'the workbench page is not built: run npm run build in a clone (the published package ships it in dist/workbench)', {});
   return found;
 }

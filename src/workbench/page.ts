@@ -143,7 +143,7 @@ function showView(out: HTMLElement, view: PanelView, extra: Node[] = []): void {
 
 function showError(out: HTMLElement, a: Extract<Answer, { kind: 'error' }>): void {
   const list = a.problems.length > 1 ? h('ul', { class: 'problems' }, ...a.problems.map((p) => h('li', {}, p))) : null;
-  out.replaceChildren(h('div', { class: 'error', role: 'alert' }, h('strong', {}, 'Cannot compute: '), a.problems.length > 1 ? `${a.message.slice(0, a.message.indexOf('(1) ')).replace(/:\s*\d+ problems:\s*$/, '')}: ${a.problems.length} problems` : a.message, list));
+  out.replaceChildren(h('div', { class: 'error', role: 'alert' }, h('strong', {}, out.id === 'data-out' ? 'Not loaded: ' : 'Cannot compute: '), a.problems.length > 1 ? `${a.message.slice(0, a.message.indexOf('(1) ')).replace(/:\s*\d+ problems:\s*$/, '')}: ${a.problems.length} problems` : a.message, list));
 }
 
 /** Runs one panel's request, with the output region marked busy meanwhile. */

@@ -19,7 +19,7 @@ export function warmerView(fill: WarmerFill, dataset: Dataset): PanelView {
   view.cautions.push(...w.cautions);
   view.lines.push(`Melts ${MELTS[w.melt.melting]} at ${w.melt.meltingPoint.value} °C, latent heat ${w.melt.latentHeat.value} J/g.`);
   view.quantities.push(estimateQuantity('Plateau', w.plateau, 'plateau', '°C', { strong: true }));
-  view.quantities.push(estimateQuantity('Crystallised at once', w.crystallisedAtPlateau, 'crystallisedAtPlateau', 'of the hydrate (fraction)'));
+  view.quantities.push(estimateQuantity('Crystallised at once (fraction of the hydrate)', w.crystallisedAtPlateau, 'crystallisedAtPlateau', ''));
   view.quantities.push(estimateQuantity('Heat released', w.heatReleased, 'heatReleased', 'kJ'));
   view.quantities.push(estimateQuantity('Heat per gram of fill', w.heatPerGram, 'heatPerGram', 'J/g'));
   view.quantities.push(estimateQuantity('Plateau duration', w.plateauDuration, 'plateauDuration', 's', { words: 'until all crystallised or 1 K below the plateau' }));
