@@ -8,6 +8,7 @@
 import type { Dataset } from '../data/dataset.js';
 import { formatSalt } from '../chem/formatSalt.js';
 import { dissolve } from '../solution/dissolve.js';
+import { typoSuspicion } from '../chem/typoSuspicion.js';
 import { integralEnthalpyOfSolution } from '../solution/integralEnthalpy.js';
 import { userSourceOf } from '../solution/userValueCheck.js';
 import { basisChart } from '../render/basisChart.js';
@@ -40,6 +41,9 @@ export function saltView(request: SaltRequest, dataset: Dataset): PanelView {
     const known = h.knownWaters.length > 0 ? `known forms: ${h.knownWaters.map((w) => (w === 0 ? 'anhydrous' : `·${w}H₂O`)).join(', ')}` : 'no form of this salt is known to the tables';
     view.lines.push(`Hypothetical hydrate (${h.reason}; ${known}): the numbers below extrapolate the hydrate rule and describe no real solid.`);
   }
+  // A formula that reads only through a likely slip of the keyboard: said first, not among the notes.
+  const typo = typoSuspicion(request.formula, r.salt, dataset);
+  if (typo) view.cautions.unshift(`Check the formula: ${typo.message}`);
   const mine = userSourceOf(r.best, dataset);
   view.lines.push(`Verdict: ${VERDICT_WORDS[r.verdict]}; P(endothermic) = ${r.probabilityEndothermic.toFixed(3)}`);
   view.lines.push(`Best basis: ${mine ? `${r.best.basis}, your value: ${r.best.sources.join(', ')} in ${mine}` : `${r.best.basis}, ${r.best.method}`}`);
@@ -62,6 +66,6 @@ export function saltView(request: SaltRequest, dataset: Dataset): PanelView {
   });
   view.charts.push({ title: 'Every basis with its 95 % interval', svg: basisChart(r) });
   if (r.hydration?.absolute) view.quantities.push(estimateQuantity(`Hydration enthalpy of the ions, Σν·ΔhydH° (${r.hydration.absolute.method})`, r.hydration.absolute, 'hydration.absolute', 'kJ/mol'));
-  view.notes.push(...new Set([...r.notes, ...r.best.notes]));
+  view.notes.push(...[...new Set([...r.notes, ...r.best.notes])].filter((n) => n !== typo?.message));
   return view;
 }

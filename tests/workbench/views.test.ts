@@ -37,7 +37,15 @@ describe('the workbench panels, computed in Node', () => {
     expect(view.charts[0]!.svg).toContain('<svg');
   });
 
-  it('Salt: a hypothetical hydrate and an exothermic salt say so', () => {
+  it('Salt: a formula that reads only through a slip is named first, with the salt probably meant', () => {
+    // A user's measured value for KN3 (a test value, not data) makes both readings of KN03 measured salts: computed, warned.
+    const withAzide = dataset.withOverrides({ 'solution-enthalpies.json': [{ formula: 'KN3', value: 20, unit: 'kJ/mol', uncertainty: 1, source: 'test', fromMemory: false }] }, 'test', { test: { citation: 'invented for this test', kind: 'inHouse' } } as never);
+    const view = saltView({ formula: 'KN03' }, withAzide);
+    expect(view.cautions[0]).toMatch(/^Check the formula: .*KNO₃ is one slip away/);
+    expect(view.notes.some((n) => n.includes('one slip away'))).toBe(false);
+  });
+
+  it('Salt: an exothermic salt says it heats', () => {
     const view = saltView({ formula: 'CaCl2' }, dataset);
     expect(view.lines.some((l) => l.startsWith('Verdict: exothermic'))).toBe(true);
     expect(view.quantities.find((q) => q.label.startsWith('Heat released per gram'))).toBeDefined();
