@@ -2,6 +2,8 @@
 // unknown, screens with outliers, a fill and a spec), shared by the layout checks and the PNG rendering.
 import { bornHaberCycle, cycleDiagram, intervalChart, latentWarmer, packCurveSvg, packRatioCurve, packTimeCourse, screen, timeCourseSvg, warmerCourseSvg } from '../../src/index.js';
 import { specThresholds } from '../../src/screen/specThresholds.js';
+import { basisChart } from '../../src/render/basisChart.js';
+import { dissolve } from '../../src/index.js';
 
 export interface Chart {
   name: string;
@@ -11,6 +13,10 @@ export interface Chart {
 export function chartFixtures(): Chart[] {
   const charts: Chart[] = [];
   const add = (name: string, svg: string) => charts.push({ name, svg });
+  // Every basis of one salt (the workbench's Salt panel): endothermic, exothermic, and a salt known by models only.
+  add('bases-NH4NO3', basisChart(dissolve('NH4NO3')));
+  add('bases-CaCl2', basisChart(dissolve('CaCl2')));
+  add('bases-RbSCN', basisChart(dissolve('RbSCN')));
   add('cycle-NaCl-lattice', cycleDiagram(bornHaberCycle('NaCl')));
   add('cycle-CaCl2-lattice', cycleDiagram(bornHaberCycle('CaCl2')));
   add('cycle-MgO-electron-affinity', cycleDiagram(bornHaberCycle('MgO', { solve: 'electron-affinity', latticeEnthalpy: { value: 3792, u: 20 } })));

@@ -1,4 +1,5 @@
 import type { Dataset } from '../../data/dataset.js';
+import { GENERAL_CAUTION, VERDICT_WORDS, cautionsFor, perGramText as perGram } from './dissolveWords.js';
 import { formatSalt } from '../../chem/formatSalt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { dissolve, type DissolveResult } from '../../solution/dissolve.js';
@@ -50,7 +51,6 @@ function basisText(e: Estimate, dataset: Dataset): string {
   return mine ? `${e.basis}, your value: ${e.sources.join(', ')} in ${mine}` : `${e.basis}, ${e.method}`;
 }
 
-const VERDICT_WORDS = { endothermic: 'endothermic — dissolving absorbs heat (cools)', exothermic: 'exothermic — dissolving releases heat (heats)', undetermined: 'undetermined — the 95 % interval spans zero' } as const;
 
 /** `ionheat dissolve <formula>`: the enthalpy of solution with its basis and verdict. */
 export const dissolveCommand: Command = {
@@ -94,12 +94,6 @@ export const dissolveCommand: Command = {
       out.push(`Integral enthalpy of solution to ${integral.molality} mol/kg, ${r.temperature.celsius} °C: ${signed(i.value)} ± ${i.u} kJ/mol (${i.method}); 95 % interval ${signed(i.low)} … ${signed(i.high)}`);
     }
     out.push(`Verdict: ${VERDICT_WORDS[r.verdict]}; P(endothermic) = ${r.probabilityEndothermic.toFixed(3)}`);
-    // The words follow the sign, so that the number after them is always positive: heat absorbed (cools) or released (heats).
-    const perGram = (e: Estimate, what: string) => {
-      const g = roundEstimate(e);
-      const released = g.value < 0;
-      return `Heat ${released ? 'released' : 'absorbed'} per gram of ${what}: ${formatNumber(Math.abs(g.value))} ± ${g.u} J/g${g.high < 0 ? ' (heats)' : g.low > 0 ? ' (cools)' : ''}`;
-    };
     out.push(perGram(r.perGram.salt, 'salt'));
     if (r.perGram.saturatedFill) out.push(perGram(r.perGram.saturatedFill, 'a saturated fill (salt + water at 25 °C)'));
     out.push('', 'Every estimate (kJ/mol, + = endothermic; ± is one standard uncertainty):', '');

@@ -27,6 +27,7 @@ export const commands: readonly CommandEntry[] = [
   { name: 'pack', summary: 'design a hot or cold pack: final temperature (solubility-limited), 95 % interval, inverse design, time course, cautions', load: async () => (await import('./packCommand.js')).packCommand },
   { name: 'warmer', summary: 'a latent-heat warmer (supercooled hydrate melt): plateau, share crystallised at once, heat, plateau duration, recharge, cautions', load: async () => (await import('./warmerCommand.js')).warmerCommand },
   { name: 'screen', summary: 'rank candidate salts for a hot or cold pack and check them against a specification', load: async () => (await import('./screenCommand.js')).screenCommand },
+  { name: 'workbench', summary: 'open the workbench in a browser: salts, packs, warmers, screens and your data, computed in the page', load: async () => (await import('./workbenchCommand.js')).workbenchCommand },
 ];
 
 function overview(): string {

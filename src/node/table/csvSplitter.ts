@@ -14,12 +14,14 @@
  *   as written (as spreadsheets write and read it).
  * - A byte-order mark at the start is dropped.
  *
+ * Bytes are decoded by the platform's `TextDecoder` (no Node built-in), so the
+ * workbench page reads a candidate list with the same code as the command line.
+ *
  * Memory is bounded by the limits: at most one record (and one chunk of
  * input) is held, and an over-long line is skipped as it streams.
  *
  * @module
  */
-import { StringDecoder } from 'node:string_decoder';
 
 /** One record: its cells, or why it could not be read (with the cells read before the fault). */
 export type CsvRecordRead = { line: number; cells: string[] } | { line: number; cells: string[]; error: string };
@@ -114,8 +116,9 @@ function readRecord(text: string, start: number, eof: boolean, limits: CsvLimits
  * @param input - the bytes (UTF-8) or text, in chunks
  * @param limits - the longest record and the most lines of a quoted cell
  */
-export async function* csvRecords(input: AsyncIterable<Buffer | string>, limits: CsvLimits): AsyncGenerator<CsvRecordRead[]> {
-  const decoder = new StringDecoder('utf8');
+export async function* csvRecords(input: AsyncIterable<Uint8Array | string>, limits: CsvLimits): AsyncGenerator<CsvRecordRead[]> {
+  // ignoreBOM keeps a byte-order mark in the text, where the check below drops it once (as for text input).
+  const decoder = new TextDecoder('utf-8', { ignoreBOM: true });
   let text = '';
   let line = 1;
   let first = true;
@@ -127,8 +130,8 @@ export async function* csvRecords(input: AsyncIterable<Buffer | string>, limits:
     const next = await iterator.next();
     if (next.done) {
       eof = true;
-      text += decoder.end();
-    } else text += typeof next.value === 'string' ? next.value : decoder.write(next.value);
+      text += decoder.decode();
+    } else text += typeof next.value === 'string' ? next.value : decoder.decode(next.value, { stream: true });
     if (first && text.length > 0) {
       if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
       first = false;

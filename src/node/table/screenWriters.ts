@@ -152,6 +152,12 @@ function fitCells(raw: readonly string[], line: number, header: readonly string[
   return cells;
 }
 
+/** The header and cells of the screen's table for collected rows (in the order given), as the Markdown table has them; the workbench page shows the same cells. */
+export function screenTableCells(rows: readonly ScreenRow[], settings: ScreenSettings): { header: string[]; body: string[][]; caution: string } {
+  const withCost = rows.some((r) => r.input.pricePerKg !== undefined);
+  return { header: headerOf(settings, rows, withCost), body: rows.map((r) => cellsOf(r, settings, withCost)), caution: CAUTION };
+}
+
 /** A Markdown table of collected rows, with the caution below it. */
 export function markdownTableOf(rows: readonly ScreenRow[], settings: ScreenSettings): string {
   const withCost = rows.some((r) => r.input.pricePerKg !== undefined);
