@@ -132,4 +132,17 @@ describe('the pack command', () => {
     expect(out.dissolved[0]!.solubilityStatus).toBe('estimated');
     expect(out.dissolved[0]!.solubility.value).toBe(0.000192);
   });
+
+  it('never reports a zero-width interval for a fill a salt barely changes: the ends are rounded outwards', async () => {
+    // 40 g SrCO3 in 80 g water: llnl.dat puts its solubility near 1e-4 g per 100 g water, so the fill moves by
+    // microkelvins; rounded to 0.0001 K its interval ends would print as one number.
+    const run = await runCliInMemory(['pack', '--salt', 'SrCO3', '--salt-mass', '40', '--water', '80', '--start', '22', '--json']);
+    const t = (JSON.parse(run.out) as { finalTemperature: { value: number; low: number; high: number } }).finalTemperature;
+    expect(t.high).toBeGreaterThan(t.low);
+    expect(t.low).toBeLessThanOrEqual(t.value);
+    expect(t.high).toBeGreaterThanOrEqual(t.value);
+    expect(t.high - t.low).toBeLessThan(0.001);
+    const table = await runCliInMemory(['screen', '-', '--objective', 'fill-temperature', '--fill', '40:80@22', '--direction', 'heat'], { stdin: '["SrCO3"]' });
+    expect(table.out).toContain('22.00 [22.00, 22.01]');
+  });
 });
