@@ -15,7 +15,7 @@ import type { PackIntervalOptions } from './packInput.js';
 import { seededNormal } from '../numeric/seededNormal.js';
 import { withSolubilityBounds } from './solubilityBounds.js';
 import { measuredSolubilityRelativeU } from './saltSolubility.js';
-import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
+import { solveFillTemperature, TEMPERATURE_TOLERANCE_K, type FillSolution } from './solveFillTemperature.js';
 import { quantile } from '../numeric/quantile.js';
 
 /** One uncertain input of the balance. @internal */
@@ -170,7 +170,9 @@ export function heatCapacityRelativeU(fill: PreparedFill, solution: FillSolution
  * @internal
  */
 export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolution, options: PackIntervalOptions = { method: 'bounds' }): TemperatureInterval {
-  return withTransitionBracket(fill, solution, withSolubilityBounds(fill, solution, propagatedInterval(fill, solution, options)));
+  const interval = withTransitionBracket(fill, solution, withSolubilityBounds(fill, solution, propagatedInterval(fill, solution, options)));
+  // Never narrower than the solve's own tolerance: a fill a salt moves by less than that is known to no better.
+  return { ...interval, low: Math.min(interval.low, solution.temperature - TEMPERATURE_TOLERANCE_K), high: Math.max(interval.high, solution.temperature + TEMPERATURE_TOLERANCE_K) };
 }
 
 /**

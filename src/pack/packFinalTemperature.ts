@@ -14,7 +14,7 @@ import { packCautions } from './packCautions.js';
 import type { Caution } from '../quantity/caution.js';
 import { preparePackFill, type PreparedFill } from './packFill.js';
 import { type PackFill, type PackOptions } from './packInput.js';
-import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
+import { solveFillTemperature, TEMPERATURE_TOLERANCE_K, type FillSolution } from './solveFillTemperature.js';
 import { integralFromInfinite } from '../solution/toMolality.js';
 import type { SolubilityStatus } from './saltSolubility.js';
 import { CONVERSION_MIN_SOLUBILITY } from './solidConversion.js';
@@ -222,7 +222,9 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
       iceFormation: state.iceJ / 1000,
       boiling: vaporJ === 0 ? 0 : vaporJ / 1000,
       sensible,
-      imbalance: absorbedAll === 0 ? 0 : Math.abs(absorbedAll + sensible) / Math.abs(absorbedAll),
+      // The residual beyond what the solve's own tolerance leaves (C·1e-9 K), relative to the heat absorbed: a salt
+      // that dissolves 1e-20 mol moves the fill by less than the tolerance, which is no imbalance.
+      imbalance: absorbedAll === 0 ? 0 : Math.max(0, Math.abs(absorbedAll + sensible) - (state.heatCapacity * TEMPERATURE_TOLERANCE_K) / 1000) / Math.abs(absorbedAll),
     },
     heatCapacity: {
       value: state.heatCapacity,

@@ -8,7 +8,7 @@
  */
 import { drawChecked } from './chartInput.js';
 import type { Basis, Estimate } from '../quantity/estimate.js';
-import { formatEstimate } from '../quantity/formatEstimate.js';
+import { formatEstimate, TEMPERATURE_RESOLUTION_K } from '../quantity/formatEstimate.js';
 import { focusRange } from './focusRange.js';
 import type { Direction, FillSpec, ObjectiveName, ScreenRow, Suitability } from '../screen/screenRow.js';
 import { formulaText } from '../notation/formula.js';
@@ -89,7 +89,7 @@ function marker(basis: Basis, x: number, y: number, r: number, fill: string, str
 
 /** `34.89 [34.50, 35.28]`, rounded to the uncertainty (two significant digits of u). */
 function valueText(e: Estimate): string {
-  const f = formatEstimate(e);
+  const f = formatEstimate(e, e.unit === '°C' ? { resolution: TEMPERATURE_RESOLUTION_K } : {});
   return `${f.value}  [${f.low}, ${f.high}]`;
 }
 

@@ -115,3 +115,14 @@ describe('the interval band of the NH4NO3 ratio curve is continuous across ice, 
     }
   });
 });
+
+describe('a salt that dissolves almost nothing: 40 g ZnS in 80 g water at 22 °C', () => {
+  // llnl.dat puts sphalerite's solubility near 1e-10 g per 100 g water: the fill moves by far less than the
+  // solver's tolerance (1e-9 K), so it reports no imbalance and an interval at least that tolerance wide.
+  const r = packFinalTemperature({ solids: [{ formula: 'ZnS', massG: 40 }], waterG: 80, startC: 22 });
+  it('closes the balance within the solve tolerance and has an interval of non-zero width', () => {
+    expect(r.heat.imbalance).toBe(0);
+    expect(r.finalTemperature.high).toBeGreaterThan(r.finalTemperature.low);
+    expect(Math.abs(r.temperatureChange)).toBeLessThan(1e-6);
+  });
+});

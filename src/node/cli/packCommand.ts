@@ -90,12 +90,22 @@ const r = (x: number, digits: number): number => {
   return unsignedZero(v);
 };
 
-/** An estimate rounded for reporting: u to two significant digits, value and interval to the same place (at most 4 decimals). */
+/**
+ * An estimate rounded for reporting: u to two significant digits, value and interval to the same place (at most 4
+ * decimals); an interval of non-zero width whose ends would round to one number has them rounded outwards instead
+ * (a fill a salt that barely dissolves changes by microkelvins is not reported as exact).
+ */
 function rounded(e: Estimate): { value: number; low: number; high: number; u: number } {
-  if (!(e.u > 0)) return { value: r(e.value, 4), low: r(e.low, 4), high: r(e.high, 4), u: 0 };
-  const { value, u, exponent } = roundToUncertainty(e.value, e.u);
+  const { value, u, exponent } = e.u > 0 ? roundToUncertainty(e.value, e.u) : { value: e.value, u: 0, exponent: -4 };
   const ex = Math.max(exponent, -4);
-  return { value: r(ex === exponent ? value : roundToExponent(e.value, ex), 6), low: r(roundToExponent(e.low, ex), 6), high: r(roundToExponent(e.high, ex), 6), u: r(u, 6) };
+  let low = roundToExponent(e.low, ex);
+  let high = roundToExponent(e.high, ex);
+  if (low === high && e.high > e.low) {
+    const step = 10 ** ex;
+    low = Math.floor(e.low / step + 1e-9) * step;
+    high = Math.ceil(e.high / step - 1e-9) * step;
+  }
+  return { value: r(ex === exponent ? value : roundToExponent(e.value, ex), 6), low: r(low, 6), high: r(high, 6), u: r(u, 6) };
 }
 
 function design(d: PackDesignPoint) {

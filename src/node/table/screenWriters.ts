@@ -9,7 +9,7 @@ import type { Estimate } from '../../quantity/estimate.js';
 import { formulaText, formulasInText } from '../../notation/formula.js';
 import { withTrueMinus } from '../../notation/minus.js';
 import { wrapText } from '../../notation/wrapText.js';
-import { formatEstimate } from '../../quantity/formatEstimate.js';
+import { formatEstimate, TEMPERATURE_RESOLUTION_K } from '../../quantity/formatEstimate.js';
 import { compareRanked, isRankable, type RankKey } from '../../screen/rankRows.js';
 import type { ScreenRow, ScreenSettings, ScreenSummary } from '../../screen/screenRow.js';
 import { textTable, textTableLines } from '../cli/textTable.js';
@@ -53,10 +53,10 @@ export function jsonWriter(settings: ScreenSettings): StreamWriter {
   };
 }
 
-/** `34.89 [34.50, 35.28]`: value and 95 % interval with the decimals the uncertainty allows. */
+/** `34.89 [34.50, 35.28]`: value and 95 % interval with the decimals the uncertainty allows (a temperature to 0.01 K at finest). */
 export function estimateText(e: Estimate | undefined, withUnit = false): string {
   if (!e) return '—';
-  const f = formatEstimate(e);
+  const f = formatEstimate(e, e.unit === '°C' ? { resolution: TEMPERATURE_RESOLUTION_K } : {});
   return `${f.value} [${f.low}, ${f.high}]${withUnit ? ` ${e.unit}` : ''}`;
 }
 
