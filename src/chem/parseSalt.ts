@@ -27,7 +27,11 @@ import { typoSuggestion, typoSuspicion } from './typoSuspicion.js';
  * `1` for `l`, a lower-case letter where a symbol fits, an ion rarely met such
  * as azide) while one such edit gives a salt the tables measure is refused
  * with `SUSPECTED_TYPO` and the salt probably meant (`KN03`: did you mean
- * KNO₃?); a formula that does not read at all names what it probably meant.
+ * KNO₃?); a formula that does not read at all names what it probably meant
+ * (swapped, doubled or dropped characters, letter case, several look-alikes,
+ * a hydrate's dot written as a space or left out: `MgOS4`, `nacl`,
+ * `CaCl26H2O`). A formula valid as written that is probably a slip (`LiN3`,
+ * an azide, for `LiNO3`) reads, and `dissolve` carries the suspicion.
  *
  * Never throws anything but {@link IonheatError}: codes `EMPTY_FORMULA`,
  * `FORMULA_TOO_LONG`, `UNEXPECTED_CHARACTER`, `UNMATCHED_PARENTHESIS`,

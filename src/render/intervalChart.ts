@@ -39,7 +39,14 @@ export interface IntervalChartOptions {
 
 /** What the chart needs of a screen: its settings and its rows (ranked rows carry `rank`). */
 export interface ChartableScreen {
-  settings: { objective: ObjectiveName; direction: Direction; fill?: FillSpec | null; spec?: string | null };
+  settings: {
+    objective: ObjectiveName;
+    direction: Direction;
+    fill?: FillSpec | null;
+    spec?: string | null;
+    /** The numbers the spec holds the objective to (a screen's settings carry them); each is drawn as a line. */
+    specThresholds?: readonly ChartMark[];
+  };
   rows: readonly ScreenRow[];
   /** The counts of the whole run, when `rows` holds only some of the rows (a streamed screen keeps only the best). */
   summary?: { read: number; computed: number; failed: number; excluded: number };
@@ -70,6 +77,21 @@ function inputsLine(settings: ChartableScreen['settings']): string {
   const fill = f ? `fill: ${formatNumber(f.saltMassG)} g of each salt in ${formatNumber(f.waterMassG)} g water, start ${formatNumber(f.startC)} °C` : 'no standard fill';
   const spec = settings.spec ? `spec: ${settings.spec}` : 'no spec';
   return `Inputs — ${fill}; ${spec}`;
+}
+
+/**
+ * The lines to draw: the spec's thresholds from the screen's own settings, the start temperature of the standard
+ * fill where the chart ranks by the temperature it reaches, then the caller's marks; a line given twice is drawn once.
+ */
+function chartMarks(settings: ChartableScreen['settings'], extra: readonly ChartMark[]): ChartMark[] {
+  const f = settings.fill;
+  const start = f && settings.objective === 'fill-temperature' ? [{ at: f.startC, label: `start ${formatNumber(f.startC)} °C (fill ${formatNumber(f.saltMassG)} g salt in ${formatNumber(f.waterMassG)} g water)` }] : [];
+  const out: ChartMark[] = [];
+  for (const m of [...(settings.specThresholds ?? []), ...start, ...extra]) {
+    if (!Number.isFinite(m.at) || out.some((o) => o.at === m.at && (o.label === m.label || m.label.startsWith('spec:')))) continue;
+    out.push({ at: m.at, label: m.label });
+  }
+  return out;
 }
 
 /** A value marker of a given basis, centred on (x, y), of half-size r. */
@@ -103,7 +125,10 @@ function valueText(e: Estimate): string {
  * that work the other way (greyed). Each row shows the 95 % interval as a
  * bar, the value as a marker whose shape gives the basis (circle measured,
  * square cycle, diamond anchored, triangle model; legend at the top), and the
- * numbers at the right. A vertical line marks zero, and any `marks` given.
+ * numbers at the right. A vertical line marks zero; dashed lines mark each
+ * threshold the screen's spec sets on the objective (`settings.specThresholds`,
+ * as {@link screen} returns them), the start temperature of the standard fill
+ * when ranking by the temperature it reaches, and any `marks` given.
  * The axis is drawn at the top and the bottom, so eighty rows read as well
  * as ten; with more than ten rows it spans every value but leaves out the
  * widest tenth of the interval ends at each side (such a bar ends in an
@@ -122,6 +147,10 @@ function valueText(e: Estimate): string {
  * svg.startsWith('<svg'); // true
  * svg.includes('KNO₃'); // true
  * svg.includes('kJ/mol'); // true
+ * // a hot-pack screen with a fill and a spec: the spec's threshold and the fill's start are drawn from the result
+ * const hot = intervalChart(screen(['CaCl2', 'MgSO4', 'LiCl'], { direction: 'heat', fill: '30:100@20', spec: 'fill.finalTemperature.value > 40' }));
+ * hot.includes('spec: fill.finalTemperature.value &gt; 40'); // true
+ * hot.includes('start 20 °C'); // true
  * ```
  */
 export function intervalChart(result: ChartableScreen, options?: IntervalChartOptions): string {
@@ -154,7 +183,7 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
   const left = labelW;
   const right = width - valueW - 16;
 
-  const marks = [...(options.marks ?? [])].filter((m) => Number.isFinite(m.at));
+  const marks = chartMarks(result.settings, options.marks ?? []);
   // Domain: the values that matter, zero and every mark, and the interval ends near them. A wild value or interval
   // is clipped at the axis (an arrow, and its numbers stand whole at the right), so one exotic model row cannot
   // squeeze every other row into a few pixels.
@@ -263,8 +292,9 @@ function draw(result: ChartableScreen, options: IntervalChartOptions): string {
       if (right - x(0) > textWidth(cools, 11) + 8) overlay.push(text(x(0) + 6, hintY, cools, { class: 'small', fill: palette.cold }));
     } else overlay.push(text(x(0) + 4, hintY, objective === 'fill-temperature' ? '0 °C' : 'zero', { class: 'small', 'font-weight': '600' }));
   }
-  marks.forEach((m, i) => {
-    // Each mark's label on a line of its own above the zero hints, turned to the left where it would run off the chart.
+  // Each mark's label on a line of its own above the zero hints, the rightmost lowest: a line then runs down only past
+  // labels that start to its right, never through one. A label that would run off the chart turns to the left.
+  [...marks].sort((a, b) => b.at - a.at).forEach((m, i) => {
     const ly = hintY - 14 * (i + 1);
     const leftward = x(m.at) + 4 + textWidth(m.label, 11) > width - 8;
     overlay.push(el('line', { x1: x(m.at), y1: ly + 3, x2: x(m.at), y2: bodyBottom, stroke: palette.limit, 'stroke-width': 1.5, 'stroke-dasharray': '6 3' }));

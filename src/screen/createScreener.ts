@@ -33,6 +33,7 @@ import { latentWarmer } from '../warmer/latentWarmer.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
 import { screenSources } from './screenSources.js';
 import { RepeatIndex } from './repeatIndex.js';
+import { specThresholds } from './specThresholds.js';
 import { caution } from '../quantity/caution.js';
 import {
   directionSchema,
@@ -249,7 +250,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
           schema: screenSpecSchema(),
           unavailable: { ...(fill === null ? { fill: 'no standard fill was given' } : {}), ...(wantsWarmer ? {} : { warmer: 'the standard warmer is computed only when ranking by a warmer objective' }) },
         });
-  const settings: ScreenSettings = { objective, direction, fill, spec: spec?.text ?? null, excludeMeasured };
+  const settings: ScreenSettings = { objective, direction, fill, spec: spec?.text ?? null, excludeMeasured, specThresholds: specThresholds(spec?.text, objective) };
 
   const results = new BoundedCache<string, Computed>(CACHE_LIMIT);
   const datasets = new BoundedCache<string, Dataset>(DATASET_CACHE_LIMIT);

@@ -154,6 +154,9 @@ export const screenSettingsSchema = z.strictObject({
   fill: fillSpecSchema.nullable(),
   spec: z.string().nullable(),
   excludeMeasured: z.boolean(),
+  specThresholds: z
+    .array(z.strictObject({ at: z.number(), label: z.string() }))
+    .describe("the numbers the spec holds the ranked quantity to, in the objective's unit, with the comparison as written (drawn on the screen chart)"),
 });
 export type ScreenSettings = z.infer<typeof screenSettingsSchema>;
 

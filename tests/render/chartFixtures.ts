@@ -1,7 +1,6 @@
 // One set of charts drawn from varied inputs (hot and cold, bands near the thresholds, clamps, every cycle
 // unknown, screens with outliers, a fill and a spec), shared by the layout checks and the PNG rendering.
 import { bornHaberCycle, cycleDiagram, intervalChart, latentWarmer, packCurveSvg, packRatioCurve, packTimeCourse, screen, timeCourseSvg, warmerCourseSvg } from '../../src/index.js';
-import { specThresholds } from '../../src/screen/specThresholds.js';
 import { basisChart } from '../../src/render/basisChart.js';
 import { dissolve } from '../../src/index.js';
 
@@ -32,7 +31,10 @@ export function chartFixtures(): Chart[] {
   add('course-KNO3-cold-air-equals-skin', timeCourseSvg(packTimeCourse({ solids: [{ formula: 'KNO3', massG: 20 }], waterG: 100 }, { ambientC: 30, skinC: 31, samples: 60 })));
   const spec = 'fill.finalTemperature.value < 12';
   const withSpec = screen(['KNO3', 'NH4Cl', 'NaCl', 'NH4NO3', 'CaCl2', 'KCl', 'CO(NH2)2', 'NaCH3COO·3H2O', 'Li2S', 'Na2Se'], { objective: 'fill-temperature', fill: '30:100@22', spec });
-  add('screen-fill-spec', intervalChart(withSpec, { marks: specThresholds(spec, 'fill-temperature') }));
+  // The spec's threshold and the fill's start come from the screen result itself, not from marks passed in.
+  add('screen-fill-spec', intervalChart(withSpec));
+  const hotSpec = screen(['CaCl2', 'MgSO4', 'LiCl', 'Na2CO3', 'MgCl2', 'CaCl2·6H2O', 'KNO3'], { direction: 'heat', fill: '30:100@20', spec: 'fill.finalTemperature.value > 40 and fill.finalTemperature.high < 60' });
+  add('screen-hot-fill-spec-window', intervalChart(hotSpec));
   const outliers = screen(['KNO3', 'NH4Cl', 'NaCl', 'KCl', 'NH4NO3', 'Li2S', 'K2Se', 'Na2Se', { formula: 'LiF', measuredEnthalpy: 5, measuredUncertainty: 300 }], { objective: 'heat-per-gram' });
   add('screen-heat-per-gram-outliers', intervalChart(outliers));
   add('screen-hot-enthalpy', intervalChart(screen(['CaCl2', 'MgSO4', 'LiCl', 'Na2CO3', 'KNO3', 'NaOH', 'MgCl2', 'NaCH3COO'], { direction: 'heat' })));

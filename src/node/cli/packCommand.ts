@@ -208,7 +208,7 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
   out.push(`change              ${formatNumber(r(result.temperatureChange, 2), { plus: true })} K${result.clamp ? `   (${result.clamp.kind} clamp)` : ''}\n`);
   out.push(
     textTable(
-      ['solid', 'loaded g', 'dissolved g', 'undissolved g', 'mol/kg', 'ΔsolH(m) kJ/mol', 'heat kJ'],
+      ['solid', 'loaded g', 'dissolved g', 'undissolved g', 'mol/kg', 'ΔsolH(m) kJ/mol', 'absorbed kJ'],
       result.dissolved.map((d) => [
         formulaText(d.formula),
         d.loadedMass.toFixed(2),

@@ -9,7 +9,6 @@ import { constants as osConstants } from 'node:os';
 import { Readable } from 'node:stream';
 import { IonheatError } from '../../error.js';
 import { intervalChart } from '../../render/intervalChart.js';
-import { specThresholds } from '../../screen/specThresholds.js';
 import { createScreener } from '../../screen/createScreener.js';
 import { enumerate } from '../../screen/enumerate.js';
 import { parseFillSpec } from '../../screen/parseFillSpec.js';
@@ -216,7 +215,7 @@ export const screenCommand: Command = {
     let chartFailure: IonheatError | undefined;
     if (chartTarget !== undefined && fatal === undefined) {
       const rows = rankRows(best.sort((a, b) => compareRanked(a, b, settings.objective, settings.direction)).slice(0, CHART_ROWS), settings.objective, settings.direction);
-      const svg = intervalChart({ settings, rows, summary }, { maxRows: CHART_ROWS, marks: specThresholds(settings.spec, settings.objective) });
+      const svg = intervalChart({ settings, rows, summary }, { maxRows: CHART_ROWS });
       try {
         writeFileSafely(chartTarget, svg, 'the chart', '--svg');
       } catch (e) {

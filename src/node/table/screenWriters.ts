@@ -73,7 +73,8 @@ function cellsOf(row: ScreenRow, settings: ScreenSettings, withCost: boolean): s
   if (withCost) cells.push(estimateText(row.costPerKJ));
   cells.push(row.hazards && row.hazards.length > 0 ? row.hazards.join(', ') : row.hazardData === 'no hazard data' ? 'no hazard data' : row.hazardData === 'not classified' ? 'none classified' : '');
   if (settings.spec !== null) cells.push(row.spec ? (row.spec.holds ? 'holds' : `fails: ${row.spec.reason ?? ''}`) : '');
-  const notes = [status, row.duplicateOf !== undefined ? `same as line ${row.duplicateOf}` : '', row.input.note ?? ''].filter((s) => s !== '');
+  const typo = row.suspectedTypo ? `suspected typo: did you mean ${row.suspectedTypo.suggestion}? (computed as written)` : '';
+  const notes = [status, typo, row.duplicateOf !== undefined ? `same as line ${row.duplicateOf}` : '', row.input.note ?? ''].filter((s) => s !== '');
   cells.push(notes.join('; '));
   return cells;
 }

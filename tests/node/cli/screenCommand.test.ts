@@ -260,7 +260,7 @@ describe('ionheat screen: JSON output and the shipped JSON Schema', () => {
     const r = await run(['screen', 'mixed.csv', '--format', 'json']);
     const document = JSON.parse(r.out);
     expect(document.version).toBe(1);
-    expect(document.settings).toEqual({ objective: 'enthalpy', direction: 'cool', fill: null, spec: null, excludeMeasured: false });
+    expect(document.settings).toEqual({ objective: 'enthalpy', direction: 'cool', fill: null, spec: null, excludeMeasured: false, specThresholds: [] });
     expect(document.rows.map((x: { line: number }) => x.line)).toEqual([2, 3, 4, 6, 7, 9, 10, 11]);
     expect(document.summary).toEqual({ read: 8, computed: 4, failed: 4, excluded: 0, blankLines: 2, specHeld: 0, specFailed: 0 });
     expect(document.rows[1].error.code).toBe('UNKNOWN_ELEMENT');
