@@ -6,8 +6,10 @@
 // CRC table's own relation ΔH_L = U_POT + [a(n_M/2 − 2) + b(n_X/2 − 2)]RT
 // turns them into lattice enthalpies.
 import { describe, expect, it } from 'vitest';
-import { cycleLatticeEnthalpy, latticeEnthalpyCorrection, latticeEstimate, latticeMethods, parseSalt } from '../../src/index.js';
+import { latticeEstimate, latticeMethods, parseSalt } from '../../src/index.js';
 import reference from '../reference/lattice-crc.json' with { type: 'json' };
+import { cycleLatticeEnthalpy } from '../../src/cycle/cycleLatticeEnthalpy.js';
+import { latticeEnthalpyCorrection } from '../../src/lattice/latticeEnthalpyCorrection.js';
 
 const rows = reference.records.map((r) => {
   const salt = parseSalt(r.formula);

@@ -1,6 +1,7 @@
 // Cautions carried by every pack result.
 import { describe, expect, it } from 'vitest';
-import { builtinDataset, packCautions, packFinalTemperature, parseSalt, saltHazards, SCREENING_LINE } from '../../src/index.js';
+import { builtinDataset, packFinalTemperature, parseSalt, saltHazards } from '../../src/index.js';
+import { SCREENING_LINE, packCautions } from '../../src/pack/packCautions.js';
 
 const salts = (...f: string[]) => f.map((x) => parseSalt(x));
 
