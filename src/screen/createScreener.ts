@@ -442,7 +442,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         hazards: hazards.classes,
         cautions: hazards.statements,
         hazardData: hazards.data,
-        ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
+        ...(pack ? { fill: pack } : {}),
         ...(warmerRow ? { warmer: warmerRow } : {}),
         suitability: typo ? 'undetermined' : suitabilityOf(result.verdict, direction),
         ...(typo ? { suspectedTypo: { suggestion: typo.suggestion, message: typo.message } } : {}),
