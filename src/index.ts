@@ -16,20 +16,17 @@
 
 // Errors and the shared result shape
 export { IonheatError, isIonheatError, errorCodes, type ErrorCode, type ErrorContext } from './error.js';
-export { makeEstimate, roundEstimate, probabilityPositive, basisOrder, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
-export { estimateSchema, basisSchema } from './quantity/estimateSchema.js';
+export { makeEstimate, roundEstimate, probabilityPositive, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
 export { formatEstimate, type FormattedEstimate } from './quantity/formatEstimate.js';
 export { roundToUncertainty } from './quantity/rounding.js';
-export { cautionLine, CAUTION_KINDS, CAUTION_SEVERITIES, type Caution, type CautionKind, type CautionSeverity } from './quantity/caution.js';
-export { cautionSchema, cautionKindSchema, cautionSeveritySchema } from './quantity/cautionSchema.js';
+export { cautionLine, type Caution, type CautionKind, type CautionSeverity } from './quantity/caution.js';
 export * as constants from './quantity/constants.js';
 
 // Data
 export { type Tables, type TableOverrides, type OverrideProblem } from './data/dataset.js';
 export { Dataset, builtinDataset } from './data/recordCheck.js';
 export type { BoundedCache } from './data/boundedCache.js';
-export * as schemas from './data/schemas.js';
-export { tableSchemas, type TableName, type TableRecord, type TableFile, type IonRecord, type SourceEntry, type StructureType, type HazardClass, type HazardRecord } from './data/schemas.js';
+export type { TableName, TableRecord, TableFile, IonRecord, SourceEntry, StructureType, HazardClass, HazardRecord } from './data/schemas.js';
 
 // The salt model
 export { parseSalt } from './chem/parseSalt.js';
@@ -37,35 +34,24 @@ export { formatSalt } from './chem/formatSalt.js';
 export { findIon } from './chem/ionIndex.js';
 export { molarMass } from './chem/molarMass.js';
 export { chargeType, ionsPerFormulaUnit, type Salt, type SaltIon } from './chem/salt.js';
-export { saltSchema, saltIonSchema } from './chem/saltSchema.js';
 
 // Lattice enthalpy
 export { latticeEstimate, tryLatticeEstimate, latticeEstimates, latticeMethods, type LatticeMethod, type LatticeEstimateOptions } from './lattice/latticeEstimate.js';
+export type { LatticeModel } from './lattice/latticeModel.js';
 export { bestLatticeEstimate } from './lattice/bestLatticeEstimate.js';
-export { latticeCalibration, type LatticeCalibration, type ModelCalibration, type CalibrationResidual, type CalibrationStats, type CationCore, type SaltIonKind, type Sums } from './lattice/latticeCalibration.js';
-export type { LatticeModel, LatticeModelOptions, ModelPoint } from './lattice/latticeModel.js';
-export type { IonShape } from './lattice/latticeIons.js';
-export { kapustinskii, KAPUSTINSKII_CONSTANT, KAPUSTINSKII_RHO } from './lattice/kapustinskii.js';
+export { kapustinskii } from './lattice/kapustinskii.js';
 export { bornLande } from './lattice/bornLande.js';
-export { bornMayer, BORN_MAYER_RHO } from './lattice/bornMayer.js';
+export { bornMayer } from './lattice/bornMayer.js';
 export { vbtLatticeEnergy } from './lattice/vbtLatticeEnergy.js';
-export { glasserLatticeEnergy, GLASSER_CONSTANT } from './lattice/glasserLatticeEnergy.js';
-export { latticeEnthalpyCorrection } from './lattice/latticeEnthalpyCorrection.js';
-export { formulaUnitVolume } from './lattice/formulaUnitVolume.js';
-export { ewaldMadelung, type PointChargeCell, type EwaldOptions, type MadelungResult, type Vec3 } from './lattice/ewaldMadelung.js';
-export { idealCell, idealCellTypes } from './lattice/idealCell.js';
+export { glasserLatticeEnergy } from './lattice/glasserLatticeEnergy.js';
 
 // The Born–Haber cycle
-export { bornHaberCycle, cycleUnknowns, type BornHaberCycle, type BornHaberOptions, type CycleUnknown, type KnownValue } from './cycle/bornHaberCycle.js';
-export { cycleLatticeEnthalpy, type CycleLatticeOptions } from './cycle/cycleLatticeEnthalpy.js';
-export { thermalElectronEnthalpy } from './cycle/thermalElectronEnthalpy.js';
+export { bornHaberCycle, type BornHaberCycle, type BornHaberOptions, type CycleUnknown, type KnownValue } from './cycle/bornHaberCycle.js';
 export type { CycleStep, CycleStepKind } from './cycle/cycleStep.js';
 
 // Hydration
-export { saltHydrationEnthalpy, saltHydrationTerms, type SaltHydrationOptions } from './hydration/saltHydration.js';
+export { saltHydrationEnthalpy, type SaltHydrationOptions } from './hydration/saltHydration.js';
 export { ionHydrationEnthalpy, type HydrationScale, type HydrationTerm, type ProtonScale } from './hydration/ionHydration.js';
-export { bornHydrationEnthalpy, type BornCalibration, type BornClass, type BornRadius } from './hydration/bornHydration.js';
-export { gaseousIonFormationEnthalpy } from './hydration/gaseousIonFormation.js';
 
 // Solubility from a solubility product
 export { solubilityFromProduct, type SolubilityFromProduct } from './brine/solubilityFromProduct.js';
@@ -73,16 +59,9 @@ export { solubilityFromProduct, type SolubilityFromProduct } from './brine/solub
 // The enthalpy of solution
 export { brineFreezingPoint } from './brine/brineFreezingPoint.js';
 export { dissolve, type DissolveOptions, type DissolveResult } from './solution/dissolve.js';
+export type { HypotheticalHydrate, HypotheticalReason } from './solution/knownHydrates.js';
 export { integralEnthalpyOfSolution } from './solution/integralEnthalpy.js';
 export { solutionVerdict, type Verdict } from './solution/verdict.js';
-export { measuredSolutionEnthalpy } from './solution/measuredSolution.js';
-export { solutionEnthalpyFromCycle } from './solution/cycleSolution.js';
-export { anchoredSolutionEnthalpies, type AnchorSet, type AnchorCombination } from './solution/anchoredSolution.js';
-export type { AnchorSalt } from './solution/anchorIndex.js';
-export type { SaltIonClass } from './lattice/saltIonClass.js';
-export type { HypotheticalHydrate, HypotheticalReason } from './solution/knownHydrates.js';
-export { solutionEnthalpyFromModel } from './solution/modelSolution.js';
-export { hydrateFromParent, hydrateRuleScatter, WATER_OF_CRYSTALLIZATION_ENTHALPY, type HydrateRuleInput, type HydrateRuleScatter } from './solution/hydrateRule.js';
 export { kirchhoffCorrection, solutionHeatCapacity } from './solution/solutionHeatCapacity.js';
 export { heatPerGramOfSalt, heatPerGramOfFill, saturatedFill, type SaturatedFill } from './solution/heatPerGram.js';
 
@@ -93,11 +72,11 @@ export type { TemperatureInterval } from './pack/finalTemperatureInterval.js';
 export { packRatioCurve, ratioForTargetTemperature, ratioForLargestChangePerGram, type PackRatioCurve, type PackCurvePoint, type PackDesignPoint, type PackTargetDesign, type PackCurveOptions } from './pack/packRatioCurve.js';
 export { packDesignMargin, FROSTBITE_THRESHOLD_C, type PackDesignMargin, type TemperatureBand } from './pack/designMargin.js';
 export { packTimeCourse, type PackTimeCourse, type TimeCourseOptions, type TimeCourseParameter, type TimeCoursePoint } from './pack/packTimeCourse.js';
-export { packCautions, CONTACT_BURN_THRESHOLD_C, SCREENING_LINE, type CautionInput } from './pack/packCautions.js';
-export { saltHazards, hazardCoverage, type HazardCoverage } from './solution/saltHazards.js';
+export { CONTACT_BURN_THRESHOLD_C } from './pack/packCautions.js';
+export { saltHazards } from './solution/saltHazards.js';
 export { solubilityCurve, solubilityAt, type SolubilityCurve, type SolubilityPoint, type SolubilityAt } from './pack/solubilityCurve.js';
 export { saltSolubility, type SaltSolubility, type SolubilityStatus } from './pack/saltSolubility.js';
-export { freezingPointOfSolution, WATER_CRYOSCOPIC_CONSTANT } from './pack/freezingPoint.js';
+export { freezingPointOfSolution } from './pack/freezingPoint.js';
 
 // Latent-heat warmers (supercooled salt-hydrate melts)
 export { latentWarmer, type WarmerFill, type WarmerOptions, type WarmerResult, type WarmerPoint } from './warmer/latentWarmer.js';
@@ -108,13 +87,12 @@ export { screenStream } from './screen/screenStream.js';
 export { createScreener, type Screener, type ScreenOptions, type ScreenFilters } from './screen/createScreener.js';
 export { enumerate, type EnumerateFilters } from './screen/enumerate.js';
 export { compileSpec, type CompiledSpec, type CompileSpecOptions } from './screen/compileSpec.js';
-export { parseSpec, type SpecNode, type SpecSpan, type ComparisonOp, type ArithmeticOp, type SpecFunction } from './screen/specParse.js';
 export { hazardSummary, type HazardSummary } from './screen/hazardSummary.js';
 export { parseFillSpec } from './screen/parseFillSpec.js';
-export { candidateInputSchema, type CandidateInput, type CandidateLike } from './screen/candidate.js';
+export type { CandidateInput, CandidateLike } from './screen/candidate.js';
 export { screenOutputJsonSchema } from './screen/screenOutputJsonSchema.js';
 export type { ObjectiveSource } from './screen/screenObjective.js';
-export { screenRowSchema, screenSummarySchema, screenDocumentSchema, screenSettingsSchema, specOutcomeSchema, rowErrorSchema, fillResultSchema, directionSchema, objectiveNameSchema, suitabilitySchema, fillSpecSchema, type ScreenRow, type ScreenSummary, type ScreenDocument, type ScreenSettings, type Direction, type ObjectiveName, type Suitability, type FillSpec, type SpecOutcome } from './screen/screenRow.js';
+export type { ScreenRow, ScreenSummary, ScreenDocument, ScreenSettings, Direction, ObjectiveName, Suitability, FillSpec, SpecOutcome } from './screen/screenRow.js';
 
 // Charts (standalone SVG text)
 export { cycleDiagram, type CycleDiagramOptions } from './render/cycleDiagram.js';

@@ -111,7 +111,7 @@ function affinityUnknown(salt: Salt, dataset: Dataset): { ion: string; element: 
  * element), successive ionization energies, electron affinities (the second
  * ones of O, S and Se from the tabulated ΔfH° of the gaseous dianion),
  * gaseous polyatomic ions from their tabulated formation enthalpies, the
- * thermal electron term of {@link thermalElectronEnthalpy} where it does not
+ * thermal electron term of `thermalElectronEnthalpy` where it does not
  * cancel, the lattice step (−ΔH_L) and the formation enthalpy:
  *
  *   ΔfH°(MₚXₙ, cr) = Σ(atomization + ionization + attachment steps) − ΔH_L

@@ -201,8 +201,8 @@ export class Dataset {
    *   'my-values.json',
    *   { myLab: { citation: 'Our calorimeter, run 12', kind: 'derived' } },
    * );
-   * measuredSolutionEnthalpy(parseSalt('KNO3', mine), mine).value; // 34.9
-   * measuredSolutionEnthalpy(parseSalt('KNO3')).value; // 34.89 (the built-in table is unchanged)
+   * dissolve('KNO3', {}, mine).best.value; // 34.9
+   * dissolve('KNO3').best.value; // 34.89 (the built-in table is unchanged)
    * ```
    */
   withOverrides(overrides: TableOverrides, label: string, sources: Record<string, SourceEntry> = {}, checks: { problems?: readonly OverrideProblem[]; refuseConflicts?: boolean } = {}): Dataset {

@@ -42,8 +42,7 @@ export const idealCellTypes = ['rock-salt', 'caesium-chloride', 'zinc-blende', '
  *
  * @example
  * ```ts
- * ewaldMadelung(idealCell('rock-salt')).madelung; // 1.747565
- * ewaldMadelung(idealCell('caesium-chloride')).madelung; // 1.762675
+ * idealCell('rock-salt').sites.length; // 8
  * idealCell('fluorite').sites.length; // 12
  * ```
  */

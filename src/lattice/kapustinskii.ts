@@ -28,7 +28,7 @@ export const KAPUSTINSKII_RHO = 0.345;
  * 4935, 1995).
  *
  * This is a lattice *energy* U (static lattice), positive for crystal →
- * gaseous ions; {@link latticeEnthalpyCorrection} turns it into the lattice
+ * gaseous ions; `latticeEnthalpyCorrection` turns it into the lattice
  * enthalpy at 298.15 K.
  *
  * @param chargeFactor - ν|z₊z₋| = Σnᵢzᵢ² (dimensionless; 2 for NaCl, 6 for CaF₂)

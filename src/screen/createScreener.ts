@@ -444,7 +444,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         hazards: hazards.classes,
         cautions: typo ? [caution('suspected-typo', 'warning', `Suspected typo: ${typo.message}. The values given are those of ${salt.formula} as read; the row is ranked as undetermined.`), ...result.cautions] : result.cautions,
         hazardData: hazards.data,
-        ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
+        ...(pack ? { fill: pack } : {}),
         ...(warmerRow ? { warmer: warmerRow } : {}),
         suitability: typo ? 'undetermined' : suitabilityOf(result.verdict, direction),
         ...(typo ? { suspectedTypo: { suggestion: typo.suggestion, message: typo.message } } : {}),

@@ -13,6 +13,7 @@ import { saltSchema } from '../chem/saltSchema.js';
 import { hazardClassSchema } from '../data/schemas.js';
 import { candidateInputSchema } from './candidate.js';
 import { cautionSchema } from '../quantity/cautionSchema.js';
+import type { PackResult } from '../pack/packFinalTemperature.js';
 
 /** Which way the pack should go: `cool` wants an endothermic salt, `heat` an exothermic one. */
 export const directionSchema = z.enum(['cool', 'heat']);
@@ -133,7 +134,8 @@ export const screenRowSchema = z
     spec: specOutcomeSchema.optional(),
   })
   .describe('one candidate of a screen');
-export type ScreenRow = z.infer<typeof screenRowSchema>;
+/** The row as the schema describes it, with `fill` the pack model's own result type, so that the two cannot drift apart. */
+export type ScreenRow = { [K in keyof z.infer<typeof screenRowSchema> as K extends 'fill' ? never : K]: z.infer<typeof screenRowSchema>[K] } & { fill?: PackResult };
 
 /** The counts of a run: nothing is dropped without being counted. */
 export const screenSummarySchema = z.strictObject({

@@ -365,11 +365,11 @@ function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
  *   tabulated formation enthalpies;
  * - `anchored`: from related salts with measured or cycle values — the
  *   four-salt difference with a lattice-model bracket (one estimate per
- *   lattice estimator, see {@link anchoredSolutionEnthalpies}), and for a
+ *   lattice estimator, see `anchoredSolutionEnthalpies`), and for a
  *   hydrate or anhydrous salt the difference rule from the nearest other
  *   form of the same salt (method `difference-rule`);
  * - `model`: a calibrated lattice estimate plus the hydration sum (one per
- *   lattice method, see {@link solutionEnthalpyFromModel}); wide by nature.
+ *   lattice method, see `solutionEnthalpyFromModel`); wide by nature.
  *
  * A hydrate without values of its own gets the anchored and model
  * estimates of its anhydrous salt carried over by the difference rule.

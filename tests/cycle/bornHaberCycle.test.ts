@@ -3,9 +3,11 @@
 // the NaCl cycle at about 787 kJ/mol (common practice; the CRC lattice-energy
 // table gives U_POT = 790 kJ/mol, i.e. ΔH_L = 790 − RT ≈ 787.5, from memory).
 import { describe, expect, it } from 'vitest';
-import { bornHaberCycle, cycleLatticeEnthalpy, IonheatError, thermalElectronEnthalpy } from '../../src/index.js';
+import { bornHaberCycle, IonheatError } from '../../src/index.js';
 import { gaseousIon } from '../../src/cycle/gaseousIon.js';
 import { RT_STANDARD } from '../../src/quantity/constants.js';
+import { cycleLatticeEnthalpy } from '../../src/cycle/cycleLatticeEnthalpy.js';
+import { thermalElectronEnthalpy } from '../../src/cycle/thermalElectronEnthalpy.js';
 
 const code = (f: () => unknown): string | undefined => {
   try {

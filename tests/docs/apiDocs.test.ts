@@ -102,10 +102,38 @@ function tagText(tag: ts.JSDocTag): string {
 
 const documented = documentedExports();
 
+/**
+ * The runtime names of `ionheat`, deliberately: what users call and the constants they compare with. Internals
+ * (estimator calibrations, the bases of dissolve one by one, Ewald cells, the spec syntax tree, zod schemas) stay
+ * inside; a name added or removed here is a change of the public face, and goes into the CHANGELOG.
+ */
+const PUBLIC_VALUES = [
+  'CONTACT_BURN_THRESHOLD_C', 'DEFAULT_START_C', 'Dataset', 'FROSTBITE_THRESHOLD_C', 'IonheatError', 'bestLatticeEstimate', 'bornHaberCycle', 'bornLande',
+  'bornMayer', 'brineFreezingPoint', 'builtinDataset', 'cautionLine', 'chargeType', 'compileSpec', 'constants', 'createScreener', 'cycleDiagram', 'dissolve', 'enumerate',
+  'errorCodes', 'findIon', 'formatEstimate', 'formatSalt', 'freezingPointOfSolution', 'glasserLatticeEnergy', 'hazardSummary', 'heatPerGramOfFill',
+  'heatPerGramOfSalt', 'integralEnthalpyOfSolution', 'intervalChart', 'ionHydrationEnthalpy', 'ionsPerFormulaUnit', 'isIonheatError', 'kapustinskii',
+  'kirchhoffCorrection', 'latentWarmer', 'latticeEstimate', 'latticeEstimates', 'latticeMethods', 'makeEstimate', 'molarMass', 'packCurveSvg',
+  'packDesignMargin', 'packFinalTemperature', 'packRatioCurve', 'packTimeCourse', 'parseFillSpec', 'parseSalt', 'probabilityPositive',
+  'ratioForLargestChangePerGram', 'ratioForTargetTemperature', 'roundEstimate', 'roundToUncertainty', 'saltHazards', 'saltHydrationEnthalpy',
+  'saltSolubility', 'saturatedFill', 'screen', 'screenOutputJsonSchema', 'screenStream', 'solubilityAt', 'solubilityCurve', 'solubilityFromProduct',
+  'solutionHeatCapacity', 'solutionVerdict', 'timeCourseSvg', 'tryLatticeEstimate', 'vbtLatticeEnergy', 'warmerCourseSvg',
+];
+
+describe('the public face', () => {
+  it('exports exactly the deliberate list of values', () => {
+    expect(Object.keys(core).sort()).toEqual([...PUBLIC_VALUES].sort());
+  });
+  it('exports no zod schema and no internal numerics', () => {
+    const values = core as Record<string, unknown>;
+    for (const [name, value] of Object.entries(values)) expect(typeof value === 'object' && value !== null && 'safeParse' in value, `${name} is a zod schema`).toBe(false);
+    for (const internal of ['normalCdf', 'ewaldMadelung', 'idealCell', 'parseSpec', 'latticeCalibration', 'packCautions']) expect(values[internal]).toBeUndefined();
+  });
+});
+
 describe('TSDoc of every exported function', () => {
   it('finds the public functions of both entries', () => {
     // A floor, so that a broken scan (finding nothing) cannot pass.
-    expect(documented.filter((d) => d.entry === 'ionheat').length).toBeGreaterThan(60);
+    expect(documented.filter((d) => d.entry === 'ionheat').length).toBeGreaterThan(50);
     expect(documented.filter((d) => d.entry === 'ionheat/node').map((d) => d.name)).toEqual(
       expect.arrayContaining(['loadDataset', 'applyOverrideDocument', 'parseJsonStrict', 'runCli']),
     );

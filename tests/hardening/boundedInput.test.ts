@@ -17,10 +17,11 @@
  * - Every other regular expression in these files runs over the program's own messages, not over user text.
  */
 import { describe, expect, it } from 'vitest';
-import { isIonheatError, parseSalt, parseSpec } from '../../src/index.js';
+import { isIonheatError, parseSalt } from '../../src/index.js';
 import { parseFillSpec } from '../../src/screen/parseFillSpec.js';
 import { compileSpec } from '../../src/screen/compileSpec.js';
 import { hostileCases } from '../../src/node/scripts/hostileCases.js';
+import { parseSpec } from '../../src/screen/specParse.js';
 
 /** The error code of `f`, or 'ok' when it returns. */
 function outcome(f: () => unknown): string {

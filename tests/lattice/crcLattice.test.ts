@@ -7,8 +7,10 @@
 // say fromMemory: false. The CRC table's own relation
 // ΔH_L = U_POT + [a(n_M/2 − 2) + b(n_X/2 − 2)]RT turns them into lattice enthalpies.
 import { describe, expect, it } from 'vitest';
-import { cycleLatticeEnthalpy, latticeEnthalpyCorrection, latticeEstimate, latticeMethods, parseSalt } from '../../src/index.js';
+import { latticeEstimate, latticeMethods, parseSalt } from '../../src/index.js';
 import reference from '../reference/lattice-crc.json' with { type: 'json' };
+import { cycleLatticeEnthalpy } from '../../src/cycle/cycleLatticeEnthalpy.js';
+import { latticeEnthalpyCorrection } from '../../src/lattice/latticeEnthalpyCorrection.js';
 import crcThermo from '../reference/chemicals-crc-thermo.json' with { type: 'json' };
 import pymatgenAtomic from '../reference/pymatgen-atomic.json' with { type: 'json' };
 

@@ -4,8 +4,10 @@
 // five decimals as stated in the issue: rock salt 1.747565, caesium chloride
 // 1.762675, zinc blende 1.638055, fluorite 2.519392).
 import { describe, expect, it } from 'vitest';
-import { builtinDataset, ewaldMadelung, idealCell, IonheatError, type PointChargeCell, type Vec3 } from '../../src/index.js';
+import { builtinDataset, IonheatError } from '../../src/index.js';
 import { erfc } from '../../src/lattice/ewaldMadelung.js';
+import { ewaldMadelung, type PointChargeCell, type Vec3 } from '../../src/lattice/ewaldMadelung.js';
+import { idealCell } from '../../src/lattice/idealCell.js';
 
 const published = [
   ['rock-salt', 1.747565],

@@ -1,9 +1,11 @@
 // The estimator kernels against hand evaluations of their published equations.
 import { describe, expect, it } from 'vitest';
-import { bornLande, bornMayer, formulaUnitVolume, glasserLatticeEnergy, kapustinskii, latticeEnthalpyCorrection, vbtLatticeEnergy } from '../../src/index.js';
+import { bornLande, bornMayer, glasserLatticeEnergy, kapustinskii, vbtLatticeEnergy } from '../../src/index.js';
 import { shortestDistance } from '../../src/lattice/latticeStructure.js';
 import { studentQuantile975 } from '../../src/numeric/studentQuantile.js';
 import { RT_STANDARD } from '../../src/quantity/constants.js';
+import { formulaUnitVolume } from '../../src/lattice/formulaUnitVolume.js';
+import { latticeEnthalpyCorrection } from '../../src/lattice/latticeEnthalpyCorrection.js';
 
 describe('Kapustinskii (1956 form: K = 1.2025e−4 J·m/mol, ρ = 0.345 Å; Kapustinskii, Q. Rev. Chem. Soc. 10, 283)', () => {
   it('evaluates K·ν|z₊z₋|/d·(1 − ρ/d)', () => {

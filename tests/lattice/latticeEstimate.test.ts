@@ -1,9 +1,12 @@
 // The public lattice API: estimates with calibrated intervals, the cycle
 // lattice enthalpy, leave-one-out coverage, trends, and errors.
 import { describe, expect, it } from 'vitest';
-import { builtinDataset, cycleLatticeEnthalpy, IonheatError, kapustinskii, latticeCalibration, latticeEnthalpyCorrection, latticeEstimate, latticeEstimates, latticeMethods, parseSalt } from '../../src/index.js';
+import { builtinDataset, IonheatError, kapustinskii, latticeEstimate, latticeEstimates, latticeMethods, parseSalt } from '../../src/index.js';
 import { calibrationStats } from '../../src/lattice/latticeCalibration.js';
 import { RT_STANDARD } from '../../src/quantity/constants.js';
+import { cycleLatticeEnthalpy } from '../../src/cycle/cycleLatticeEnthalpy.js';
+import { latticeCalibration } from '../../src/lattice/latticeCalibration.js';
+import { latticeEnthalpyCorrection } from '../../src/lattice/latticeEnthalpyCorrection.js';
 
 const dataset = builtinDataset();
 

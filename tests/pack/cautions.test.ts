@@ -1,6 +1,8 @@
 // Cautions carried by every pack result.
 import { describe, expect, it } from 'vitest';
-import { builtinDataset, cautionLine, cautionSchema, packCautions, packFinalTemperature, parseSalt, saltHazards, SCREENING_LINE } from '../../src/index.js';
+import { builtinDataset, cautionLine, packFinalTemperature, parseSalt, saltHazards } from '../../src/index.js';
+import { cautionSchema } from '../../src/quantity/cautionSchema.js';
+import { SCREENING_LINE, packCautions } from '../../src/pack/packCautions.js';
 
 const salts = (...f: string[]) => f.map((x) => parseSalt(x));
 

@@ -11,13 +11,14 @@
 //   → c(water) = 75.291 / 18.015 = 4.17935 J/(g·K); 100 g of water holds 417.935 J/K.
 // A check holds to 0.01 K: the hand arithmetic below keeps 5–6 significant digits.
 import { describe, expect, it } from 'vitest';
-import { CONTACT_BURN_THRESHOLD_C, packFinalTemperature, SCREENING_LINE } from '../../src/index.js';
+import { CONTACT_BURN_THRESHOLD_C, packFinalTemperature } from '../../src/index.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { integralEnthalpyOfSolution } from '../../src/solution/integralEnthalpy.js';
 import { aqueousHeatCapacity, solidHeatCapacity } from '../../src/pack/solidHeatCapacity.js';
 import { brineModel } from '../../src/brine/brineModel.js';
 import { relativeApparentHeatCapacity } from '../../src/brine/pitzerBrine.js';
 import { brineFreezingPoint } from '../../src/brine/brineFreezingPoint.js';
+import { SCREENING_LINE } from '../../src/pack/packCautions.js';
 
 const WATER_100G = (100 * 75.291) / 18.015; // J/K
 

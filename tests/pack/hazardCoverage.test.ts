@@ -4,9 +4,11 @@
 // opinion on lithium salts (echaRacLithium2021), or typical supplier safety data sheets (supplierSds); records say
 // fromMemory where the classification was not checked against a copy.
 import { describe, expect, it } from 'vitest';
-import { builtinDataset, createScreener, Dataset, enumerate, hazardCoverage, hazardSummary, parseSalt, tableSchemas, type TableName } from '../../src/index.js';
+import { builtinDataset, createScreener, Dataset, enumerate, hazardSummary, parseSalt, type TableName } from '../../src/index.js';
 import { textTableOf } from '../../src/node/table/screenWriters.js';
 import hazardsFile from '../../data/hazards.json';
+import { hazardCoverage } from '../../src/solution/saltHazards.js';
+import { tableSchemas } from '../../src/data/schemas.js';
 
 const data = builtinDataset();
 const records = data.records('hazards.json');

@@ -1,25 +1,10 @@
 // Issue 12, item 2: a misspelt or unknown key in any public option object or fill is an error naming the key
 // and the nearest valid one, never ignored in favour of the default.
 import { describe, expect, it } from 'vitest';
-import {
-  bestLatticeEstimate,
-  bornHaberCycle,
-  compileSpec,
-  createScreener,
-  dissolve,
-  enumerate,
-  ewaldMadelung,
-  idealCell,
-  isIonheatError,
-  latticeEstimate,
-  packFinalTemperature,
-  packRatioCurve,
-  packTimeCourse,
-  parseSalt,
-  saltHydrationEnthalpy,
-  screen,
-} from '../../src/index.js';
+import { bestLatticeEstimate, bornHaberCycle, compileSpec, createScreener, dissolve, enumerate, isIonheatError, latticeEstimate, packFinalTemperature, packRatioCurve, packTimeCourse, parseSalt, saltHydrationEnthalpy, screen } from '../../src/index.js';
 import { editDistance, nearestName } from '../../src/quantity/nearestName.js';
+import { ewaldMadelung } from '../../src/lattice/ewaldMadelung.js';
+import { idealCell } from '../../src/lattice/idealCell.js';
 
 function caught(f: () => unknown): { code: string; field: string | undefined; message: string } {
   try {

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { candidateInputSchema, isIonheatError } from '../../src/index.js';
+import { isIonheatError } from '../../src/index.js';
 import { readCandidate } from '../../src/screen/candidate.js';
+import { candidateInputSchema } from '../../src/screen/candidate.js';
 
 describe('readCandidate', () => {
   it('reads CSV cells: decimal text for numbers, empty cells absent, text trimmed (notes kept as written)', () => {

@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { builtinDataset, createScreener, dissolve, enumerate, measuredSolutionEnthalpy, parseSalt, screen, screenRowSchema, screenStream } from '../../src/index.js';
+import { builtinDataset, createScreener, dissolve, enumerate, parseSalt, screen, screenStream } from '../../src/index.js';
 import { costPerKJ } from '../../src/screen/costPerKJ.js';
 import { rankRows } from '../../src/screen/rankRows.js';
+import { measuredSolutionEnthalpy } from '../../src/solution/measuredSolution.js';
+import { screenRowSchema } from '../../src/screen/screenRow.js';
 
 describe('screen', () => {
   it('gives one row per candidate, in input order, with line numbers and ranks', () => {

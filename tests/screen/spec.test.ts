@@ -4,9 +4,10 @@
 import { readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { compileSpec, isIonheatError, parseSpec } from '../../src/index.js';
+import { compileSpec, isIonheatError } from '../../src/index.js';
 import { screenSpecSchema } from '../../src/screen/screenOutputJsonSchema.js';
 import { SPEC_MAX_LENGTH } from '../../src/screen/specTokenize.js';
+import { parseSpec } from '../../src/screen/specParse.js';
 
 // A row shaped like the JSON output (numbers invented for the grammar test, not chemistry).
 const row = {

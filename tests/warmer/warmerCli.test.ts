@@ -4,7 +4,7 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { cautionSchema } from '../../src/index.js';
+import { cautionSchema } from '../../src/quantity/cautionSchema.js';
 import { runCliInMemory } from '../node/runCliInMemory.js';
 
 const run = (args: string[], cwd = process.cwd()) => runCliInMemory(args, { cwd });
