@@ -67,8 +67,11 @@ export async function screenOutcome(request: ScreenRequest, dataset: Dataset, pr
     records = once(salts.map((salt, i): InputRecord => ({ kind: 'candidate', line: i + 1, candidate: salt })));
   } else {
     const { text, name } = request.source;
+    // As the command line decides: by the file's extension, else (pasted text) by its first character.
+    const lower = name.toLowerCase();
     const first = text.replace(/^\uFEFF/, '').trimStart()[0];
-    if (first === '[' || first === '{') {
+    const json = lower.endsWith('.json') || (!lower.endsWith('.csv') && !lower.endsWith('.txt') && (first === '[' || first === '{'));
+    if (json) {
       records = jsonCandidateRecords(text.replace(/^\uFEFF/, ''), name);
       columns = () => undefined;
     } else {

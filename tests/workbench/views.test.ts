@@ -91,6 +91,15 @@ describe('the workbench panels, computed in Node', () => {
       });
     }
 
+    it('a JSON candidate list, with a row that is neither a formula nor an object, as the command line reads it', async () => {
+      const list = '[\n  "KNO3",\n  {"formula": "NaCl", "note": "table salt"},\n  5\n]\n';
+      writeFileSync(join(dir, 'list.json'), list);
+      const o = await screenOutcome({ source: { kind: 'text', text: list, name: 'list.json' } }, dataset);
+      expect(o.json).toBe((await runCliInMemory(['screen', 'list.json', '--json'], { cwd: dir })).out);
+      expect(o.csv).toBe((await runCliInMemory(['screen', 'list.json', '--format', 'csv'], { cwd: dir })).out);
+      expect(o.summary.failed).toBe(1);
+    });
+
     it('every built-in salt, enumerated, as the command line enumerates them', async () => {
       const ticks: number[] = [];
       const o = await screenOutcome({ source: { kind: 'enumerate' } }, dataset, (done) => ticks.push(done));
