@@ -16,15 +16,17 @@
 
 // Errors and the shared result shape
 export { IonheatError, isIonheatError, errorCodes, type ErrorCode, type ErrorContext } from './error.js';
-export { makeEstimate, roundEstimate, probabilityPositive, normalCdf, estimateSchema, basisSchema, basisOrder, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
+export { makeEstimate, roundEstimate, probabilityPositive, basisOrder, type Estimate, type EstimateInput, type Basis } from './quantity/estimate.js';
+export { estimateSchema, basisSchema } from './quantity/estimateSchema.js';
 export { formatEstimate, type FormattedEstimate } from './quantity/formatEstimate.js';
 export { roundToUncertainty } from './quantity/rounding.js';
+export { cautionLine, cautionSchema, cautionKindSchema, cautionSeveritySchema, type Caution, type CautionKind, type CautionSeverity } from './quantity/caution.js';
 export * as constants from './quantity/constants.js';
 
 // Data
-export { Dataset, type Tables, type TableOverrides, type OverrideProblem } from './data/dataset.js';
+export { type Tables, type TableOverrides, type OverrideProblem } from './data/dataset.js';
+export { Dataset, builtinDataset } from './data/recordCheck.js';
 export type { BoundedCache } from './data/boundedCache.js';
-export { builtinDataset } from './data/builtin.js';
 export * as schemas from './data/schemas.js';
 export { tableSchemas, type TableName, type TableRecord, type TableFile, type IonRecord, type SourceEntry, type StructureType, type HazardClass, type HazardRecord } from './data/schemas.js';
 
@@ -33,7 +35,8 @@ export { parseSalt } from './chem/parseSalt.js';
 export { formatSalt } from './chem/formatSalt.js';
 export { findIon } from './chem/ionIndex.js';
 export { molarMass } from './chem/molarMass.js';
-export { chargeType, ionsPerFormulaUnit, saltSchema, saltIonSchema, type Salt, type SaltIon } from './chem/salt.js';
+export { chargeType, ionsPerFormulaUnit, type Salt, type SaltIon } from './chem/salt.js';
+export { saltSchema, saltIonSchema } from './chem/saltSchema.js';
 
 // Lattice enthalpy
 export { latticeEstimate, tryLatticeEstimate, latticeEstimates, latticeMethods, type LatticeMethod, type LatticeEstimateOptions } from './lattice/latticeEstimate.js';
@@ -84,13 +87,13 @@ export { heatPerGramOfSalt, heatPerGramOfFill, saturatedFill, type SaturatedFill
 
 // Pack design
 export { packFinalTemperature, type PackResult, type PackDissolvedSolid, type PackHeat, type PackHeatCapacity, type PackClamp } from './pack/packFinalTemperature.js';
-export { DEFAULT_START_C, type PackFill, type PackSolid, type PackOptions, type PackIntervalOptions } from './pack/packFill.js';
+export { DEFAULT_START_C, type PackFill, type PackSolid, type PackOptions, type PackIntervalOptions } from './pack/packInput.js';
 export type { TemperatureInterval } from './pack/finalTemperatureInterval.js';
 export { packRatioCurve, ratioForTargetTemperature, ratioForLargestChangePerGram, type PackRatioCurve, type PackCurvePoint, type PackDesignPoint, type PackTargetDesign, type PackCurveOptions } from './pack/packRatioCurve.js';
 export { packDesignMargin, FROSTBITE_THRESHOLD_C, type PackDesignMargin, type TemperatureBand } from './pack/designMargin.js';
 export { packTimeCourse, type PackTimeCourse, type TimeCourseOptions, type TimeCourseParameter, type TimeCoursePoint } from './pack/packTimeCourse.js';
 export { packCautions, CONTACT_BURN_THRESHOLD_C, SCREENING_LINE, type CautionInput } from './pack/packCautions.js';
-export { saltHazards, hazardCoverage, type HazardCoverage } from './pack/saltHazards.js';
+export { saltHazards, hazardCoverage, type HazardCoverage } from './solution/saltHazards.js';
 export { solubilityCurve, solubilityAt, type SolubilityCurve, type SolubilityPoint, type SolubilityAt } from './pack/solubilityCurve.js';
 export { saltSolubility, type SaltSolubility, type SolubilityStatus } from './pack/saltSolubility.js';
 export { freezingPointOfSolution, WATER_CRYOSCOPIC_CONSTANT } from './pack/freezingPoint.js';

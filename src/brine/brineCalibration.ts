@@ -110,5 +110,5 @@ export function brineCalibration(dataset: Dataset = builtinDataset()): BrineCali
 
 /** The calibrated scales alone. */
 export function discrepancyScalesOf(dataset: Dataset = builtinDataset()): { scales: DiscrepancyScales } {
-  return { scales: brineCalibration(dataset).scales };
+  return { scales: dataset.memo('brine.discrepancyScales', () => brineCalibration(dataset).scales) };
 }

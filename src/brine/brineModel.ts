@@ -15,9 +15,11 @@ import type { Salt } from '../chem/salt.js';
 import type { PitzerParameters } from './pitzerBrine.js';
 import { brineRecords, chargeScaleOf, chargeTypeEstimate, saltCharges, splice } from './brineParameterSets.js';
 import { discrepancyScalesOf } from './brineCalibration.js';
+import { nonElectrolyteRecords } from './brineParameterSets.js';
+import type { NonElectrolyteParameters } from './nonElectrolyteBrine.js';
 
 /** How a salt's brine parameters were found. */
-export type BrineBasis = 'pitzer' | 'pitzer-with-estimated-temperature-terms' | 'charge-type-estimate' | 'non-electrolyte-estimate';
+export type BrineBasis = 'pitzer' | 'pitzer-with-estimated-temperature-terms' | 'charge-type-estimate' | 'non-electrolyte' | 'non-electrolyte-estimate';
 
 /** Scales of the model discrepancy, per mol/kg of molality (standard uncertainties). */
 export interface DiscrepancyScales {
@@ -35,8 +37,14 @@ export interface BrineModel {
   basis: BrineBasis;
   /** Ions per formula unit in solution (1 for a non-electrolyte). */
   particles: number;
-  /** Pitzer parameters; undefined for a non-electrolyte (φ = 1, φL = φJ = 0 with the discrepancy). */
+  /** Pitzer parameters; undefined for a non-electrolyte. */
   pitzer: PitzerParameters | undefined;
+  /** A non-electrolyte's own series (urea); undefined for a salt and for a non-electrolyte without data (φ = 1, φL = φJ = 0 with the discrepancy). */
+  nonElectrolyte?: NonElectrolyteParameters;
+  /** Relative standard uncertainty of φL inside the fitted range, where the data give their own (else FIT_ALLOWANCE.enthalpyRelative). */
+  enthalpyRelativeU?: number;
+  /** Relative standard uncertainty of φ inside the fitted range, where the data give their own (added to the fit allowance). */
+  osmoticRelativeU?: number;
   /** Own data for φ, for φL and for φJ (else the estimate stands in, with its discrepancy). */
   own: { osmotic: boolean; enthalpy: boolean; heatCapacity: boolean };
   /** Highest molality of the own fit, mol/kg (0 without own data). */
@@ -50,8 +58,16 @@ export interface BrineModel {
   notes: string[];
 }
 
-/** Allowance for the fit itself inside its range: relative part and per-molality part (assumed, see docs/methods.md). */
-export const FIT_ALLOWANCE = { osmoticPerMolality: 0.005, osmoticPerMolalityKelvin: 0.0006, enthalpyRelative: 0.03, enthalpyPerMolality: 20, heatCapacityRelative: 0.05, heatCapacityPerMolality: 2 } as const;
+/**
+ * Allowance for the fit itself inside its range: relative part and per-molality part (assumed, see docs/methods.md).
+ * The heat-capacity part grows as √m and with the charge type (c = ν|zMzX|/2): 8 J/(mol·K) per c·√(mol/kg) is the
+ * smallest whole number for which φCp° + φJ covers 90 % of the apparent molar heat capacities of Laliberté (2009)
+ * at 25 °C, 1–6 mol/kg, for the salts with their own heat-capacity terms (tests/brine/apparentHeatCapacity.test.ts).
+ * Away from 25 °C the osmotic part grows by 0.0006 per K and mol/kg, or by 0.0015 where the temperature terms are the
+ * charge-type estimate: the smallest that takes in the CRC freezing points of KNO3 (0.05–1.1 mol/kg, to −2.8 °C), which
+ * the 1:1 temperature terms put up to 0.23 K too low (docs/brine-validation.md).
+ */
+export const FIT_ALLOWANCE = { osmoticPerMolality: 0.005, osmoticPerMolalityKelvin: 0.0006, osmoticPerMolalityKelvinEstimated: 0.0015, enthalpyRelative: 0.03, enthalpyPerMolality: 20, heatCapacityRelative: 0.05, heatCapacityPerRootMolality: 8 } as const;
 
 /**
  * Discrepancy scales of a non-electrolyte without data: assumed, not
@@ -66,7 +82,7 @@ export const NON_ELECTROLYTE_SCALES: DiscrepancyScales = { osmotic: 0.02, enthal
  * @param dataset - the Pitzer table (default: built-in)
  */
 export function brineModel(salt: Salt, dataset: Dataset = builtinDataset()): BrineModel {
-  const cache = dataset.memo('brine.models', () => new Map<string, BrineModel>());
+  const cache = dataset.cache<string, BrineModel>('brine.models');
   const key = salt.anhydrous;
   let model = cache.get(key);
   if (!model) {
@@ -80,6 +96,26 @@ function buildModel(salt: Salt, dataset: Dataset): BrineModel {
   const scales = discrepancyScalesOf(dataset);
   const particles = salt.ions.reduce((n, i) => n + i.count, 0);
   const z = saltCharges(salt);
+  const nonElectrolyte = salt.kind === 'ionic' ? undefined : nonElectrolyteRecords(dataset).get(salt.anhydrous);
+  if (nonElectrolyte) {
+    const { record, parameters } = nonElectrolyte;
+    return {
+      formula: salt.anhydrous,
+      basis: 'non-electrolyte',
+      particles: 1,
+      pitzer: undefined,
+      nonElectrolyte: parameters,
+      enthalpyRelativeU: record.enthalpy.relativeUncertainty,
+      osmoticRelativeU: record.osmotic.relativeUncertainty,
+      own: { osmotic: true, enthalpy: true, heatCapacity: false },
+      maxMolality: Math.min(record.osmotic.maxMolality, record.enthalpy.maxMolality),
+      scales: NON_ELECTROLYTE_SCALES,
+      chargeScale: 0.5,
+      sources: [...new Set([record.osmotic.source, record.enthalpy.source])],
+      fromMemory: record.osmotic.fromMemory || record.enthalpy.fromMemory,
+      notes: [`${salt.anhydrous}: osmotic coefficient and φL from its own series (data/brine-pitzer.json); φJ is taken as zero with the assumed discrepancy`],
+    };
+  }
   if (!z) {
     return {
       formula: salt.anhydrous,

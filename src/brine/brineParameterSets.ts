@@ -9,7 +9,8 @@ import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { tableFormulaSalt } from '../chem/tableFormulaSalt.js';
 import type { Salt } from '../chem/salt.js';
-import type { BrinePitzerRecord } from '../data/schemas.js';
+import type { BrinePitzerRecord, NonElectrolyteBrineRecord } from '../data/schemas.js';
+import type { NonElectrolyteParameters } from './nonElectrolyteBrine.js';
 import { hasTemperatureDependence, pitzerCoefficients, type PitzerCoefficients } from './pitzerTemperature.js';
 import type { PitzerParameters } from './pitzerBrine.js';
 import type { WaterConstants } from './waterPhases.js';
@@ -72,6 +73,24 @@ export function brineRecords(dataset: Dataset = builtinDataset()): readonly Brin
     }
     // Table order must not change a result (sums of floats): keep the sets in formula order.
     return out.sort((a, b) => (a.formula < b.formula ? -1 : a.formula > b.formula ? 1 : 0));
+  });
+}
+
+/** The non-electrolytes of the table with their series, by the anhydrous formula of the solute, per dataset. */
+export function nonElectrolyteRecords(dataset: Dataset = builtinDataset()): ReadonlyMap<string, { record: NonElectrolyteBrineRecord; parameters: NonElectrolyteParameters }> {
+  return dataset.memo('brine.nonElectrolytes', () => {
+    // The envelope's extra field is validated by its schema; its static type is not carried through `table()`.
+    const list = (dataset.table('brine-pitzer.json') as unknown as { nonElectrolytes?: NonElectrolyteBrineRecord[] } | undefined)?.nonElectrolytes ?? [];
+    const out = new Map<string, { record: NonElectrolyteBrineRecord; parameters: NonElectrolyteParameters }>();
+    for (const record of list) {
+      const salt = tableFormulaSalt(record.formula, dataset);
+      if (!salt || salt.kind === 'ionic') continue;
+      out.set(salt.anhydrous, {
+        record,
+        parameters: { osmotic: Float64Array.from(record.osmotic.coefficients), enthalpy: Float64Array.from(record.enthalpy.coefficients), referenceK: record.osmotic.referenceTemperature },
+      });
+    }
+    return out;
   });
 }
 

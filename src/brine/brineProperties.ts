@@ -16,6 +16,7 @@ import { FIT_ALLOWANCE, type BrineModel } from './brineModel.js';
 import { apparentFromTerms, enthalpyTerms, heatCapacityTerms, osmoticCoefficient, osmoticCoefficientWith, relativeApparentEnthalpy, relativeApparentHeatCapacity } from './pitzerBrine.js';
 import { debyeHuckelOsmotic, REFERENCE_K } from './debyeHuckelSlopes.js';
 import { pitzerAt } from './pitzerTemperature.js';
+import { nonElectrolyteEnthalpy, nonElectrolyteOsmotic, nonElectrolyteOsmoticTerms, nonElectrolyteOsmoticWith, powerSeries } from './nonElectrolyteBrine.js';
 
 /** Molality past the model's own range (all of it without own data). */
 function excess(model: BrineModel, m: number, own: boolean): number {
@@ -24,6 +25,7 @@ function excess(model: BrineModel, m: number, own: boolean): number {
 
 /** φ at m (mol/kg), T (K). */
 export function brineOsmotic(model: BrineModel, m: number, tK: number): number {
+  if (model.nonElectrolyte) return nonElectrolyteOsmotic(model.nonElectrolyte, m, tK);
   return model.pitzer ? osmoticCoefficient(model.pitzer, m, tK) : 1;
 }
 
@@ -32,6 +34,7 @@ export function brineOsmotic(model: BrineModel, m: number, tK: number): number {
  * β², Cᵠ), for {@link brineOsmoticWith} at many molalities.
  */
 export function brineOsmoticTerms(model: BrineModel, tK: number, out: Float64Array): void {
+  if (model.nonElectrolyte) return nonElectrolyteOsmoticTerms(model.nonElectrolyte, tK, out);
   const p = model.pitzer;
   if (!p) return;
   out[0] = debyeHuckelOsmotic(tK);
@@ -43,17 +46,23 @@ export function brineOsmoticTerms(model: BrineModel, tK: number, out: Float64Arr
 
 /** φ at m from the terms {@link brineOsmoticTerms} wrote. */
 export function brineOsmoticWith(model: BrineModel, m: number, terms: Float64Array): number {
+  if (model.nonElectrolyte) return nonElectrolyteOsmoticWith(m, terms);
   return model.pitzer ? osmoticCoefficientWith(model.pitzer, m, terms[0]!, terms[1]!, terms[2]!, terms[3]!, terms[4]!) : 1;
 }
 
-/** Standard uncertainty of φ at m (mol/kg) and tK (the fit allowance grows away from 25 °C, where most parameters were fitted). */
+/** Standard uncertainty of φ at m (mol/kg) and tK (the fit allowance grows away from the temperature of the fit: 25 °C for the Pitzer sets, the series' own reference for a non-electrolyte). */
 export function brineOsmoticU(model: BrineModel, m: number, tK = REFERENCE_K): number {
-  const fit = model.own.osmotic ? (FIT_ALLOWANCE.osmoticPerMolality + FIT_ALLOWANCE.osmoticPerMolalityKelvin * Math.abs(tK - REFERENCE_K)) * Math.min(m, model.maxMolality) : 0;
+  // A non-electrolyte's series is fitted to freezing points (at and below its reference): only warmer is extrapolated.
+  const away = model.nonElectrolyte ? Math.max(0, tK - model.nonElectrolyte.referenceK) : Math.abs(tK - REFERENCE_K);
+  const ownScatter = model.osmoticRelativeU ? model.osmoticRelativeU * brineOsmotic(model, Math.min(m, model.maxMolality), tK) : 0;
+  const perKelvin = model.basis === 'pitzer-with-estimated-temperature-terms' ? FIT_ALLOWANCE.osmoticPerMolalityKelvinEstimated : FIT_ALLOWANCE.osmoticPerMolalityKelvin;
+  const fit = model.own.osmotic ? ownScatter + (FIT_ALLOWANCE.osmoticPerMolality + perKelvin * away) * Math.min(m, model.maxMolality) : 0;
   return fit + model.scales.osmotic * model.chargeScale * excess(model, m, model.own.osmotic);
 }
 
 /** φL, J/mol, at m (mol/kg), T (K). */
 export function brineEnthalpy(model: BrineModel, m: number, tK: number): number {
+  if (model.nonElectrolyte) return nonElectrolyteEnthalpy(model.nonElectrolyte, m);
   return model.pitzer ? relativeApparentEnthalpy(model.pitzer, m, tK) : 0;
 }
 
@@ -64,12 +73,17 @@ export function brineEnthalpyU(model: BrineModel, m: number, tK: number): number
 
 /** u(φL) from φL at min(m, the fitted range) already known (J/mol). */
 export function enthalpyAllowance(model: BrineModel, m: number, phiLInRange: number): number {
-  const fit = model.own.enthalpy ? FIT_ALLOWANCE.enthalpyRelative * Math.abs(phiLInRange) + FIT_ALLOWANCE.enthalpyPerMolality * Math.min(m, model.maxMolality) : 0;
+  const fit = model.own.enthalpy ? (model.enthalpyRelativeU ?? FIT_ALLOWANCE.enthalpyRelative) * Math.abs(phiLInRange) + FIT_ALLOWANCE.enthalpyPerMolality * Math.min(m, model.maxMolality) : 0;
   return fit + model.scales.enthalpy * model.chargeScale * excess(model, m, model.own.enthalpy);
 }
 
 /** The terms of φL (`kind` 'enthalpy') or φJ ('heatCapacity') at tK into `out` (five numbers), for the *With kernels. */
 export function brineApparentTerms(model: BrineModel, kind: 'enthalpy' | 'heatCapacity', tK: number, out: Float64Array): void {
+  if (model.nonElectrolyte) {
+    // φL = Σ hᵢ·mⁱ independent of T; φJ = 0.
+    for (let i = 0; i < out.length; i++) out[i] = kind === 'enthalpy' ? (model.nonElectrolyte.enthalpy[i] ?? 0) : 0;
+    return;
+  }
   if (!model.pitzer) return;
   if (kind === 'enthalpy') enthalpyTerms(model.pitzer, tK, out);
   else heatCapacityTerms(model.pitzer, tK, out);
@@ -77,6 +91,7 @@ export function brineApparentTerms(model: BrineModel, kind: 'enthalpy' | 'heatCa
 
 /** φL (J/mol) or φJ (J/(mol·K)) at m from terms at tK written by {@link brineApparentTerms}. */
 export function brineApparentWith(model: BrineModel, m: number, tK: number, terms: Float64Array): number {
+  if (model.nonElectrolyte) return m <= 0 ? 0 : powerSeries(terms, m);
   return model.pitzer ? apparentFromTerms(model.pitzer, m, tK, terms) : 0;
 }
 
@@ -85,8 +100,9 @@ export function brineHeatCapacity(model: BrineModel, m: number, tK: number): num
   return model.pitzer ? relativeApparentHeatCapacity(model.pitzer, m, tK) : 0;
 }
 
-/** Standard uncertainty of φJ, J/(mol·K). */
+/** Standard uncertainty of φJ, J/(mol·K): inside the fitted range 5 % of φJ + 8·c·√m (checked against Laliberté 2009, see FIT_ALLOWANCE). */
 export function brineHeatCapacityU(model: BrineModel, m: number, tK: number): number {
-  const fit = model.own.heatCapacity ? FIT_ALLOWANCE.heatCapacityRelative * Math.abs(brineHeatCapacity(model, Math.min(m, model.maxMolality), tK)) + FIT_ALLOWANCE.heatCapacityPerMolality * Math.min(m, model.maxMolality) : 0;
+  const inRange = Math.min(m, model.maxMolality);
+  const fit = model.own.heatCapacity ? FIT_ALLOWANCE.heatCapacityRelative * Math.abs(brineHeatCapacity(model, inRange, tK)) + FIT_ALLOWANCE.heatCapacityPerRootMolality * model.chargeScale * Math.sqrt(inRange) : 0;
   return fit + model.scales.heatCapacity * model.chargeScale * excess(model, m, model.own.heatCapacity);
 }

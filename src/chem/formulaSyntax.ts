@@ -11,6 +11,7 @@
  * @module
  */
 import { IonheatError } from '../error.js';
+import { plainDigits } from '../notation/formula.js';
 
 /** Longest formula accepted, in characters (the longest real salt formula is far shorter). */
 export const MAX_FORMULA_LENGTH = 200;
@@ -35,7 +36,6 @@ export interface FormulaSyntax {
   water: number;
 }
 
-const SUBSCRIPTS = '₀₁₂₃₄₅₆₇₈₉';
 /** Characters that separate water of crystallization: middle dot, bullet, dot operator, full stop, asterisk. */
 const HYDRATE_SEPARATORS = new Set(['·', '•', '⋅', '∙', '.', '*']);
 
@@ -45,12 +45,7 @@ const isDigit = (c: string): boolean => c >= '0' && c <= '9';
 
 /** Replaces subscript digits with plain ones and trims white space. */
 export function normalizeFormulaText(raw: string): string {
-  let out = '';
-  for (const c of raw.trim()) {
-    const sub = SUBSCRIPTS.indexOf(c);
-    out += sub >= 0 ? String(sub) : c;
-  }
-  return out;
+  return plainDigits(raw.trim());
 }
 
 function fail(code: 'UNEXPECTED_CHARACTER' | 'UNMATCHED_PARENTHESIS' | 'NESTING_TOO_DEEP' | 'BAD_COUNT' | 'EMPTY_FORMULA', message: string, text: string, position: number): never {

@@ -5,43 +5,44 @@
  * @module
  */
 import { isIssuedSalt } from './issuedSalts.js';
-import { z } from 'zod';
 import { IonheatError } from '../error.js';
+import type { Salt } from './saltSchema.js';
 
-export const saltIonSchema = z.strictObject({
-  /** Ion id of the table, e.g. `Ca[2+]`. */
-  ion: z.string(),
-  /** The ion's formula as written in salts, e.g. `NO3`. */
-  formula: z.string(),
-  charge: z.number().int(),
-  /** Ions of this kind per formula unit. */
-  count: z.number().int().positive(),
-});
-export type SaltIon = z.infer<typeof saltIonSchema>;
+export type { Salt, SaltIon } from './saltSchema.js';
 
-export const saltSchema = z.strictObject({
-  /** Canonical formula: cations then anions, in table order; hydrate water after `·`. */
-  formula: z.string(),
-  /** The formula without its water of crystallization. */
-  anhydrous: z.string(),
-  /** `ionic` for a salt; `non-electrolyte` for a molecular solute such as urea. */
-  kind: z.enum(['ionic', 'non-electrolyte']),
-  /** Cations first, then anions (a non-electrolyte has its one molecule here, charge 0). */
-  ions: z.array(saltIonSchema),
-  /** Moles of water of crystallization per formula unit. */
-  water: z.number().nonnegative(),
-  /** Element counts of the whole formula unit, water included, symbols in alphabetical order. */
-  composition: z.record(z.string(), z.number()),
-  /** Molar mass of the formula unit as written (hydrate water included), g/mol. */
-  molarMass: z.number().positive(),
-});
-export type Salt = z.infer<typeof saltSchema>;
+/** Bounds of what the structural functions read of a salt: its ions (formula, charge, count) and its water. Extra keys are allowed. */
+const SALT_SHAPE = { maxCharge: 12, maxCount: 1_000_000, maxWater: 1_000_000 } as const;
 
-/** What the structural functions read of a salt: its ions (formula, charge, count) and its water. Extra keys are allowed. */
-const saltShapeSchema = z.object({
-  ions: z.array(z.object({ formula: z.string(), charge: z.number().int().min(-12).max(12), count: z.number().int().positive().max(1_000_000) })),
-  water: z.number().nonnegative().max(1_000_000),
-});
+const kindOf = (x: unknown): string => (x === null ? 'null' : Array.isArray(x) ? 'array' : typeof x === 'number' && !Number.isFinite(x) ? String(x) : typeof x);
+
+/** The first way `salt` differs from the shape the structural functions read, as [path, message], or undefined. */
+function saltShapeProblem(salt: unknown): [string[], string] | undefined {
+  if (salt === null || typeof salt !== 'object' || Array.isArray(salt)) return [[], `invalid input: expected object, received ${kindOf(salt)}`];
+  const { ions, water } = salt as { ions?: unknown; water?: unknown };
+  if (!Array.isArray(ions)) return [['ions'], `invalid input: expected array, received ${kindOf(ions)}`];
+  for (let i = 0; i < ions.length; i++) {
+    const ion = ions[i] as unknown;
+    if (ion === null || typeof ion !== 'object' || Array.isArray(ion)) return [['ions', String(i)], `invalid input: expected object, received ${kindOf(ion)}`];
+    const { formula, charge, count } = ion as Record<string, unknown>;
+    if (typeof formula !== 'string') return [['ions', String(i), 'formula'], `invalid input: expected string, received ${kindOf(formula)}`];
+    const c = integerProblem(charge, -SALT_SHAPE.maxCharge, SALT_SHAPE.maxCharge);
+    if (c) return [['ions', String(i), 'charge'], c];
+    const n = integerProblem(count, 1, SALT_SHAPE.maxCount);
+    if (n) return [['ions', String(i), 'count'], n];
+  }
+  if (typeof water !== 'number' || !Number.isFinite(water)) return [['water'], `invalid input: expected number, received ${kindOf(water)}`];
+  if (water < 0) return [['water'], 'too small: expected number to be >=0'];
+  if (water > SALT_SHAPE.maxWater) return [['water'], `too big: expected number to be <=${SALT_SHAPE.maxWater}`];
+  return undefined;
+}
+
+function integerProblem(x: unknown, min: number, max: number): string | undefined {
+  if (typeof x !== 'number' || !Number.isFinite(x)) return `invalid input: expected number, received ${kindOf(x)}`;
+  if (!Number.isInteger(x)) return 'invalid input: expected int, received number';
+  if (x < min) return `too small: expected number to be >=${min}`;
+  if (x > max) return `too big: expected number to be <=${max}`;
+  return undefined;
+}
 
 /**
  * Checks that `salt` has the ions and water a {@link Salt} has, else an
@@ -50,11 +51,10 @@ const saltShapeSchema = z.object({
  */
 export function checkSaltShape(salt: unknown, field = 'salt'): void {
   if (isIssuedSalt(salt)) return;
-  const parsed = saltShapeSchema.safeParse(salt);
-  if (parsed.success) return;
-  const issue = parsed.error.issues[0]!;
-  const at = [field, ...issue.path].join('.');
-  throw new IonheatError('INVALID_ARGUMENT', `${field} must be a salt from parseSalt: ${at} ${issue.message.toLowerCase()}`, { field: at });
+  const problem = saltShapeProblem(salt);
+  if (!problem) return;
+  const at = [field, ...problem[0]].join('.');
+  throw new IonheatError('INVALID_ARGUMENT', `${field} must be a salt from parseSalt: ${at} ${problem[1]}`, { field: at });
 }
 
 /**

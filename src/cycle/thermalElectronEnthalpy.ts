@@ -6,6 +6,7 @@
  */
 import { numberArgument } from '../quantity/argumentChecks.js';
 import { GAS_CONSTANT, STANDARD_TEMPERATURE } from '../quantity/constants.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /**
  * The enthalpy that the electrons carry when an ion of signed charge z is
@@ -38,5 +39,5 @@ export function thermalElectronEnthalpy(charge: number, temperature: number = ST
   numberArgument(temperature, 'temperature', 'the temperature in K', { min: 0, above: true, max: 100_000 });
   if (charge === 0) return 0;
   const h = (charge * 2.5 * GAS_CONSTANT * temperature) / 1000;
-  return h === 0 ? 0 : h; // a denormal temperature can underflow to −0
+  return unsignedZero(h); // a denormal temperature can underflow to −0
 }

@@ -7,9 +7,27 @@
  * @module
  */
 import { IonheatError } from '../error.js';
-import { tableSchemas, type SourceEntry, type TableFile, type TableName, type TableRecord } from './schemas.js';
+import type { SourceEntry, TableFile, TableName, TableRecord } from './schemas.js';
 import { tableKeys } from './tableKeys.js';
 import { BoundedCache } from './boundedCache.js';
+import { decodeSnapshot, encodeSnapshot } from './snapshotCodec.js';
+
+/** What checking one record of a user's table against its table's schema gives: the record as read, or its issues. */
+export type RecordCheckResult = { success: true; data: unknown } | { success: false; issues: readonly { path: readonly PropertyKey[]; message: string }[] };
+
+/**
+ * The check of a user's records against the table schemas (recordCheck.ts).
+ * The schemas are zod's, and zod takes longer to load than the rest of a
+ * one-salt command together; so they are installed by the module that holds
+ * them, which the public entry and the reading of users' files load, and a
+ * start that reads no user table never loads them.
+ */
+let checkRecord: ((name: TableName, raw: unknown) => RecordCheckResult) | undefined;
+
+/** Installs the record check (called once by recordCheck.ts). @internal */
+export function installRecordCheck(check: (name: TableName, raw: unknown) => RecordCheckResult): void {
+  checkRecord = check;
+}
 
 /** Entries a per-dataset cache holds by default: salts, formulas or results kept per key. */
 export const DATASET_CACHE_LIMIT = 4096;
@@ -50,8 +68,11 @@ export class Dataset {
   readonly #tables: Tables;
   readonly #sources: Readonly<Record<string, SourceEntry>>;
   readonly #memo = new Map<string, unknown>();
+  readonly #indexes = new Map<TableName, ReadonlyMap<string, unknown>>();
   /** Which override set gave a user's source key (`source:key`) or record (`table:key`). */
   readonly #origins: ReadonlyMap<string, string>;
+  /** Indexes and calibrations computed ahead (when the package was built), by memo key, in the codec's JSON form. */
+  readonly #prebuilt: Readonly<Record<string, unknown>> | undefined;
   /** Where the tables came from, for messages: `built-in`, or the override files' names. */
   readonly label: string;
 
@@ -63,12 +84,15 @@ export class Dataset {
    * @param sources - citations by source key
    * @param label - where the tables came from, for messages
    * @param origins - which override set gave each user source (`source:key`) and record (`table:key`)
+   * @param prebuilt - memo values computed ahead from exactly these tables (see {@link Dataset.memoSnapshot}); a
+   *   dataset with other tables must not be given them
    */
-  constructor(tables: Tables, sources: Readonly<Record<string, SourceEntry>>, label = 'built-in', origins: ReadonlyMap<string, string> = new Map()) {
+  constructor(tables: Tables, sources: Readonly<Record<string, SourceEntry>>, label = 'built-in', origins: ReadonlyMap<string, string> = new Map(), prebuilt?: Readonly<Record<string, unknown>>) {
     this.#tables = deepFreeze({ ...tables });
     this.#sources = deepFreeze({ ...sources });
     this.label = label;
     this.#origins = origins;
+    this.#prebuilt = prebuilt;
   }
 
   /** The records of one table, in table order; empty when the dataset lacks the table. */
@@ -101,15 +125,48 @@ export class Dataset {
   }
 
   /**
+   * The records of a table by their key ({@link tableKeys}: ions by id,
+   * formation enthalpies by ion, Madelung constants by structure …), built
+   * on first use and kept for the dataset's life. Use it rather than a map
+   * of one's own, so that each table is indexed once.
+   */
+  index<N extends TableName>(name: N): ReadonlyMap<string, TableRecord<N>> {
+    let found = this.#indexes.get(name);
+    if (!found) {
+      const keyOf = tableKeys[name] as (r: TableRecord<N>) => string;
+      found = new Map(this.records(name).map((r) => [keyOf(r), r]));
+      this.#indexes.set(name, found);
+    }
+    return found as ReadonlyMap<string, TableRecord<N>>;
+  }
+
+  /**
    * A value derived from this dataset's tables, built on first use and kept
    * for the dataset's life (indexes, calibrations). `key` names the builder.
    */
   memo<T>(key: string, build: () => T): T {
     const found = this.#memo.get(key);
     if (found !== undefined || this.#memo.has(key)) return found as T;
-    const value = build();
+    const value = this.#prebuilt !== undefined && Object.hasOwn(this.#prebuilt, key) ? (decodeSnapshot(this.#prebuilt[key], this) as T) : build();
     this.#memo.set(key, value);
     return value;
+  }
+
+  /**
+   * The memo values under `keys` (those built so far) in the JSON form the
+   * constructor's `prebuilt` takes: how `npm run generate` writes the
+   * indexes and calibrations of the built-in tables ahead. @internal
+   */
+  memoSnapshot(keys: readonly string[]): Record<string, unknown> {
+    const out: Record<string, unknown> = {};
+    const names = Object.keys(this.#tables) as TableName[];
+    for (const key of keys) if (this.#memo.has(key)) out[key] = encodeSnapshot(this.#memo.get(key), this, names);
+    return out;
+  }
+
+  /** The keys of the memo values built so far, in the order they were built. @internal */
+  memoKeys(): string[] {
+    return [...this.#memo.keys()];
   }
 
   /**
@@ -172,8 +229,8 @@ export class Dataset {
     }
     const tables: Tables = { ...this.#tables };
     for (const name of Object.keys(overrides)) {
-      if (!Object.hasOwn(tableSchemas, name)) {
-        found.push({ field: name, message: `"${name}" is not a table ionheat knows${didYouMean(name, Object.keys(tableSchemas))} (known: ${Object.keys(tableSchemas).join(', ')})` });
+      if (!Object.hasOwn(tableKeys, name)) {
+        found.push({ field: name, message: `"${name}" is not a table ionheat knows${didYouMean(name, Object.keys(tableKeys))} (known: ${Object.keys(tableKeys).join(', ')})` });
         continue;
       }
       const tableName = name as TableName;
@@ -238,17 +295,18 @@ function mergeTable<N extends TableName>(
   problems: OverrideProblem[],
   refuseConflicts: boolean,
 ): TableFile<N> {
-  const recordSchema = tableSchemas[name].shape.records.element;
+  if (!checkRecord) throw new Error('the table schemas are not loaded: import Dataset or builtinDataset from the package entry (or src/data/recordCheck.ts) before merging tables');
+  const check = checkRecord;
   const keyOf = tableKeys[name] as (r: TableRecord<N>) => string;
   const seen = new Set<string>();
   const earlier = new Map((base?.records ?? []).map((r) => [keyOf(r as TableRecord<N>), r]));
   const parsed: TableRecord<N>[] = [];
   incoming.forEach((raw, i) => {
     const where = `${name} record ${i + 1}${recordName(raw)}`;
-    const result = recordSchema.safeParse(raw);
+    const result = check(name, raw);
     if (!result.success) {
-      const fields = result.error.issues.map((issue) => `field "${issue.path.join('.') || '(record)'}": ${issue.message}`);
-      problems.push({ field: `${name}[${i}].${result.error.issues[0]!.path.join('.') || '(record)'}`, message: `${where}, ${fields.join(', ')}` });
+      const fields = result.issues.map((issue) => `field "${issue.path.join('.') || '(record)'}": ${issue.message}`);
+      problems.push({ field: `${name}[${i}].${result.issues[0]!.path.join('.') || '(record)'}`, message: `${where}, ${fields.join(', ')}` });
       return;
     }
     const record = result.data as TableRecord<N>;

@@ -12,6 +12,7 @@
  * @module
  */
 import { z } from 'zod';
+import { HAZARD_CLASSES, STRUCTURE_TYPES } from './tableTerms.js';
 
 /** An identifier of an ion, written as formula and bracketed charge: `Na[+]`, `Ca[2+]`, `SO4[2-]`, `CO(NH2)2[0]`. */
 export const ionIdSchema = z
@@ -150,19 +151,7 @@ export const solutionEnthalpyRecordSchema = z.strictObject({
   ...provenance,
 });
 
-export const structureTypeSchema = z.enum([
-  'rock-salt',
-  'caesium-chloride',
-  'zinc-blende',
-  'wurtzite',
-  'fluorite',
-  'antifluorite',
-  'rutile',
-  'cadmium-iodide',
-  'cadmium-chloride',
-  'corundum',
-  'perovskite',
-]);
+export const structureTypeSchema = z.enum(STRUCTURE_TYPES);
 
 export const crystalRecordSchema = z.strictObject({
   formula: formulaTextSchema,
@@ -251,6 +240,34 @@ export const brinePitzerRecordSchema = z.strictObject({
 });
 const waterConstant = z.strictObject({ value: positive, unit: z.string().min(1), ...provenance });
 
+/**
+ * A non-electrolyte solute's brine (urea): the osmotic coefficient as a power series in m at a reference
+ * temperature, φ − 1 = Σ aᵢ·mⁱ, and the relative apparent molar enthalpy φL = Σ hᵢ·mⁱ, each part with its own source.
+ */
+export const nonElectrolyteBrineSchema = z.strictObject({
+  /** The solute as written in the ion table's non-electrolyte list. */
+  formula: formulaTextSchema,
+  osmotic: z.strictObject({
+    /** a₁, a₂, … of φ − 1 = Σ aᵢ·mⁱ, kg^i/mol^i. */
+    coefficients: z.array(finite).min(1).max(5),
+    /** K. */
+    referenceTemperature: positive,
+    /** Highest molality of the fit, mol/kg. */
+    maxMolality: positive,
+    /** Relative standard uncertainty of φ inside maxMolality (the scatter of the fit). */
+    relativeUncertainty: nonNegative,
+    ...provenance,
+  }),
+  enthalpy: z.strictObject({
+    /** h₁, h₂, … of φL = Σ hᵢ·mⁱ, J·kg^i/mol^(i+1), taken as independent of temperature. */
+    coefficients: z.array(finite).min(1).max(5),
+    maxMolality: positive,
+    /** Relative standard uncertainty of φL inside maxMolality. */
+    relativeUncertainty: nonNegative,
+    ...provenance,
+  }),
+});
+
 export const ionizationRecordSchema = z.strictObject({
   element: z.string().regex(/^[A-Z][a-z]?$/),
   /** 1 for M → M⁺, 2 for M⁺ → M²⁺, … */
@@ -319,17 +336,7 @@ export const volumeCoefficientRecordSchema = z.strictObject({
   ...provenance,
 });
 
-export const hazardClassSchema = z.enum([
-  'oxidizer',
-  'irritant',
-  'corrosive',
-  'toxic',
-  'harmful',
-  'environmental',
-  'restricted',
-  'explosive-precursor',
-  'carcinogen',
-]);
+export const hazardClassSchema = z.enum(HAZARD_CLASSES);
 export const hazardRecordSchema = z.strictObject({
   /** A salt formula, or an ion id where the hazard follows the ion (every chromate). */
   subject: z.string().min(1).max(120),
@@ -413,6 +420,8 @@ export const tableSchemas = {
       vaporizationEnthalpy: waterConstant,
       molarMass: waterConstant,
     }),
+    /** Non-electrolyte solutes with an osmotic coefficient and φL of their own. */
+    nonElectrolytes: z.array(nonElectrolyteBrineSchema).optional(),
   }),
   'warmer-melts.json': table(warmerMeltRecordSchema),
 } as const;
@@ -434,6 +443,7 @@ export type SolubilityRecord = z.infer<typeof solubilityRecordSchema>;
 export type SolubilityProductRecord = z.infer<typeof solubilityProductRecordSchema>;
 export type HeatCapacityRecord = z.infer<typeof heatCapacityRecordSchema>;
 export type BrinePitzerRecord = z.infer<typeof brinePitzerRecordSchema>;
+export type NonElectrolyteBrineRecord = z.infer<typeof nonElectrolyteBrineSchema>;
 export type IonizationRecord = z.infer<typeof ionizationRecordSchema>;
 export type ElectronAffinityRecord = z.infer<typeof electronAffinityRecordSchema>;
 export type AtomizationRecord = z.infer<typeof atomizationRecordSchema>;
@@ -442,8 +452,7 @@ export type MadelungRecord = z.infer<typeof madelungRecordSchema>;
 export type BornExponentRecord = z.infer<typeof bornExponentRecordSchema>;
 export type VolumeCoefficientRecord = z.infer<typeof volumeCoefficientRecordSchema>;
 export type HazardRecord = z.infer<typeof hazardRecordSchema>;
-export type HazardClass = z.infer<typeof hazardClassSchema>;
-export type StructureType = z.infer<typeof structureTypeSchema>;
+export type { HazardClass, StructureType } from './tableTerms.js';
 export type NobleGasCore = z.infer<typeof nobleGasCoreSchema>;
 export type IonKind = z.infer<typeof ionKindSchema>;
 export type WarmerMeltRecord = z.infer<typeof warmerMeltRecordSchema>;

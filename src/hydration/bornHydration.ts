@@ -12,6 +12,8 @@ import { builtinDataset } from '../data/builtin.js';
 import { findIon } from '../chem/ionIndex.js';
 import { COULOMB_KJ_ANGSTROM, COVERAGE_95, STANDARD_TEMPERATURE } from '../quantity/constants.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
+import { quantile } from '../numeric/quantile.js';
+import { goldenSectionMaximum } from '../numeric/goldenSectionMaximum.js';
 
 const BORN_HYDRATION_OPTIONS = optionNames<{ excludeIon?: string }>('bornHydrationEnthalpy', { excludeIon: true });
 
@@ -108,32 +110,16 @@ interface CalibrationPoint {
   value: number;
 }
 
+/** Where the fitted radius offset δ is sought, Å, and in how many golden-section steps (the bracket shrinks to about 1e-16 Å). */
+const OFFSET_RANGE_ANGSTROM = { min: -0.5, max: 3 };
+const OFFSET_STEPS = 80;
+
 /** The offset δ that minimises Σ((born − tabulated)/tabulated)², by golden-section search on [−0.5, 3] Å. */
 function fitOffset(points: readonly CalibrationPoint[], factor: number): number {
   const cost = (d: number) => points.reduce((s, p) => s + ((bornValue(p.charge, p.radius, d, factor) - p.value) / p.value) ** 2, 0);
-  let lo = -0.5;
-  let hi = 3;
-  const g = (Math.sqrt(5) - 1) / 2;
-  let x1 = hi - g * (hi - lo);
-  let x2 = lo + g * (hi - lo);
-  let f1 = cost(x1);
-  let f2 = cost(x2);
-  for (let i = 0; i < 80; i++) {
-    if (f1 < f2) {
-      hi = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = hi - g * (hi - lo);
-      f1 = cost(x1);
-    } else {
-      lo = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = lo + g * (hi - lo);
-      f2 = cost(x2);
-    }
-  }
-  return (lo + hi) / 2;
+  // Searched over −δ: the search then settles ties between equal costs towards the larger δ, as the fit always has.
+  const { lo, hi } = goldenSectionMaximum((m) => -cost(-m), -OFFSET_RANGE_ANGSTROM.max, -OFFSET_RANGE_ANGSTROM.min, 0, OFFSET_STEPS);
+  return -(lo + hi) / 2;
 }
 
 /** One group of the calibration: all ions of one sign, or of one sign and charge. */
@@ -160,15 +146,6 @@ export interface BornCalibration {
    * ±1.96: the normal interval alone covers too few of these heavy-tailed misses.
    */
   coverageFactor: number;
-}
-
-/** The p-quantile of sorted values, linear between order statistics. */
-function quantile(sorted: readonly number[], p: number): number {
-  if (sorted.length === 0) return 0;
-  const h = (sorted.length - 1) * p;
-  const lo = Math.floor(h);
-  const hi = Math.min(sorted.length - 1, lo + 1);
-  return sorted[lo]! + (h - lo) * (sorted[hi]! - sorted[lo]!);
 }
 
 function classOf(points: readonly CalibrationPoint[], key: string, factor: number): BornClass {

@@ -61,11 +61,11 @@ export function protonHydration(dataset: Dataset = builtinDataset()): ProtonScal
 }
 
 function marcusIndex(dataset: Dataset) {
-  return dataset.memo('hydration.marcusIndex', () => new Map(dataset.records('hydration-enthalpies.json').map((r) => [r.ion, r])));
+  return dataset.index('hydration-enthalpies.json');
 }
 
 function aqueousIndex(dataset: Dataset) {
-  return dataset.memo('hydration.aqueousIndex', () => new Map(dataset.records('ion-formation-aq.json').map((r) => [r.ion, r])));
+  return dataset.index('ion-formation-aq.json');
 }
 
 /**

@@ -4,7 +4,8 @@
  *
  * @module
  */
-import { structureTypeSchema, type StructureType } from '../data/schemas.js';
+import type { StructureType } from '../data/schemas.js';
+import { isTerm, STRUCTURE_TYPES } from '../data/tableTerms.js';
 import { IonheatError } from '../error.js';
 import { describeValue } from '../quantity/argumentChecks.js';
 import type { PointChargeCell, Vec3 } from './ewaldMadelung.js';
@@ -47,7 +48,7 @@ export const idealCellTypes = ['rock-salt', 'caesium-chloride', 'zinc-blende', '
  * ```
  */
 export function idealCell(type: StructureType): PointChargeCell {
-  if (typeof type !== 'string' || !structureTypeSchema.safeParse(type).success) throw new IonheatError('INVALID_ARGUMENT', `${describeValue(type)} is not a structure type ionheat knows (known: ${structureTypeSchema.options.join(', ')})`, { field: 'structure' });
+  if (!isTerm(STRUCTURE_TYPES, type)) throw new IonheatError('INVALID_ARGUMENT', `${describeValue(type)} is not a structure type ionheat knows (known: ${STRUCTURE_TYPES.join(', ')})`, { field: 'structure' });
   const sites = (list: readonly Vec3[], charge: number) => list.map((position) => ({ position, charge }));
   switch (type) {
     case 'rock-salt':

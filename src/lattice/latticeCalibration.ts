@@ -16,7 +16,7 @@ import { saltRecordIndex } from '../chem/saltRecords.js';
 import { isIonheatError } from '../error.js';
 import { cycleLatticeEnthalpy } from '../cycle/cycleLatticeEnthalpy.js';
 import { latticeModelPoint, latticeModels, type LatticeModel } from './latticeModel.js';
-import { studentQuantile975 } from './studentQuantile.js';
+import { studentQuantile975 } from '../numeric/studentQuantile.js';
 
 /** `monatomic` when every ion of the salt is monatomic, else `polyatomic`. */
 export type SaltIonKind = 'monatomic' | 'polyatomic';
@@ -96,8 +96,8 @@ export function calibrationChargeType(salt: Salt): string {
 
 /** The ion kind of a salt for calibration. */
 export function saltIonKind(salt: Salt, dataset: Dataset): SaltIonKind {
-  const ions = dataset.memo('lattice.ionKinds', () => new Map(dataset.records('ions.json').map((i) => [i.id, i.kind])));
-  return salt.ions.every((i) => ions.get(i.ion) === 'monatomic') ? 'monatomic' : 'polyatomic';
+  const ions = dataset.index('ions.json');
+  return salt.ions.every((i) => ions.get(i.ion)?.kind === 'monatomic') ? 'monatomic' : 'polyatomic';
 }
 
 const NOBLE_GAS_Z = new Set([2, 10, 18, 36, 54, 86]);
@@ -132,10 +132,9 @@ function add(groups: Map<string, Sums>, key: string, e: number): void {
   groups.set(key, g);
 }
 
-function build(dataset: Dataset): LatticeCalibration {
+/** Every estimator's residual for every calibration salt, in table order (the costly part: a cycle and every estimator per salt). */
+function buildResiduals(dataset: Dataset): CalibrationResidual[] {
   const residuals: CalibrationResidual[] = [];
-  const models = new Map<LatticeModel, ModelCalibration>();
-  for (const model of latticeModels) models.set(model, { byFormula: new Map(), groups: new Map(), resolved: new Map() });
   for (const [formula, records] of saltRecordIndex('compound-formation.json', dataset)) {
     if (!records.some((r) => r.phase === 'cr')) continue;
     let salt: Salt;
@@ -160,14 +159,22 @@ function build(dataset: Dataset): LatticeCalibration {
         throw e;
       }
       const residual = (cycle.value - estimate) / estimate;
-      const r: CalibrationResidual = { formula: salt.formula, model, chargeType: ct, ionKind: kind, cationCore: core, groups, estimate, reference: cycle.value, referenceU: cycle.u, residual };
-      residuals.push(r);
-      const m = models.get(model)!;
-      m.byFormula.set(salt.formula, r);
-      for (const g of groups) add(m.groups, g, residual);
+      residuals.push({ formula: salt.formula, model, chargeType: ct, ionKind: kind, cationCore: core, groups, estimate, reference: cycle.value, referenceU: cycle.u, residual });
     }
   }
-  return { residuals, models };
+  return residuals;
+}
+
+/** The residuals by estimator: by formula, and the sums of each group. */
+function modelsOf(residuals: readonly CalibrationResidual[]): Map<LatticeModel, ModelCalibration> {
+  const models = new Map<LatticeModel, ModelCalibration>();
+  for (const model of latticeModels) models.set(model, { byFormula: new Map(), groups: new Map(), resolved: new Map() });
+  for (const r of residuals) {
+    const m = models.get(r.model)!;
+    m.byFormula.set(r.formula, r);
+    for (const g of r.groups) add(m.groups, g, r.residual);
+  }
+  return models;
 }
 
 /**
@@ -193,7 +200,10 @@ function build(dataset: Dataset): LatticeCalibration {
  * ```
  */
 export function latticeCalibration(dataset: Dataset = builtinDataset()): LatticeCalibration {
-  return dataset.memo('lattice.calibration', () => build(dataset));
+  return dataset.memo('lattice.calibration', () => {
+    const residuals = dataset.memo('lattice.calibrationResiduals', () => buildResiduals(dataset));
+    return { residuals, models: modelsOf(residuals) };
+  });
 }
 
 function statsOf(group: string, n: number, s1: number, s2: number): CalibrationStats {

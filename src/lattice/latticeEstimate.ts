@@ -20,6 +20,7 @@ import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { calibrationChargeType, calibrationGroups, calibrationStats, saltCationCore, saltIonKind, type CalibrationStats } from './latticeCalibration.js';
 import { latticeModels, PointFailure, prepareLatticeSalt, tryLatticeModelPoint, type LatticeModel, type LatticeModelOptions, type ModelPoint } from './latticeModel.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /** The option names of the lattice estimates. @internal */
 export const LATTICE_ESTIMATE_OPTIONS = optionNames<LatticeEstimateOptions>('latticeEstimate', { structure: true, latticeParameter: true, coordination: true, excludeSalt: true });
@@ -347,7 +348,7 @@ export function saltLatticeValues(s: Salt, dataset: Dataset = builtinDataset()):
     const at6 = model === 'kapustinskii' && structured ? tryLatticeModelPoint(s, model, { coordination: 6 }, dataset, undefined, prepared) : point;
     if (!(at6 instanceof PointFailure) && st) {
       const { value, u } = calibrated(at6.value, false, st);
-      if (valid(value, u, value - st.t * u, value + st.t * u)) plainAtCn6.set(model, value === 0 ? 0 : value);
+      if (valid(value, u, value - st.t * u, value + st.t * u)) plainAtCn6.set(model, unsignedZero(value));
     }
   }
   for (const { method, model: i, corrected } of METHOD_PARTS) {
@@ -361,7 +362,7 @@ export function saltLatticeValues(s: Salt, dataset: Dataset = builtinDataset()):
       const low = value - st.t * u;
       const high = value + st.t * u;
       if (valid(value, u, low, high)) {
-        values.push({ method, value: value === 0 ? 0 : value, u, low, high, sources: [...point.sources, 'jenkins2005'] });
+        values.push({ method, value: unsignedZero(value), u, low, high, sources: [...point.sources, 'jenkins2005'] });
         continue;
       }
       code = 'INVALID_ARGUMENT';

@@ -315,7 +315,7 @@ function vbtPoint(salt: Salt, prepared: PreparedSalt, dataset: Dataset, notes: N
   let ionicStrength = 0;
   for (const { ion, count } of [...ions.cations, ...ions.anions]) ionicStrength += (count * ion.charge * ion.charge) / 2;
   const type = chargeType(salt);
-  const coefficients = dataset.memo('lattice.volumeCoefficients', () => new Map(dataset.records('volume-coefficients.json').map((r) => [r.chargeType, r])));
+  const coefficients = dataset.index('volume-coefficients.json');
   const rec = (type !== undefined ? coefficients.get(type as never) : undefined) ?? coefficients.get('general');
   if (!rec) {
     return new PointFailure(

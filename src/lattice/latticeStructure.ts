@@ -6,7 +6,8 @@
  * @module
  */
 import type { Dataset } from '../data/dataset.js';
-import { structureTypeSchema, type MadelungRecord, type StructureType } from '../data/schemas.js';
+import type { MadelungRecord, StructureType } from '../data/schemas.js';
+import { isTerm, STRUCTURE_TYPES } from '../data/tableTerms.js';
 import type { Salt } from '../chem/salt.js';
 import { saltRecords } from '../chem/saltRecords.js';
 import { IonheatError } from '../error.js';
@@ -77,17 +78,16 @@ export function shortestDistance(type: StructureType, a: number): number | undef
 }
 
 /** Madelung records by structure type, once per dataset. */
-function madelungIndex(dataset: Dataset): ReadonlyMap<StructureType, MadelungRecord> {
-  return dataset.memo('lattice.madelung', () => new Map(dataset.records('madelung-constants.json').map((r) => [r.structure, r])));
+function madelungIndex(dataset: Dataset): ReadonlyMap<string, MadelungRecord> {
+  return dataset.index('madelung-constants.json');
 }
 
 /** Reads a structure name from the caller, rejecting unknown names. */
 export function readStructureType(name: string): StructureType {
-  const parsed = structureTypeSchema.safeParse(name);
-  if (!parsed.success) {
-    throw new IonheatError('INVALID_ARGUMENT', `"${name}" is not a structure type ionheat knows (known: ${structureTypeSchema.options.join(', ')})`, { field: 'structure', text: name });
+  if (!isTerm(STRUCTURE_TYPES, name)) {
+    throw new IonheatError('INVALID_ARGUMENT', `"${name}" is not a structure type ionheat knows (known: ${STRUCTURE_TYPES.join(', ')})`, { field: 'structure', text: name });
   }
-  return parsed.data;
+  return name;
 }
 
 /**

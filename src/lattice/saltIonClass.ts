@@ -60,11 +60,11 @@ function cationClasses(dataset: Dataset): ReadonlyMap<string, CationClass> {
  */
 export function saltIonClass(salt: Salt, dataset: Dataset): SaltIonClass {
   const cations = cationClasses(dataset);
-  const kinds = dataset.memo('lattice.ionKinds', () => new Map(dataset.records('ions.json').map((i) => [i.id, i.kind])));
+  const ions = dataset.index('ions.json');
   const found = new Set<string>();
   for (const i of salt.ions) {
     if (i.charge > 0) found.add(cations.get(i.ion) ?? 'noble-gas');
-    else if (i.charge < 0 && kinds.get(i.ion) !== 'monatomic') found.add('polyatomic anion');
+    else if (i.charge < 0 && ions.get(i.ion)?.kind !== 'monatomic') found.add('polyatomic anion');
   }
   return saltIonClasses.find((c) => found.has(c)) ?? 'monatomic';
 }

@@ -13,6 +13,7 @@ import { sourceSchema } from '../data/schemas.js';
 import { overrideError } from '../data/dataset.js';
 import { didYouMean } from '../quantity/nearestName.js';
 import { implausibleOverrides } from './plausibleOverrides.js';
+import { mergeOverrides } from '../data/recordCheck.js';
 
 const overrideFileSchema = z.strictObject({
   $schema: z.string().optional(),
@@ -60,7 +61,7 @@ export function applyOverrideDocument(document: unknown, label: string, base: Da
   }
   const tables: Record<string, unknown[]> = {};
   for (const [name, records] of Object.entries(parsed.data.tables)) tables[name.endsWith('.json') ? name : `${name}.json`] = records;
-  return base.withOverrides(tables as TableOverrides, label, parsed.data.sources ?? {}, { problems: implausibleOverrides(tables), refuseConflicts: true });
+  return mergeOverrides(base, tables as TableOverrides, label, parsed.data.sources ?? {}, { problems: implausibleOverrides(tables), refuseConflicts: true });
 }
 
 const TOP_LEVEL_KEYS = ['$schema', 'description', 'sources', 'tables'];

@@ -9,6 +9,9 @@ import { formulaText } from './formula.js';
 
 const SUPERSCRIPT: Readonly<Record<string, string>> = { '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹', '+': '⁺', '-': '⁻' };
 
+/** Every superscript character a charge is written with. */
+export const SUPERSCRIPT_CHARACTERS = Object.values(SUPERSCRIPT).join('');
+
 /** A charge as a superscript: 1 → `⁺`, −2 → `²⁻`, 0 → `` (a neutral solute shows no charge). */
 export function chargeText(charge: number): string {
   if (charge === 0 || !Number.isInteger(charge)) return '';

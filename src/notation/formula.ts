@@ -6,7 +6,18 @@
  * @module
  */
 
-const SUBSCRIPT_DIGITS = '₀₁₂₃₄₅₆₇₈₉';
+/** The subscript digits ₀–₉, in order: the one table of them. */
+export const SUBSCRIPT_DIGITS = '₀₁₂₃₄₅₆₇₈₉';
+
+/** The same text with every subscript digit written as a plain one (`CaCl₂` → `CaCl2`), for reading formulas people typed. */
+export function plainDigits(text: string): string {
+  let out = '';
+  for (const c of text) {
+    const sub = SUBSCRIPT_DIGITS.indexOf(c);
+    out += sub >= 0 ? String(sub) : c;
+  }
+  return out;
+}
 
 /**
  * Subscript digits of a formula for display, except the leading count of

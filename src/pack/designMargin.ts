@@ -11,9 +11,10 @@
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { numberArgument } from '../quantity/argumentChecks.js';
-import { bracketedRoot } from './bracketedRoot.js';
+import { bracketedRoot } from '../numeric/bracketedRoot.js';
 import { CONTACT_BURN_THRESHOLD_C } from './packCautions.js';
-import type { PackFill, PackOptions } from './packFill.js';
+import { caution, type Caution } from '../quantity/caution.js';
+import type { PackFill, PackOptions } from './packInput.js';
 import { packFinalTemperature } from './packFinalTemperature.js';
 import { packRatioCurve } from './packRatioCurve.js';
 
@@ -60,8 +61,8 @@ export interface PackDesignMargin {
      */
     largestSafeMassG: number | null;
   };
-  /** Set when the design's own 95 % interval crosses the line. */
-  caution: string | null;
+  /** Set when the design's own 95 % interval crosses the line: a `design-margin` warning. */
+  caution: Caution | null;
   /** The design and its margins in one sentence. */
   message: string;
 }
@@ -92,7 +93,7 @@ const g2 = (x: number): string => (Math.abs(x) < 0.005 ? 0 : x).toFixed(2);
  * ```ts
  * const m = packDesignMargin({ solids: [{ formula: 'CaCl2', massG: 1 }], waterG: 100, startC: 20 }, 40);
  * m.kind; // 'hot'
- * m.design.saltMassG; // ≈ 12.47 g of CaCl2 in 100 g of water
+ * m.design.saltMassG; // ≈ 11.62 g of CaCl2 in 100 g of water
  * m.massInterval.low < m.design.saltMassG; // true
  * m.threshold.largestSafeMassG > m.design.saltMassG; // true
  * ```
@@ -140,11 +141,12 @@ export function packDesignMargin(fill: PackFill, targetC: number, packOptions: P
   const low = massWhere(farEdge, targetC) ?? mass;
   const high = massWhere(nearEdge, targetC);
   const crosses = past(farEdge(at), line) > 0;
-  const caution = crosses
+  const marginText = crosses
     ? kind === 'hot'
       ? `Contact-burn margin: the design's 95 % interval reaches ${g2(at.high)} °C, above the ${line} °C long-contact burn threshold (ISO 13732-1, from memory); ${unsafeFrom === null ? 'no mass avoids it' : `at most ${g2(unsafeFrom)} g of solid keeps the interval below it`}. Design for a lower target or keep an insulating sleeve and short contact.`
       : `Frostbite margin: the design's 95 % interval reaches down to ${g2(at.low)} °C, at or below ${line} °C where skin can freeze on contact (common practice); ${unsafeFrom === null ? 'no mass avoids it' : `at most ${g2(unsafeFrom)} g of solid keeps the interval above it`}. Keep a cloth between pack and skin.`
     : null;
+  const margin = marginText === null ? null : caution('design-margin', 'warning', marginText);
   const message = `${g2(mass)} g of solid (95 % interval ${g2(low)} to ${high === null ? 'beyond the most effective mass' : `${g2(high)} g`}) reaches ${targetC} °C (final ${g2(at.value)} °C, 95 % interval ${g2(at.low)} to ${g2(at.high)} °C); ${safeText}${bandNote}`;
-  return { targetC, kind, reachable: true, design: { saltMassG: mass, ratio: target.design.ratio, finalTemperature: at }, massInterval: { low, high }, threshold, caution, message };
+  return { targetC, kind, reachable: true, design: { saltMassG: mass, ratio: target.design.ratio, finalTemperature: at }, massInterval: { low, high }, threshold, caution: margin, message };
 }

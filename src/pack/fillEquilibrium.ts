@@ -13,6 +13,7 @@ import { brineApparentTerms, brineApparentWith, brineHeatCapacityU, brineOsmotic
 import { boilingWaterActivityLn, fusionEnthalpyAt, iceWaterActivityLn } from '../brine/waterPhases.js';
 import { ZERO_CELSIUS_K } from '../brine/debyeHuckelSlopes.js';
 import { solubilityAt, type SolubilityAt } from './solubilityCurve.js';
+import { convertsWithinPack } from './solidConversion.js';
 
 /**
  * Shifts of the uncertain inputs, for the interval: kJ/mol added to each
@@ -28,6 +29,10 @@ export interface Perturbation {
   brineEnthalpyZ?: readonly number[];
   brineHeatCapacityZ?: readonly number[];
   osmoticZ?: number;
+  /** Relative shift of each solid's measured solubility (0.02 = 2 % more dissolves at saturation). */
+  solubilityRelative?: readonly number[];
+  /** Count the conversion of undissolved solid that barely dissolves (left out of the central value, see `convertsWithinPack`). */
+  slowConversion?: boolean;
 }
 
 /** One solid in the state at T. @internal */
@@ -44,6 +49,8 @@ export interface SolidEquilibrium {
   undissolvedWater: number;
   /** True when the undissolved solid takes up (or gives off) water to become the equilibrium solid. */
   converts: boolean;
+  /** True when the undissolved solid would become another equilibrium solid of known enthalpy but barely dissolves, so the change is left out (see `convertsWithinPack`). */
+  slowConversion: boolean;
   /** Molality of this salt in the final liquid, mol/kg. */
   molality: number;
   /** The integral enthalpy of solution to that molality used, kJ/mol of the loaded formula: ΔsolH°(∞) + φL. */
@@ -116,6 +123,8 @@ export interface FillScratch {
   holds: number[];
   /** 1 where undissolved salt i turns into a different equilibrium solid. */
   converts: number[];
+  /** 1 where it would, but too slowly to count (it barely dissolves). */
+  slow: number[];
   fraction: number[];
   dissolutionJ: number[];
   conversionJ: number[];
@@ -168,6 +177,7 @@ export function fillScratch(fill: PreparedFill): FillScratch {
     phaseWater: zeros(n),
     holds: zeros(n),
     converts: zeros(n),
+    slow: zeros(n),
     fraction: zeros(n),
     dissolutionJ: zeros(n),
     conversionJ: zeros(n),
@@ -209,8 +219,10 @@ export function fillScratch(fill: PreparedFill): FillScratch {
   };
 }
 
-/** Solubility, equilibrium solid and water need of each salt at t, into `w`; the water totals into `needs`. */
-function solubilityState(fill: PreparedFill, t: number, w: FillScratch): void {
+/** Solubility, equilibrium solid and water need of each salt at t, into `w`, with the perturbation's solubility shifts and conversion rule. */
+function solubilityState(fill: PreparedFill, t: number, perturbation: Perturbation, w: FillScratch): void {
+  const relative = perturbation.solubilityRelative;
+  const countSlow = perturbation.slowConversion === true;
   const mw = fill.waterMolarMass;
   const list = fill.solids;
   let totalWater = fill.waterG;
@@ -222,6 +234,7 @@ function solubilityState(fill: PreparedFill, t: number, w: FillScratch): void {
     if (!s.curve) {
       w.limited[i] = 0;
       w.converts[i] = 0;
+      w.slow[i] = 0;
       w.phaseWater[i] = s.salt.water;
       w.solubility[i] = undefined;
       w.phase[i] = undefined;
@@ -229,13 +242,17 @@ function solubilityState(fill: PreparedFill, t: number, w: FillScratch): void {
     }
     const sol = solubilityAt(s.curve, t);
     const ph = s.phases.get(sol.phase);
-    const c = ph !== undefined && ph.formula !== s.salt.formula && ph.enthalpy !== undefined;
+    const other = ph !== undefined && ph.formula !== s.salt.formula && ph.enthalpy !== undefined;
+    const fast = other && convertsWithinPack(sol.value);
+    const c = fast || (other && countSlow);
+    const value = sol.value * (1 + (relative?.[i] ?? 0));
     w.limited[i] = 1;
     w.solubility[i] = sol;
     w.phase[i] = ph;
     w.converts[i] = c ? 1 : 0;
+    w.slow[i] = other && !fast ? 1 : 0;
     w.phaseWater[i] = c ? ph!.water : s.salt.water;
-    w.waterToDissolve[i] = sol.value > 0 ? (100 * s.moles * s.anhydrousMolarMass) / sol.value : Infinity;
+    w.waterToDissolve[i] = value > 0 ? (100 * s.moles * s.anhydrousMolarMass) / value : Infinity;
     w.holds[i] = s.moles * w.phaseWater[i]! * mw;
     heldAsLoaded += s.moles * s.salt.water * mw;
     if (c) hydrationNeed += s.moles * (w.phaseWater[i]! - s.salt.water) * mw;
@@ -298,7 +315,9 @@ function waterActivityLn(fill: PreparedFill, tK: number, perturbation: Perturbat
     if (!(m > 0)) continue;
     const b = fill.solids[i]!.brine;
     let phi = brineOsmoticWith(b, m, w.osmoticTerms[i]!);
-    if (z !== 0) phi += z * brineOsmoticU(b, m, tK);
+    // φ is positive: its shift is taken on the log scale, φ·exp(z·u/φ), the same as φ + z·u to first order, so that
+    // a wide allowance (u/φ near 0.5 past a fitted range) cannot drive it to zero and the liquidus to 0 °C.
+    if (z !== 0 && phi > 0) phi *= Math.exp((z * brineOsmoticU(b, m, tK)) / phi);
     sum += b.particles * m * Math.max(phi, 0.05);
   }
   return -fill.water.molarMass * sum;
@@ -320,7 +339,7 @@ const MIN_LIQUID_SHARE = 1e-9;
 export function frozenMargin(fill: PreparedFill, t: number, perturbation: Perturbation, w: FillScratch): number {
   const tK = t + ZERO_CELSIUS_K;
   for (let i = 0; i < fill.solids.length; i++) brineOsmoticTerms(fill.solids[i]!.brine, tK, w.osmoticTerms[i]!);
-  solubilityState(fill, t, w);
+  solubilityState(fill, t, perturbation, w);
   shareWater(fill, w.totalWater * MIN_LIQUID_SHARE, w);
   return waterActivityLn(fill, tK, perturbation, w) - iceWaterActivityLn(fill.water, tK);
 }
@@ -333,6 +352,9 @@ export function frozenMargin(fill: PreparedFill, t: number, perturbation: Pertur
  * everything loaded, less the water the undissolved solid holds as its
  * equilibrium hydrate, less any ice; it is solved exactly (the balance is
  * piecewise linear in W). A salt without solubility data dissolves completely.
+ * Undissolved solid becomes the equilibrium solid of the table only when
+ * the salt dissolves enough for that change to run within a pack's time
+ * (`convertsWithinPack`); otherwise it stays as loaded.
  *
  * Ice: below 0 °C, where the brine's water activity (Pitzer osmotic
  * coefficient, brine module) exceeds that of water over ice at t, ice forms
@@ -357,7 +379,7 @@ export function evaluateFill(fill: PreparedFill, t: number, perturbation: Pertur
   // The water activity matters only where ice or vapour can form; between 0 and 99 °C it is left uncomputed (NaN).
   const phases = t < 0 || t > 99;
   if (phases) for (let i = 0; i < n; i++) brineOsmoticTerms(list[i]!.brine, tK, w.osmoticTerms[i]!);
-  solubilityState(fill, t, w);
+  solubilityState(fill, t, perturbation, w);
   const totalWater = w.totalWater;
   shareWater(fill, totalWater, w);
   let lnAw = phases ? waterActivityLn(fill, tK, perturbation, w) : NaN;
@@ -495,6 +517,7 @@ export function fillEquilibrium(fill: PreparedFill, t: number, perturbation: Per
       undissolvedPhase: c ? w.phase[i]!.formula : s.salt.formula,
       undissolvedWater: s.salt.water + phi * (w.phaseWater[i]! - s.salt.water),
       converts: c,
+      slowConversion: w.slow[i] === 1 && w.fraction[i]! < 1,
       molality: Number.isFinite(w.molality[i]!) ? w.molality[i]! : 0,
       integralEnthalpy: w.integralEnthalpy[i]!,
       integralEnthalpyU: w.integralEnthalpyU[i]!,
@@ -518,5 +541,49 @@ export function fillEquilibrium(fill: PreparedFill, t: number, perturbation: Per
     boiling: w.boiling,
     eutecticFraction: w.holdFraction,
     waterActivityLn: w.waterActivityLn,
+  };
+}
+
+/**
+ * The fill at a change of equilibrium solid, as a share `low` of it in the
+ * state just below the change (`a`) and the rest in the state just above
+ * (`b`). Both are saturated at the same solubility, so the two parts hold
+ * the same liquid and together are one state with both solids present;
+ * every heat, heat capacity and mass is the same share of each.
+ * @internal
+ */
+export function mixedFillState(a: FillEquilibrium, b: FillEquilibrium, low: number): FillEquilibrium {
+  const mix = (x: number, y: number): number => low * x + (1 - low) * y;
+  const solids = a.solids.map((sa, i): SolidEquilibrium => {
+    const sb = b.solids[i]!;
+    return {
+      fraction: mix(sa.fraction, sb.fraction),
+      saturated: sa.saturated || sb.saturated,
+      solubility: sa.solubility,
+      undissolvedPhase: sa.undissolvedPhase === sb.undissolvedPhase ? sa.undissolvedPhase : `${sa.undissolvedPhase} + ${sb.undissolvedPhase}`,
+      undissolvedWater: mix(sa.undissolvedWater, sb.undissolvedWater),
+      converts: sa.converts || sb.converts,
+      slowConversion: sa.slowConversion || sb.slowConversion,
+      molality: mix(sa.molality, sb.molality),
+      integralEnthalpy: mix(sa.integralEnthalpy, sb.integralEnthalpy),
+      integralEnthalpyU: mix(sa.integralEnthalpyU, sb.integralEnthalpyU),
+      dissolutionJ: mix(sa.dissolutionJ, sb.dissolutionJ),
+      conversionJ: mix(sa.conversionJ, sb.conversionJ),
+      heatCapacityDissolved: mix(sa.heatCapacityDissolved, sb.heatCapacityDissolved),
+      heatCapacityUndissolved: mix(sa.heatCapacityUndissolved, sb.heatCapacityUndissolved),
+    };
+  });
+  const pa = a.heatCapacityParts;
+  const pb = b.heatCapacityParts;
+  return {
+    ...a,
+    liquidWaterG: mix(a.liquidWaterG, b.liquidWaterG),
+    solids,
+    hydrationFraction: mix(a.hydrationFraction, b.hydrationFraction),
+    heatJ: mix(a.heatJ, b.heatJ),
+    heatCapacity: mix(a.heatCapacity, b.heatCapacity),
+    heatCapacityParts: { water: mix(pa.water, pb.water), dissolved: mix(pa.dissolved, pb.dissolved), undissolved: mix(pa.undissolved, pb.undissolved), container: pa.container, ice: mix(pa.ice, pb.ice) },
+    iceG: mix(a.iceG, b.iceG),
+    iceJ: mix(a.iceJ, b.iceJ),
   };
 }

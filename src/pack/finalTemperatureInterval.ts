@@ -10,10 +10,13 @@ import { quadrature } from '../quantity/propagate.js';
 import type { Perturbation } from './fillEquilibrium.js';
 import { brineHeatCapacityU } from '../brine/brineProperties.js';
 import { ZERO_CELSIUS_K } from '../brine/debyeHuckelSlopes.js';
-import type { PackIntervalOptions, PreparedFill } from './packFill.js';
-import { seededNormal } from './seededNormal.js';
+import type { PreparedFill } from './packFill.js';
+import type { PackIntervalOptions } from './packInput.js';
+import { seededNormal } from '../numeric/seededNormal.js';
 import { withSolubilityBounds } from './solubilityBounds.js';
+import { measuredSolubilityRelativeU } from './saltSolubility.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
+import { quantile } from '../numeric/quantile.js';
 
 /** One uncertain input of the balance. @internal */
 export interface UncertainInput {
@@ -58,7 +61,9 @@ export const DEFAULT_SEED = 1;
  * + Σ(nᵢ,undissolved·u(Cp°solid))², u(φJ) being the brine module's fit
  * allowance or model discrepancy at the final molality. The integral
  * enthalpy's input combines the interval of ΔsolH°(∞) with u(φL) at the final
- * molality; the osmotic coefficients are an input where ice or boiling is involved.
+ * molality; a measured solubility is an input (relative u of 2 %, 5 % from
+ * memory: S·(1 ± 1.96·u)) where its salt ends at or near saturation; the
+ * osmotic coefficients are an input where ice or boiling is involved.
  * @internal
  */
 export function uncertainInputs(fill: PreparedFill, solution: FillSolution): UncertainInput[] {
@@ -78,8 +83,18 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
       inputs.push({ label: `enthalpy of solution of ${state.undissolvedPhase}`, ...spread, perturb: (shift) => ({ phaseShift: shiftAt(i, shift) }) });
     }
   });
-  // The osmotic coefficients set where ice forms and where the brine boils: an input wherever either happens.
-  if (solution.state.iceG > 0 || solution.clamp) inputs.push({ label: 'osmotic coefficients (freezing and boiling points)', u: 1, perturb: (shift) => ({ osmoticZ: shift }) });
+  // A measured solubility moves the final temperature only where the salt is at or near saturation.
+  fill.solids.forEach((s, i) => {
+    if (s.solubilityStatus !== 'measured' || !s.curve) return;
+    const state = solution.state.solids[i]!;
+    const relative = measuredSolubilityRelativeU(s.curve);
+    if (!nearSaturation(s.moles * s.anhydrousMolarMass, solution.state.liquidWaterG, state, relative)) return;
+    inputs.push({ label: `solubility of ${s.salt.anhydrous} (measured, ${(100 * relative).toFixed(0)} %)`, u: relative, perturb: (shift) => ({ solubilityRelative: shiftAt(i, shift) }) });
+  });
+  // The osmotic coefficients set where ice forms and where the brine boils: an input wherever either can happen
+  // (below 0 °C or above 99 °C), not only where it does at the solved state, so that the interval does not jump
+  // where ice first forms as the salt-to-water ratio grows.
+  if (solution.state.iceG > 0 || solution.clamp || solution.temperature < 0 || solution.temperature > 99) inputs.push({ label: 'osmotic coefficients (freezing and boiling points)', u: 1, perturb: (shift) => ({ osmoticZ: shift }) });
   if (fill.heatCapacityOverride) {
     const { value, u } = fill.heatCapacityOverride;
     inputs.push({ label: 'your heat capacity', u: u / value, perturb: (shift) => ({ heatCapacityRelative: shift }) });
@@ -87,6 +102,18 @@ export function uncertainInputs(fill: PreparedFill, solution: FillSolution): Unc
     inputs.push({ label: 'heat capacity from the parts', u: heatCapacityRelativeU(fill, solution), perturb: (shift) => ({ heatCapacityRelative: shift }) });
   }
   return inputs.filter((input) => input.u > 0);
+}
+
+/**
+ * True when a solid is saturated at the solved state, or dissolved to within
+ * 2·1.96 relative standard uncertainties of its solubility, so that a
+ * solubility at either end of its 95 % interval could change what dissolves.
+ */
+function nearSaturation(loadedAnhydrousG: number, liquidWaterG: number, state: { fraction: number; solubility: { value: number } | undefined }, relative: number): boolean {
+  if (state.fraction < 1) return true;
+  if (!state.solubility || !(liquidWaterG > 0)) return false;
+  const perHundred = (100 * loadedAnhydrousG) / liquidWaterG;
+  return perHundred >= state.solubility.value * (1 - 2 * COVERAGE_95 * relative);
 }
 
 /**
@@ -143,7 +170,43 @@ export function heatCapacityRelativeU(fill: PreparedFill, solution: FillSolution
  * @internal
  */
 export function finalTemperatureInterval(fill: PreparedFill, solution: FillSolution, options: PackIntervalOptions = { method: 'bounds' }): TemperatureInterval {
-  return withSolubilityBounds(fill, solution, propagatedInterval(fill, solution, options));
+  return withTransitionBracket(fill, solution, withSolubilityBounds(fill, solution, propagatedInterval(fill, solution, options)));
+}
+
+/**
+ * The table points either side of the change of equilibrium solid a fill
+ * holds at, °C: the table places the change only between them.
+ * @internal
+ */
+export function transitionBracket(fill: PreparedFill, temperature: number): [number, number] | undefined {
+  for (const s of fill.solids) {
+    const pts = s.curve?.points ?? [];
+    for (let k = 0; k + 1 < pts.length; k++) {
+      if (pts[k]!.phase !== pts[k + 1]!.phase && Math.abs((pts[k]!.t + pts[k + 1]!.t) / 2 - temperature) < 1e-9) return [pts[k]!.t, pts[k + 1]!.t];
+    }
+  }
+  return undefined;
+}
+
+/**
+ * A fill that holds at a change of equilibrium solid holds at the change's
+ * own temperature, which the solubility table places only somewhere between
+ * two of its points (the change is taken at their midpoint): the interval
+ * takes in both points, so that it is never of zero width there.
+ */
+function withTransitionBracket(fill: PreparedFill, solution: FillSolution, interval: TemperatureInterval): TemperatureInterval {
+  if (!solution.transition) return interval;
+  const bracket = transitionBracket(fill, solution.transition.temperature);
+  if (!bracket) return interval;
+  const low = Math.min(interval.low, bracket[0]);
+  const high = Math.max(interval.high, bracket[1]);
+  return {
+    ...interval,
+    low,
+    high,
+    u: Math.max(interval.u, (high - low) / (2 * COVERAGE_95)),
+    description: `${interval.description}; widened to the table points ${bracket[0]} and ${bracket[1]} °C between which the equilibrium solid changes, where the fill holds`,
+  };
 }
 
 /** The interval from the enthalpies and the heat capacity alone (see {@link finalTemperatureInterval}). */
@@ -162,6 +225,7 @@ function propagatedInterval(fill: PreparedFill, solution: FillSolution, options:
       const phaseShift = new Array<number>(n).fill(0);
       const brineEnthalpyZ = new Array<number>(n).fill(0);
       const brineHeatCapacityZ = new Array<number>(n).fill(0);
+      const solubilityRelative = new Array<number>(n).fill(0);
       let heatCapacityRelative = 0;
       let osmoticZ = 0;
       for (const input of inputs) {
@@ -171,25 +235,20 @@ function propagatedInterval(fill: PreparedFill, solution: FillSolution, options:
         if (p.phaseShift) p.phaseShift.forEach((v, i) => (phaseShift[i]! += v * z));
         if (p.brineEnthalpyZ) p.brineEnthalpyZ.forEach((v, i) => (brineEnthalpyZ[i]! += v * z));
         if (p.brineHeatCapacityZ) p.brineHeatCapacityZ.forEach((v, i) => (brineHeatCapacityZ[i]! += v * z));
+        if (p.solubilityRelative) p.solubilityRelative.forEach((v, i) => (solubilityRelative[i]! += v * z));
         if (p.osmoticZ) osmoticZ += p.osmoticZ * z;
         if (p.heatCapacityRelative) heatCapacityRelative += p.heatCapacityRelative * z;
       }
-      results[k] = solveFillTemperature(fill, { enthalpyShift, phaseShift, brineEnthalpyZ, brineHeatCapacityZ, osmoticZ, heatCapacityRelative: Math.max(-0.9, heatCapacityRelative) }).temperature;
+      results[k] = solveFillTemperature(fill, { enthalpyShift, phaseShift, brineEnthalpyZ, brineHeatCapacityZ, osmoticZ, solubilityRelative: solubilityRelative.map((r) => Math.max(-0.9, r)), heatCapacityRelative: Math.max(-0.9, heatCapacityRelative) }).temperature;
     }
     results.sort();
-    const quantile = (q: number): number => {
-      const pos = q * (samples - 1);
-      const lo = Math.floor(pos);
-      const hi = Math.min(samples - 1, lo + 1);
-      return results[lo]! + (results[hi]! - results[lo]!) * (pos - lo);
-    };
     let mean = 0;
     for (const r of results) mean += r / samples;
     let variance = 0;
     for (const r of results) variance += (r - mean) ** 2 / (samples - 1);
     return {
-      low: Math.min(t, quantile(0.025)),
-      high: Math.max(t, quantile(0.975)),
+      low: Math.min(t, quantile(results, 0.025)),
+      high: Math.max(t, quantile(results, 0.975)),
       u: Math.sqrt(variance),
       method: 'monte-carlo',
       samples,
@@ -208,9 +267,12 @@ function propagatedInterval(fill: PreparedFill, solution: FillSolution, options:
     const downShift = input.down ?? COVERAGE_95 * input.u;
     const plusSolution = solveFillTemperature(fill, input.perturb(upShift));
     const minusSolution = solveFillTemperature(fill, input.perturb(-downShift));
+    // Only a limit on the far side of the solved temperature bounds the interval: a re-solve that stops at a
+    // eutectic above it (its brine freezing sooner) is a shift upwards, not a floor.
     for (const s of [plusSolution, minusSolution]) {
-      if (s.clamp?.kind === 'boiling') ceiling = Math.min(ceiling, s.clamp.temperature);
-      else if (s.clamp) floor = floor === -Infinity ? s.clamp.temperature : Math.min(floor, s.clamp.temperature);
+      if (s.clamp?.kind === 'boiling') {
+        if (s.clamp.temperature >= t) ceiling = Math.min(ceiling, s.clamp.temperature);
+      } else if (s.clamp && s.clamp.temperature <= t) floor = floor === -Infinity ? s.clamp.temperature : Math.min(floor, s.clamp.temperature);
     }
     const plus = plusSolution.temperature;
     const minus = minusSolution.temperature;

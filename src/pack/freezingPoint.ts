@@ -5,6 +5,7 @@
  * @module
  */
 import { numberArgument } from '../quantity/argumentChecks.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /**
  * Cryoscopic constant of water, K·kg/mol. Physical chemistry textbooks give
@@ -35,5 +36,5 @@ export function freezingPointOfSolution(particleMoles: number, waterG: number): 
   numberArgument(waterG, 'waterG', 'the grams of liquid water', { max: 1e12 });
   if (!(waterG >= 1e-6)) return undefined;
   const t = -(WATER_CRYOSCOPIC_CONSTANT * particleMoles * 1000) / waterG;
-  return t === 0 ? 0 : t;
+  return unsignedZero(t);
 }

@@ -11,7 +11,8 @@ import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { IonheatError } from '../error.js';
 import type { Salt } from '../chem/salt.js';
-import { hazardCoverage, saltHazards } from './saltHazards.js';
+import { hazardCautions } from '../solution/hazardCautions.js';
+import { caution, type Caution } from '../quantity/caution.js';
 
 /**
  * Skin-contact temperature above which a burn becomes possible when contact
@@ -40,6 +41,8 @@ export interface CautionInput {
   salts: readonly Salt[];
   /** From a time course, when one was run: seconds the pack spends above the burn threshold. */
   secondsAboveBurnThreshold?: number;
+  /** Solids left undissolved at the final temperature, g, by formula (from the pack result's `dissolved`). */
+  undissolved?: readonly { formula: string; undissolvedMass: number }[];
 }
 
 const c = (x: number): string => `${x.toFixed(1)} °C`;
@@ -54,15 +57,10 @@ function checkCautionInput(input: CautionInput, dataset: Dataset): void {
   if (input.clamp !== undefined && !['freezing', 'eutectic', 'boiling'].includes(input.clamp)) throw new IonheatError('INVALID_ARGUMENT', `clamp is freezing, eutectic or boiling when given, got ${describeValue(input.clamp)}`, { field: 'clamp' });
   if (!Array.isArray(input.salts)) throw new IonheatError('INVALID_ARGUMENT', `salts must be a list of salts from parseSalt, got ${describeValue(input.salts)}`, { field: 'salts' });
   input.salts.forEach((s, i) => saltArgument(s, dataset, `salts[${i}]`));
+  if (input.undissolved !== undefined && !(Array.isArray(input.undissolved) && input.undissolved.every((u) => u !== null && typeof u === 'object' && typeof u.formula === 'string' && Number.isFinite(u.undissolvedMass)))) {
+    throw new IonheatError('INVALID_ARGUMENT', `undissolved must be a list of { formula, undissolvedMass } when given, got ${describeValue(input.undissolved)}`, { field: 'undissolved' });
+  }
   if (input.secondsAboveBurnThreshold !== undefined) numberArgument(input.secondsAboveBurnThreshold, 'secondsAboveBurnThreshold', 'the seconds above the burn threshold', { min: 0, max: 1e9 });
-}
-
-/** The head of a citation, for a bracket after a caution. */
-function shortCitation(citation: string | undefined): string | undefined {
-  if (!citation) return undefined;
-  const cut = citation.search(/[.:;]\s/);
-  const head = cut > 0 ? citation.slice(0, cut) : citation;
-  return head.length > 100 ? `${head.slice(0, 99)}…` : head;
 }
 
 /**
@@ -76,13 +74,20 @@ function shortCitation(citation: string | undefined): string | undefined {
  * - cold fill: cold injury from prolonged direct contact, frostbite risk at or
  *   below 0 °C (common practice: a cloth between pack and skin, about 20
  *   minutes at a time);
- * - every hazard the hazards table gives for each salt, with its source;
+ * - salt left undissolved at the final temperature (a lump that delivers no heat);
+ * - every hazard the hazards table gives for each salt, with its source, and
+ *   whether its sale is restricted;
  * - last, the screening line.
+ *
+ * Each caution is `{ kind, severity, text }` ({@link Caution}): `boiling` and a
+ * `contact-burn` whose value passes the threshold are `danger`; a burn only
+ * the interval reaches, and frostbite, `warning`; a warm or mildly cold fill,
+ * undissolved salt and the screening line, `notice`.
  *
  * @param input - start and final temperatures with the final's 95 % interval (°C), any freezing/eutectic/boiling clamp,
  *   the salts, and optionally the seconds a time course spends above the burn threshold
  * @param dataset - the hazards table (default: built-in)
- * @returns the caution sentences, the screening line last
+ * @returns the cautions, the screening line last
  * @see ISO 13732-1:2006, source key `iso13732` (contact-burn threshold); the hazards table's sources, e.g. `clpAnnexVI`,
  *   `eu2019_1148`, `reachAnnexXVII`, `supplierSds`; cold-injury advice: `commonPractice`.
  *
@@ -90,55 +95,62 @@ function shortCitation(citation: string | undefined): string | undefined {
  * ```ts
  * const salts = [parseSalt('CaCl2')];
  * const list = packCautions({ startC: 20, final: { value: 62, low: 60, high: 64 }, salts });
- * list[0].startsWith('Contact-burn risk'); // true
- * list[list.length - 1] === SCREENING_LINE; // true
- * list.some((line) => line.startsWith('CaCl2 (irritant)')); // true
+ * list[0].kind; // 'contact-burn'
+ * list[0].severity; // 'danger'
+ * list[0].text.startsWith('Contact-burn risk'); // true
+ * list[list.length - 1].text === SCREENING_LINE; // true
+ * list.some((c) => c.kind === 'hazard-class' && c.text.startsWith('CaCl2 (irritant)')); // true
  * ```
  */
-export function packCautions(input: CautionInput, dataset: Dataset = builtinDataset()): string[] {
+export function packCautions(input: CautionInput, dataset: Dataset = builtinDataset()): Caution[] {
   checkCautionInput(input, dataset);
-  const out: string[] = [];
+  const out: Caution[] = [];
   const { startC, final } = input;
   const hot = final.value > startC + NEUTRAL_BAND_K;
   const cold = final.value < startC - NEUTRAL_BAND_K;
   if (input.clamp === 'boiling') {
     out.push(
-      'Boiling: the heat released would bring the fill to the boiling point of the solution. Boiling brine scalds, steam can burst the pack, and the real temperature may exceed 100 °C because dissolved salt raises the boiling point. Use less salt or more water.',
+      caution(
+        'boiling',
+        'danger',
+        'Boiling: the heat released would bring the fill to the boiling point of the solution. Boiling brine scalds, steam can burst the pack, and the real temperature may exceed 100 °C because dissolved salt raises the boiling point. Use less salt or more water.',
+      ),
     );
   }
   if (final.high > CONTACT_BURN_THRESHOLD_C) {
     const held = input.secondsAboveBurnThreshold !== undefined && input.secondsAboveBurnThreshold > 0 ? ` In the time course it stays above ${CONTACT_BURN_THRESHOLD_C} °C for about ${Math.round(input.secondsAboveBurnThreshold / 60)} min.` : '';
     out.push(
-      `Contact-burn risk: the fill may reach ${c(final.value)} (95 % interval up to ${c(final.high)}), above the roughly ${CONTACT_BURN_THRESHOLD_C} °C at which ISO 13732-1 puts the burn threshold for skin contact lasting many minutes to hours (threshold from memory, not checked against the standard). The hotter the pack and the longer it is held against skin, the greater the risk, and the threshold drops as contact lengthens. Keep an insulating sleeve between pack and skin and limit contact time; take special care with children, older people and anyone with poor sensation or circulation.${held}`,
+      caution(
+        'contact-burn',
+        final.value > CONTACT_BURN_THRESHOLD_C ? 'danger' : 'warning',
+        `Contact-burn risk: the fill may reach ${c(final.value)} (95 % interval up to ${c(final.high)}), above the roughly ${CONTACT_BURN_THRESHOLD_C} °C at which ISO 13732-1 puts the burn threshold for skin contact lasting many minutes to hours (threshold from memory, not checked against the standard). The hotter the pack and the longer it is held against skin, the greater the risk, and the threshold drops as contact lengthens. Keep an insulating sleeve between pack and skin and limit contact time; take special care with children, older people and anyone with poor sensation or circulation.${held}`,
+      ),
     );
   } else if (hot) {
     out.push(
-      `Warm fill: it stays below the roughly ${CONTACT_BURN_THRESHOLD_C} °C long-contact burn threshold of ISO 13732-1 (from memory), but prolonged contact with warm packs can still injure people who cannot feel heat or move away from it (common practice: a cover and limited contact time).`,
+      caution(
+        'warm-contact',
+        'notice',
+        `Warm fill: it stays below the roughly ${CONTACT_BURN_THRESHOLD_C} °C long-contact burn threshold of ISO 13732-1 (from memory), but prolonged contact with warm packs can still injure people who cannot feel heat or move away from it (common practice: a cover and limited contact time).`,
+      ),
     );
   }
   if (cold) {
     const frost = final.low <= 0 || input.clamp === 'freezing' || input.clamp === 'eutectic';
     out.push(
-      `Cold injury: prolonged direct contact of a cold pack with skin can injure it${frost ? '; this fill can reach 0 °C or below, where frostbite is possible within minutes' : ''}. Common practice: a cloth between pack and skin, about 20 minutes at a time with breaks, never on skin that cannot feel cold.`,
+      caution(
+        'cold-injury',
+        frost ? 'warning' : 'notice',
+        `Cold injury: prolonged direct contact of a cold pack with skin can injure it${frost ? '; this fill can reach 0 °C or below, where frostbite is possible within minutes' : ''}. Common practice: a cloth between pack and skin, about 20 minutes at a time with breaks, never on skin that cannot feel cold.`,
+      ),
     );
   }
-  for (const salt of input.salts) {
-    const hazards = saltHazards(salt, dataset);
-    if (hazards.length === 0) {
-      const coverage = hazardCoverage(salt, dataset);
-      out.push(
-        coverage.status === 'no hazard data'
-          ? `${salt.formula}: no hazard data in the ionheat hazards table (nothing for ${coverage.missingIons.join(' or ')}), which is not a sign of safety; read the safety data sheet of the material actually used.`
-          : `${salt.formula}: no hazard class in the ionheat hazards table (its ions add none of their own); the safety data sheet of the material actually used still decides.`,
-      );
-      continue;
-    }
-    for (const h of hazards) {
-      const cited = shortCitation(dataset.source(h.source)?.citation) ?? h.source;
-      const restricted = h.classes.includes('restricted') || h.classes.includes('explosive-precursor') ? ' Its sale or supply is restricted or must be reported in some jurisdictions; check the local rules before choosing it.' : '';
-      out.push(`${salt.formula} (${h.classes.join(', ')}): ${h.statement}${restricted} [${h.source}: ${cited}${h.fromMemory ? '; classification from memory' : ''}]`);
+  for (const u of input.undissolved ?? []) {
+    if (u.undissolvedMass >= 0.05) {
+      out.push(caution('undissolved-salt', 'notice', `Undissolved salt: about ${u.undissolvedMass.toFixed(1)} g of ${u.formula} stays solid at the final temperature; it gives no heat of solution, settles as a lump and can make the pack hard or uneven against the skin.`));
     }
   }
-  out.push(SCREENING_LINE);
+  for (const salt of input.salts) out.push(...hazardCautions(salt, dataset));
+  out.push(caution('screening', 'notice', SCREENING_LINE));
   return out;
 }

@@ -18,60 +18,12 @@ import { KIRCHHOFF_RANGE_C, kirchhoffShifted, solutionHeatCapacity, typicalSolut
 import { waterSpecificHeat } from './solidHeatCapacity.js';
 import { brineModel, type BrineModel } from '../brine/brineModel.js';
 import { waterConstants } from '../brine/brineParameterSets.js';
-import { checkOptionKeys, optionNames } from '../quantity/argumentChecks.js';
+import { checkOptionKeys } from '../quantity/argumentChecks.js';
+import { checkPackInput, packInputNumber, SOLID_KEYS, type PackFill, type PackOptions, type PackSolid } from './packInput.js';
 import type { SolubilityCurve } from './solubilityCurve.js';
 import { packSaltData, type PackSaltData } from './packSaltData.js';
 import type { SolubilityStatus } from './saltSolubility.js';
 import { solubilityBoundsOf, solubilityNote, type SolubilityBounds } from './solubilityBounds.js';
-
-/** One solid of a fill. */
-export interface PackSolid {
-  /** Formula as loaded, hydrate water included (`CaCl2`, `NaCH3COO·3H2O`). */
-  formula: string;
-  /** Grams loaded. */
-  massG: number;
-}
-
-/** What goes into the pack. */
-export interface PackFill {
-  solids: readonly PackSolid[];
-  /** Grams of liquid water (not counting any water of crystallization of the solids). */
-  waterG: number;
-  /** Start temperature of water, solids and container, °C (default 20 °C). */
-  startC?: number;
-  /** Heat capacity of the container, gel or wrapping that follows the fill's temperature, J/K (default 0). */
-  containerJPerK?: number;
-}
-
-/** How the 95 % interval of the final temperature is found. */
-export type PackIntervalOptions =
-  | { method: 'bounds' }
-  | {
-      method: 'monte-carlo';
-      /** Number of draws (default 2000). */
-      samples?: number;
-      /** Seed of the pseudo-random draws (default 1): the same seed gives the same interval. */
-      seed?: number;
-    };
-
-/** Options of the pack model. */
-export interface PackOptions {
-  /**
-   * Your own heat capacity of the whole fill (solution, undissolved solid and
-   * container), J/K, replacing the sum of parts.
-   */
-  heatCapacityJPerK?: number;
-  /** Standard uncertainty of your heat capacity, J/K (default 0). */
-  heatCapacityUJPerK?: number;
-  /**
-   * Kept for callers of earlier versions: the enthalpy balance now always
-   * takes ΔsolH°(∞) at the start temperature (Kirchhoff, with the typical
-   * ΔsolCp° and a wider interval where the salt's own is unknown).
-   */
-  kirchhoff?: boolean;
-  /** Default `{ method: 'bounds' }`. */
-  interval?: PackIntervalOptions;
-}
 
 /** An equilibrium solid a salt may leave undissolved. @internal */
 export interface PreparedPhase {
@@ -138,9 +90,6 @@ export interface PreparedFill {
   dataset: Dataset;
 }
 
-/** Default start temperature: a room, °C (common practice). */
-export const DEFAULT_START_C = 20;
-
 /**
  * Relative allowance for the heat capacity a dissolved salt adds when the
  * infinite-dilution value is not tabulated: an assumed 50 % of the crystal's
@@ -148,27 +97,8 @@ export const DEFAULT_START_C = 20;
  */
 const ADDITIVITY_FALLBACK_RELATIVE = 0.5;
 
-const FILL_KEYS = optionNames<PackFill>('a pack fill', { solids: true, waterG: true, startC: true, containerJPerK: true });
-const SOLID_KEYS = optionNames<PackSolid>('a solid of the fill', { formula: true, massG: true });
-const PACK_OPTION_KEYS = optionNames<PackOptions>('the pack model', { heatCapacityJPerK: true, heatCapacityUJPerK: true, kirchhoff: true, interval: true });
-const INTERVAL_KEYS = optionNames<{ method: string; samples?: number; seed?: number }>('the interval option', { method: true, samples: true, seed: true });
-
 function invalid(field: string, message: string): IonheatError {
   return new IonheatError('INVALID_ARGUMENT', message, { field });
-}
-
-/**
- * The range a mass (g) or heat capacity (J/K) of a fill may take: from a
- * microgram (or µJ/K) to a thousand tonnes (or GJ/K), so that every product
- * and quotient of the heat balance stays a finite, meaningful number.
- */
-const FILL_RANGE = { min: 1e-6, max: 1e9 };
-
-function checkPositive(value: unknown, field: string, what: string, unit: string): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw invalid(field, `${what} (${field}) must be a number of ${unit}, got ${typeof value === 'number' ? String(value) : typeof value}`);
-  if (value <= 0) throw invalid(field, `${what} (${field}) must be greater than zero, got ${value} ${unit}`);
-  if (value < FILL_RANGE.min || value > FILL_RANGE.max) throw invalid(field, `${what} (${field}) must lie between ${FILL_RANGE.min} and ${FILL_RANGE.max} ${unit}, got ${value} ${unit}`);
-  return value;
 }
 
 /** ΔsolH°(∞) at the start temperature, by the one Kirchhoff correction of the solution layer. */
@@ -211,36 +141,7 @@ function saltDataOf(salt: Salt, field: string, dataset: Dataset): PackSaltData {
  * @internal
  */
 export function preparePackFill(fill: PackFill, options: PackOptions = {}, dataset: Dataset = builtinDataset()): PreparedFill {
-  if (options === null || typeof options !== 'object') throw invalid('options', `the pack options are an object, got ${options === null ? 'null' : typeof options}`);
-  if (fill === null || typeof fill !== 'object') throw invalid('fill', 'a pack fill is an object with solids, waterG and optionally startC and containerJPerK');
-  checkOptionKeys(options, PACK_OPTION_KEYS, 'options');
-  checkOptionKeys(fill, FILL_KEYS, 'fill');
-  if (!Array.isArray(fill.solids) || fill.solids.length === 0 || fill.solids.length > 100) throw invalid('solids', 'a pack fill needs from one to 100 solids (solids: [{ formula, massG }])');
-  const waterG = checkPositive(fill.waterG, 'waterG', 'the water', 'g');
-  const startGiven = fill.startC ?? DEFAULT_START_C;
-  const startC = startGiven === 0 ? 0 : startGiven; // −0 reported as 0
-  if (typeof startC !== 'number' || !Number.isFinite(startC) || startC < 0 || startC >= 100) {
-    throw invalid('startC', `the start temperature (startC) must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${typeof startC === 'number' ? String(startC) : typeof startC} °C`);
-  }
-  const containerJPerK = fill.containerJPerK ?? 0;
-  if (typeof containerJPerK !== 'number' || !Number.isFinite(containerJPerK) || containerJPerK < 0 || containerJPerK > FILL_RANGE.max) {
-    throw invalid('containerJPerK', `the container heat capacity (containerJPerK) must be from 0 to ${FILL_RANGE.max} J/K, got ${typeof containerJPerK === 'number' ? String(containerJPerK) : typeof containerJPerK}`);
-  }
-  const interval: unknown = options.interval;
-  if (interval !== undefined) {
-    const iv = interval as { method?: unknown; samples?: unknown; seed?: unknown };
-    if (iv === null || typeof iv !== 'object' || (iv.method !== 'bounds' && iv.method !== 'monte-carlo')) throw invalid('interval', `the interval option is { method: 'bounds' } or { method: 'monte-carlo', samples, seed }, got ${iv === null || typeof iv !== 'object' ? String(iv) : `method ${String(iv.method as string)}`}`);
-    checkOptionKeys(iv, iv.method === 'bounds' ? { owner: 'the bounds interval', keys: ['method'] } : INTERVAL_KEYS, 'interval');
-    if (iv.samples !== undefined && !(typeof iv.samples === 'number' && iv.samples >= 1 && iv.samples <= 100_000)) throw invalid('interval.samples', `the number of Monte Carlo draws (interval.samples) must be from 1 to 100000, got ${typeof iv.samples === 'number' ? iv.samples : typeof iv.samples}`);
-    if (iv.seed !== undefined && !(typeof iv.seed === 'number' && Number.isFinite(iv.seed))) throw invalid('interval.seed', `the Monte Carlo seed (interval.seed) must be a finite number, got ${typeof iv.seed === 'number' ? iv.seed : typeof iv.seed}`);
-  }
-  let heatCapacityOverride: PreparedFill['heatCapacityOverride'];
-  if (options.heatCapacityJPerK !== undefined) {
-    const value = checkPositive(options.heatCapacityJPerK, 'heatCapacityJPerK', 'your heat capacity', 'J/K');
-    const u = options.heatCapacityUJPerK ?? 0;
-    if (typeof u !== 'number' || !Number.isFinite(u) || u < 0 || u > value) throw invalid('heatCapacityUJPerK', `the uncertainty of your heat capacity (heatCapacityUJPerK) must be from 0 J/K up to the heat capacity itself, got ${typeof u === 'number' ? String(u) : typeof u}`);
-    heatCapacityOverride = { value, u };
-  }
+  const { waterG, startC, containerJPerK, heatCapacityOverride } = checkPackInput(fill, options);
 
   const water = waterSpecificHeat(dataset);
   const waterMolarMass = molarMass({ H: 2, O: 1 }, dataset);
@@ -261,7 +162,7 @@ export function preparePackFill(fill: PackFill, options: PackOptions = {}, datas
       if (isIonheatError(e)) throw new IonheatError(e.code, `${field}.formula "${solid.formula}": ${e.message}`, { text: solid.formula, field: `${field}.formula` });
       throw e;
     }
-    const massG = checkPositive(solid.massG, `${field}.massG`, `the mass of ${salt.formula}`, 'g');
+    const massG = packInputNumber(solid.massG, 'massG', `${field}.massG`, `the mass of ${salt.formula}`);
     const earlier = seen.get(salt.anhydrous);
     if (earlier !== undefined) {
       throw invalid(`${field}.formula`, `${salt.formula} (${field}) and ${earlier} are the same salt; they share one solubility, so list the salt once`);

@@ -8,13 +8,16 @@
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { basisOrder, makeEstimate, type Basis, type Estimate } from '../quantity/estimate.js';
-import { finalTemperatureInterval, heatCapacityRelativeU, type TemperatureInterval } from './finalTemperatureInterval.js';
+import { finalTemperatureInterval, heatCapacityRelativeU, transitionBracket, type TemperatureInterval } from './finalTemperatureInterval.js';
 import type { FillEquilibrium } from './fillEquilibrium.js';
 import { packCautions } from './packCautions.js';
-import { preparePackFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
+import type { Caution } from '../quantity/caution.js';
+import { preparePackFill, type PreparedFill } from './packFill.js';
+import { type PackFill, type PackOptions } from './packInput.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
 import { integralFromInfinite } from '../solution/toMolality.js';
 import type { SolubilityStatus } from './saltSolubility.js';
+import { CONVERSION_MIN_SOLUBILITY } from './solidConversion.js';
 
 /** One solid at the end, grams of the solid as loaded unless said otherwise. */
 export interface PackDissolvedSolid {
@@ -98,7 +101,8 @@ export interface PackResult {
   heat: PackHeat;
   heatCapacity: PackHeatCapacity;
   clamp: PackClamp | null;
-  cautions: string[];
+  /** Burns, cold injury, boiling, undissolved salt, the salts' hazards and the screening line, each `{ kind, severity, text }`. */
+  cautions: Caution[];
   notes: string[];
   /** Source keys of data/sources.json behind the numbers. */
   sources: string[];
@@ -145,6 +149,8 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
     if (e.fraction < 1 && e.converts) {
       notes.push(`undissolved ${s.salt.formula} is taken to turn into ${e.undissolvedPhase}, the solid in equilibrium with the saturated solution, taking ${e.undissolvedWater > s.salt.water ? 'up' : 'off'} its water of crystallization; the heat of that change, ΔsolH(${s.salt.formula}) − ΔsolH(${e.undissolvedPhase}), is counted`);
       if (state.hydrationFraction < 1) notes.push(`there is too little water for all the undissolved solid to become ${e.undissolvedPhase}; only ${(100 * state.hydrationFraction).toFixed(0)} % of that change is counted and no liquid remains`);
+    } else if (e.slowConversion) {
+      notes.push(`undissolved ${s.salt.formula} is taken to stay as loaded: it barely dissolves (${e.solubility!.value.toPrecision(2)} g per 100 g water, below the ${CONVERSION_MIN_SOLUBILITY} g at which it is counted), and its change into ${e.solubility!.phase} runs through the solution, far more slowly than a pack is used; the 95 % interval reaches to the temperature with that change counted in full`);
     } else if (e.fraction < 1 && e.solubility && e.solubility.phase !== s.salt.formula) {
       notes.push(`undissolved ${s.salt.formula} is taken to stay as loaded: no enthalpy of solution is known for ${e.solubility.phase}, the solid in equilibrium with the saturated solution`);
     }
@@ -173,7 +179,10 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
   const clamp: PackClamp | null = solution.clamp ? { ...solution.clamp, message: clampMessage(solution.clamp.kind, solution.clamp.temperature, solution) } : null;
   if (state.iceG > 0) notes.push(`${state.iceG.toFixed(1)} g of ice forms: below 0 °C the brine concentrates until its water activity (Pitzer osmotic coefficient) equals that over ice; the latent heat, ΔfusH(T₀) = ΔfusH(0 °C) + ΔfusCp·T₀, is counted`);
   if (clamp) notes.push(clamp.message);
-  if (solution.jump) notes.push(`the balance is pinned at ${t.toFixed(2)} °C, where the equilibrium solid changes in the solubility table; the true temperature lies near it`);
+  if (solution.transition) {
+    const bracket = transitionBracket(fill, solution.transition.temperature);
+    notes.push(`the fill holds at ${t.toFixed(2)} °C, where the equilibrium solid changes in the solubility table${bracket ? ` (somewhere between its points at ${bracket[0]} and ${bracket[1]} °C, taken at the midpoint; the 95 % interval spans both)` : ''}: both solids are present, ${(100 * solution.transition.lowShare).toFixed(0)} % of the fill in the state below the change and the rest in the state above, which closes the heat balance`);
+  } else if (solution.jump) notes.push(`the balance is pinned at ${t.toFixed(2)} °C, where the equilibrium solid changes in the solubility table; the true temperature lies near it`);
   if (fill.heatCapacityOverride) notes.push('heat capacity: your value replaces the sum of parts (solution, undissolved solid and container)');
   else notes.push('heat capacity from the parts: liquid water, the dissolved salt as its apparent molar heat capacity φCp = φCp°(∞) + φJ(m) (Pitzer), the undissolved solid, any ice, and the container');
   notes.push('heat balance: the enthalpy of the final state equals that of the start; each salt dissolves with its integral enthalpy of solution to the molality it reaches, ΔsolH°(∞, T₀) + φL(m, T₀) (brine module), and the interval carries the uncertainty of φL and φCp');
@@ -223,7 +232,7 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
       parts: { water: state.heatCapacityParts.water, dissolvedSalt: state.heatCapacityParts.dissolved, undissolvedSolid: state.heatCapacityParts.undissolved, container: state.heatCapacityParts.container, ice: state.heatCapacityParts.ice },
     },
     clamp,
-    cautions: packCautions({ startC: fill.startC, final: finalTemperature, clamp: clamp?.kind, salts: fill.solids.map((s) => s.salt) }, dataset),
+    cautions: packCautions({ startC: fill.startC, final: finalTemperature, clamp: clamp?.kind, salts: fill.solids.map((s) => s.salt), undissolved: dissolved }, dataset),
     notes: [...new Set(notes)],
     sources: [...sources].sort(),
   };
@@ -264,8 +273,9 @@ export function packResult(fill: PreparedFill, solution: FillSolution, interval:
  * r.iceMass; // 0
  * // 30 g CaCl2 in 100 g water: a hot pack, with the contact-burn caution first
  * const hot = packFinalTemperature({ solids: [{ formula: 'CaCl2', massG: 30 }], waterG: 100, startC: 20 });
- * hot.finalTemperature.value; // ≈ 62.6 °C
- * hot.cautions[0].startsWith('Contact-burn risk'); // true
+ * hot.finalTemperature.value; // ≈ 72.0 °C
+ * hot.cautions[0].kind; // 'contact-burn'
+ * hot.cautions[0].severity; // 'danger'
  * ```
  */
 export function packFinalTemperature(fill: PackFill, options: PackOptions = {}, dataset: Dataset = builtinDataset()): PackResult {

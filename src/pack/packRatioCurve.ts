@@ -9,10 +9,11 @@ import { describeValue, optionsArgument, optionNames } from '../quantity/argumen
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { IonheatError } from '../error.js';
-import { bracketedRoot } from './bracketedRoot.js';
+import { bracketedRoot } from '../numeric/bracketedRoot.js';
 import { finalTemperatureInterval } from './finalTemperatureInterval.js';
-import { goldenSectionMaximum } from './goldenSectionMaximum.js';
-import { preparePackFill, scalePreparedFill, type PackFill, type PackOptions, type PreparedFill } from './packFill.js';
+import { goldenSectionMaximum } from '../numeric/goldenSectionMaximum.js';
+import { preparePackFill, scalePreparedFill, type PreparedFill } from './packFill.js';
+import { type PackFill, type PackOptions } from './packInput.js';
 import { solveFillTemperature, type FillSolution } from './solveFillTemperature.js';
 
 const PACK_CURVE_OPTIONS = optionNames<PackCurveOptions>('packRatioCurve', { points: true, maxRatio: true, targetC: true, band: true });

@@ -13,8 +13,10 @@ import type { Estimate } from '../quantity/estimate.js';
 import { evaluateFill, fillScratch } from './fillEquilibrium.js';
 import { finalTemperatureInterval } from './finalTemperatureInterval.js';
 import { CONTACT_BURN_THRESHOLD_C, packCautions } from './packCautions.js';
+import type { Caution } from '../quantity/caution.js';
 import { packResult } from './packFinalTemperature.js';
-import { preparePackFill, type PackFill, type PackOptions } from './packFill.js';
+import { preparePackFill } from './packFill.js';
+import { type PackFill, type PackOptions } from './packInput.js';
 import { BOILING_C, solveFillTemperature } from './solveFillTemperature.js';
 
 const BAND_KEYS = optionNames<{ lowC: number; highC: number }>('packTimeCourse', { lowC: true, highC: true });
@@ -82,7 +84,8 @@ export interface PackTimeCourse {
   band: { lowC: number; highC: number; secondsInside: number; firstInsideS: number | null; lastInsideS: number | null } | null;
   /** Seconds above the contact-burn threshold. */
   secondsAboveBurnThreshold: number;
-  cautions: string[];
+  /** As a pack result's, with the time spent above the burn threshold in the contact-burn caution; `{ kind, severity, text }`. */
+  cautions: Caution[];
   notes: string[];
 }
 
@@ -265,7 +268,7 @@ export function packTimeCourse(fill: PackFill, options: TimeCourseOptions = {}, 
   if (assumed.length > 0) notes.push(`assumed values for illustration, not measurements: ${assumed.join(', ')}; give your own for a real pack`);
   if (frozeAt !== null) notes.push(`from about ${Math.round(frozeAt)} s the pack sits at the freezing floor of the solution; ice would form, and its later melting is not followed`);
   const cautions = packCautions(
-    { startC: prepared.startC, final: adiabaticResult.finalTemperature, clamp: adiabaticResult.clamp?.kind, salts: prepared.solids.map((s) => s.salt), secondsAboveBurnThreshold: above },
+    { startC: prepared.startC, final: adiabaticResult.finalTemperature, clamp: adiabaticResult.clamp?.kind, salts: prepared.solids.map((s) => s.salt), secondsAboveBurnThreshold: above, undissolved: adiabaticResult.dissolved },
     dataset,
   );
   return {

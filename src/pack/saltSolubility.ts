@@ -26,6 +26,15 @@ export type SolubilityStatus = 'measured' | 'estimated' | 'unknown';
 const TABLE_RELATIVE_U = 0.02;
 const FROM_MEMORY_RELATIVE_U = 0.05;
 
+/**
+ * Relative standard uncertainty of a measured solubility curve: 2 % for a
+ * tabulated value, 5 % for one from memory (see the table's note).
+ * @internal
+ */
+export function measuredSolubilityRelativeU(curve: { fromMemory: boolean }): number {
+  return curve.fromMemory ? FROM_MEMORY_RELATIVE_U : TABLE_RELATIVE_U;
+}
+
 /** What the pack model and {@link saltSolubility} know of one salt's solubility. @internal */
 export interface PackSolubility {
   status: SolubilityStatus;
@@ -79,7 +88,7 @@ function build(salt: Salt, dataset: Dataset): PackSolubility {
  * @internal
  */
 export function packSolubility(salt: Salt, dataset: Dataset = builtinDataset()): PackSolubility {
-  const cache = dataset.memo('pack.solubility', () => new Map<string, PackSolubility>());
+  const cache = dataset.cache<string, PackSolubility>('pack.solubility');
   let known = cache.get(salt.anhydrous);
   if (!known) {
     known = build(salt, dataset);
@@ -154,7 +163,7 @@ export function saltSolubility(salt: string | Salt, t = 25, dataset: Dataset = b
     const p = known.product!;
     return { ...base, value: p.value, u: p.u, low: p.low, high: p.high, solidPhase: p.solidPhase, method: 'solubility-product', source: p.source, fromMemory: p.fromMemory, extrapolated: t !== 25 };
   }
-  const u = at.value * (known.curve.fromMemory ? FROM_MEMORY_RELATIVE_U : TABLE_RELATIVE_U);
+  const u = at.value * measuredSolubilityRelativeU(known.curve);
   return {
     ...base,
     value: at.value,

@@ -169,7 +169,7 @@ export function waterSpecificHeat(dataset: Dataset = builtinDataset()): Estimate
  */
 export function aqueousHeatCapacity(salt: string | Salt, dataset: Dataset = builtinDataset()): Estimate | undefined {
   const s = typeof salt === 'string' ? parseSalt(salt, dataset) : salt;
-  const index = dataset.memo('pack.ionHeatCapacities', () => new Map(dataset.records('ion-heat-capacities-aq.json').map((r) => [r.ion, r])));
+  const index = dataset.index('ion-heat-capacities-aq.json');
   let value = 0;
   const us: number[] = [];
   const sources: string[] = [];

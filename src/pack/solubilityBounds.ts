@@ -3,7 +3,8 @@
  * temperature: a salt whose solubility is unknown may dissolve anywhere
  * from none to all of it, and an estimated solubility anywhere in its 95 %
  * range. The fill is solved again at those ends and the interval widened to
- * take both in.
+ * take both in. Likewise the conversion of undissolved solid that barely
+ * dissolves, left out of the central value, is counted at one end.
  *
  * @module
  */
@@ -23,7 +24,7 @@ export interface SolubilityBounds {
   label: string;
 }
 
-/** The ends of a salt's solubility range, or undefined for a measured one (its 2 % is left to the table's note). @internal */
+/** The ends of a salt's solubility range, or undefined for a measured one (its 2 % enters the interval as an uncertain input, finalTemperatureInterval.ts). @internal */
 export function solubilityBoundsOf(salt: Salt, solubility: PackSolubility): SolubilityBounds | undefined {
   if (solubility.status === 'measured') return undefined;
   if (solubility.status === 'unknown') {
@@ -53,26 +54,39 @@ function withCurves(fill: PreparedFill, end: 'lower' | 'upper'): PreparedFill {
 /**
  * The interval widened to take in the fill solved with every open
  * solubility at the low end of its range, and at the high end (for an
- * unknown one: none and all of it dissolved). Unchanged when every solid's
- * solubility is measured.
+ * unknown one: none and all of it dissolved), and the fill solved with the
+ * slow conversion of undissolved solid that barely dissolves counted in full
+ * (left out of the central value, see `convertsWithinPack`). Unchanged
+ * when every solid's solubility is measured and no conversion was left out.
  * @internal
  */
 export function withSolubilityBounds(fill: PreparedFill, solution: FillSolution, interval: TemperatureInterval): TemperatureInterval {
   const open = fill.solids.filter((s) => s.solubilityBounds !== undefined);
-  if (open.length === 0) return interval;
-  const ends: FillSolution[] = [solveFillTemperature(withCurves(fill, 'lower'))];
-  // An unknown solubility's upper end is the fill as solved (all of it dissolved): no need to solve it again.
-  if (open.some((s) => s.solubilityBounds!.upper !== undefined)) ends.push(solveFillTemperature(withCurves(fill, 'upper')));
+  const slow = fill.solids.filter((_, i) => solution.state.solids[i]!.slowConversion);
+  if (open.length === 0 && slow.length === 0) return interval;
+  const ends: FillSolution[] = [];
+  if (open.length > 0) {
+    ends.push(solveFillTemperature(withCurves(fill, 'lower')));
+    // An unknown solubility's upper end is the fill as solved (all of it dissolved): no need to solve it again.
+    if (open.some((s) => s.solubilityBounds!.upper !== undefined)) ends.push(solveFillTemperature(withCurves(fill, 'upper')));
+  }
+  if (slow.length > 0) ends.push(solveFillTemperature(fill, { slowConversion: true }));
   const temperatures = ends.map((e) => e.temperature);
   const low = Math.min(interval.low, solution.temperature, ...temperatures);
   const high = Math.max(interval.high, solution.temperature, ...temperatures);
   const widened = low < interval.low || high > interval.high;
-  const labels = open.map((s) => s.solubilityBounds!.label).join('; ');
+  const labels = [
+    ...open.map((s) => `both ends of ${s.solubilityBounds!.label}`),
+    ...slow.map((s) => {
+      const e = solution.state.solids[fill.solids.indexOf(s)]!;
+      return `the slow conversion of undissolved ${s.salt.formula} into ${e.solubility!.phase} counted in full`;
+    }),
+  ].join('; ');
   return {
     ...interval,
     low,
     high,
     u: Math.max(interval.u, (high - low) / (2 * COVERAGE_95)),
-    description: `${interval.description}; ${widened ? 'widened to take in' : 'checked against'} the fill solved at both ends of ${labels}`,
+    description: `${interval.description}; ${widened ? 'widened to take in' : 'checked against'} the fill solved with ${labels}`,
   };
 }

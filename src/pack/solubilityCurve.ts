@@ -12,6 +12,7 @@ import { builtinDataset } from '../data/builtin.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import type { Salt } from '../chem/salt.js';
 import { IonheatError, isIonheatError } from '../error.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /** One point of a solubility curve, with its equilibrium solid. */
 export interface SolubilityPoint {
@@ -191,7 +192,7 @@ export function solubilityAt(curve: SolubilityCurve, t: number): SolubilityAt {
   const q = pts[k + 1]!;
   const value = Math.max(0, p.value + ((q.value - p.value) * (t - p.t)) / (q.t - p.t));
   const near = t - p.t <= q.t - t ? p : q;
-  return { value: value === 0 ? 0 : value, phase: near.phase, phaseWater: near.phaseWater === 0 ? 0 : near.phaseWater, extrapolated: t < pts[0]!.t || t > pts[n - 1]!.t };
+  return { value: unsignedZero(value), phase: near.phase, phaseWater: unsignedZero(near.phaseWater), extrapolated: t < pts[0]!.t || t > pts[n - 1]!.t };
 }
 
 /**

@@ -6,8 +6,8 @@
  *
  * @module
  */
-import { bracketedRoot } from './bracketedRoot.js';
-import { evaluateFill, fillEquilibrium, fillScratch, frozenMargin, type FillEquilibrium, type FillScratch, type Perturbation } from './fillEquilibrium.js';
+import { bracketedRoot } from '../numeric/bracketedRoot.js';
+import { evaluateFill, fillEquilibrium, fillScratch, frozenMargin, mixedFillState, type FillEquilibrium, type FillScratch, type Perturbation } from './fillEquilibrium.js';
 import type { PreparedFill } from './packFill.js';
 
 /** Where the balance was cut short. @internal */
@@ -25,6 +25,8 @@ export interface FillSolution {
   clamp: FillClamp | undefined;
   /** True when the balance jumps across zero (a change of equilibrium solid) rather than passing through it. */
   jump: boolean;
+  /** Where the fill holds at a change of equilibrium solid: the change's temperature (°C) and the share of the fill in the state below it (0–1). */
+  transition?: { temperature: number; lowShare: number };
   /** Grams of water boiled off at a boiling hold (0 elsewhere). */
   vaporG: number;
 }
@@ -172,17 +174,26 @@ function stateAt(ctx: Solver, t: number): FillEquilibrium {
   return fillEquilibrium(ctx.fill, t, ctx.perturbation, ctx.w);
 }
 
+/** Half-width of the step across a change of equilibrium solid, K: the states on either side of it. */
+const ACROSS_CHANGE_K = 1e-9;
+
 function finish(ctx: Solver, t: number): FillSolution {
   let state = stateAt(ctx, t);
   const f = state.heatCapacity * (t - ctx.t0) + state.heatJ;
   const jump = Math.abs(f) > 1e-6 * Math.abs(state.heatJ) + 1e-6;
   if (jump) {
-    // Pinned at a change of equilibrium solid: report the change's own temperature, so that fills pinned there agree exactly.
+    // Pinned at a change of equilibrium solid: the fill holds at the change's own temperature with both solids
+    // present, a share of it in the state just below and the rest in the state just above, the share closing the balance.
     for (const s of ctx.fill.phaseChanges) {
       if (Math.abs(s - t) < 1e-6) {
-        t = s;
-        state = stateAt(ctx, t);
-        break;
+        const below = stateAt(ctx, s - ACROSS_CHANGE_K);
+        const above = stateAt(ctx, s + ACROSS_CHANGE_K);
+        const fBelow = below.heatCapacity * (s - ctx.t0) + below.heatJ;
+        const fAbove = above.heatCapacity * (s - ctx.t0) + above.heatJ;
+        if (fBelow === fAbove || Math.sign(fBelow) === Math.sign(fAbove)) break;
+        const lowShare = fAbove / (fAbove - fBelow);
+        state = { ...mixedFillState(below, above, lowShare), temperature: s };
+        return { temperature: s, state, clamp: undefined, jump: true, vaporG: 0, transition: { temperature: s, lowShare } };
       }
     }
   }

@@ -6,43 +6,18 @@
  *
  * @module
  */
-import { z } from 'zod';
 import { IonheatError } from '../error.js';
 import { COVERAGE_95 } from './constants.js';
 import { roundToExponent, roundToUncertainty } from './rounding.js';
 import { estimateArgument } from './argumentChecks.js';
+import { normalCdf } from '../numeric/normalCdf.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
+import { basisOrder } from './basisOrder.js';
+import type { Basis, Estimate } from './estimateSchema.js';
 
-/**
- * How much an estimate can be trusted, most trusted first:
- * `measured` (a tabulated measurement), `cycle` (closed from tabulated
- * formation enthalpies), `anchored` (a model difference added to measured
- * values of related salts), `model` (an estimator alone).
- */
-export const basisSchema = z.enum(['measured', 'cycle', 'anchored', 'model']);
-export type Basis = z.infer<typeof basisSchema>;
-/** The bases in order of trust. */
-export const basisOrder: readonly Basis[] = ['measured', 'cycle', 'anchored', 'model'];
+export { basisOrder } from './basisOrder.js';
+export type { Basis, Estimate } from './estimateSchema.js';
 
-export const estimateSchema = z.strictObject({
-  /** What is estimated, in words: `lattice enthalpy`, `enthalpy of solution`. */
-  quantity: z.string(),
-  value: z.number(),
-  /** Standard uncertainty (one standard deviation), same unit as `value`. */
-  u: z.number().nonnegative(),
-  /** Lower end of the 95 % interval. */
-  low: z.number(),
-  /** Upper end of the 95 % interval. */
-  high: z.number(),
-  unit: z.string(),
-  basis: basisSchema,
-  /** Machine-readable method name, e.g. `kapustinskii`, `born-haber`, `anchored`. */
-  method: z.string(),
-  /** Source keys of `data/sources.json` behind the number. */
-  sources: z.array(z.string()),
-  /** Flags and caveats a reader should see beside the number. */
-  notes: z.array(z.string()),
-});
-export type Estimate = z.infer<typeof estimateSchema>;
 
 /** What a caller supplies to {@link makeEstimate}; the interval defaults to value ± 1.96·u. */
 export interface EstimateInput {
@@ -100,7 +75,7 @@ export function makeEstimate(input: EstimateInput): Estimate {
   requireText(input.quantity, 'quantity');
   requireText(input.unit, 'unit');
   requireText(input.method, 'method');
-  if (!basisSchema.safeParse(input.basis).success) throw new IonheatError('INVALID_ARGUMENT', `the basis of an estimate is one of ${basisOrder.join(', ')}, got ${typeof input.basis === 'string' ? `"${input.basis}"` : typeof input.basis}`, { field: 'basis' });
+  if (!basisOrder.includes(input.basis)) throw new IonheatError('INVALID_ARGUMENT', `the basis of an estimate is one of ${basisOrder.join(', ')}, got ${typeof input.basis === 'string' ? `"${input.basis}"` : typeof input.basis}`, { field: 'basis' });
   requireTextList(input.sources, 'sources');
   requireTextList(input.notes, 'notes');
   requireFinite(input.value, 'value');
@@ -113,13 +88,12 @@ export function makeEstimate(input: EstimateInput): Estimate {
   if (!(low <= input.value && input.value <= high)) {
     throw new IonheatError('INVALID_ARGUMENT', `the interval [${low}, ${high}] does not hold the value ${input.value}`, { field: 'interval' });
   }
-  const clean = (x: number): number => (x === 0 ? 0 : x); // no −0 in results
   return {
     quantity: input.quantity,
-    value: clean(input.value),
-    u: clean(input.u),
-    low: clean(low),
-    high: clean(high),
+    value: unsignedZero(input.value),
+    u: unsignedZero(input.u),
+    low: unsignedZero(low),
+    high: unsignedZero(high),
     unit: input.unit,
     basis: input.basis,
     method: input.method,
@@ -161,8 +135,7 @@ export function roundEstimate(e: Estimate): Estimate {
   e = estimateArgument(e);
   const { value, u, exponent } = roundToUncertainty(e.value, e.u);
   if (e.u === 0) return { ...e };
-  const clean = (x: number): number => (x === 0 ? 0 : x);
-  return { ...e, value: clean(value), u, low: clean(roundToExponent(e.low, exponent)), high: clean(roundToExponent(e.high, exponent)) };
+  return { ...e, value: unsignedZero(value), u, low: unsignedZero(roundToExponent(e.low, exponent)), high: unsignedZero(roundToExponent(e.high, exponent)) };
 }
 
 /**
@@ -185,27 +158,4 @@ export function probabilityPositive(e: Pick<Estimate, 'value' | 'u'>): number {
   const z = e.value / e.u;
   if (e.u === 0 || !Number.isFinite(z)) return e.value > 0 ? 1 : 0;
   return normalCdf(z);
-}
-
-/**
- * The standard normal cumulative distribution Φ(x), by the complementary
- * error function (W. J. Cody's rational approximations are overkill here; the
- * Abramowitz–Stegun 7.1.26 form has |error| < 1.5e−7, enough for a probability
- * reported to three digits).
- *
- * @param x - the standard score z = (value − mean)/σ, dimensionless
- * @see Abramowitz, M.; Stegun, I. A. Handbook of Mathematical Functions (1964), eq. 7.1.26.
- * @example
- * ```ts
- * normalCdf(0); // 0.5
- * normalCdf(1.959963984540054); // ≈ 0.975
- * ```
- */
-export function normalCdf(x: number): number {
-  requireFinite(x, 'x');
-  const z = Math.abs(x) / Math.SQRT2;
-  const t = 1 / (1 + 0.3275911 * z);
-  const poly = t * (0.254829592 + t * (-0.284496736 + t * (1.421413741 + t * (-1.453152027 + t * 1.061405429))));
-  const erfc = poly * Math.exp(-z * z);
-  return x >= 0 ? 1 - erfc / 2 : erfc / 2;
 }

@@ -2,6 +2,7 @@ import type { Estimate } from './estimate.js';
 import { roundToUncertainty } from './rounding.js';
 import { describeValue, numberArgument } from './argumentChecks.js';
 import { IonheatError } from '../error.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /** The four numbers {@link formatEstimate} writes must be finite, u ≥ 0. */
 function requireEstimateNumbers(e: unknown): void {
@@ -23,7 +24,7 @@ export interface FormattedEstimate {
 function fixed(x: number, exponent: number, signed: boolean): string {
   const places = Math.max(0, -exponent);
   const scaled = exponent > 0 ? Math.round(x / 10 ** exponent) * 10 ** exponent : x;
-  let s = (Object.is(scaled, -0) ? 0 : scaled).toFixed(Math.min(places, 20));
+  let s = unsignedZero(scaled).toFixed(Math.min(places, 20));
   if (/^-0(\.0*)?$/.test(s)) s = s.slice(1);
   if (signed && !s.startsWith('-') && Number(s) !== 0) s = `+${s}`;
   return s.replace(/^-/, '−');

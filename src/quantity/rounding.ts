@@ -1,5 +1,6 @@
 import Decimal from 'decimal.js';
 import { numberArgument } from './argumentChecks.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /** The decimal exponent of the last digit kept when `u` is given to two significant digits. */
 function lastDigitExponent(u: number): number {
@@ -47,5 +48,5 @@ export function roundToUncertainty(value: number, u: number): { value: number; u
     roundedU = roundToExponent(u, exponent);
   }
   const rounded = roundToExponent(value, exponent);
-  return { value: rounded === 0 ? 0 : rounded, u: roundedU, exponent };
+  return { value: unsignedZero(rounded), u: roundedU, exponent };
 }

@@ -7,13 +7,7 @@
  *
  * @module
  */
-
-/** The q-quantile of sorted numbers (linear between neighbours). */
-function quantile(sorted: readonly number[], q: number): number {
-  const at = (sorted.length - 1) * q;
-  const i = Math.floor(at);
-  return sorted[i]! + (sorted[Math.min(i + 1, sorted.length - 1)]! - sorted[i]!) * (at - i);
-}
+import { quantile } from '../numeric/quantile.js';
 
 /**
  * The range [lo, hi] an axis shows: every value within Tukey's far fences

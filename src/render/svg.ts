@@ -8,6 +8,7 @@
  */
 import { fontStack, palette } from './palette.js';
 import { formatNumber } from '../notation/minus.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 /** Escapes text for an SVG (XML) text node or attribute value. */
 export function escapeXml(text: string): string {
@@ -18,7 +19,7 @@ export function escapeXml(text: string): string {
 export function num(x: number): string {
   if (!Number.isFinite(x)) throw new RangeError(`an SVG coordinate must be finite, got ${x}`);
   const r = Math.round(x * 100) / 100;
-  return String(r === 0 ? 0 : r);
+  return String(unsignedZero(r));
 }
 
 type Attributes = Record<string, string | number | undefined>;

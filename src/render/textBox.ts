@@ -6,6 +6,8 @@
  *
  * @module
  */
+import { SUBSCRIPT_DIGITS } from '../notation/formula.js';
+import { SUPERSCRIPT_CHARACTERS } from '../notation/charge.js';
 
 /** A label's box in px: left, top, right, bottom. */
 export interface TextBox {
@@ -17,7 +19,7 @@ export interface TextBox {
 
 /** Width of one character as a fraction of the font size (a wide sans-serif such as DejaVu Sans). */
 function charWidth(c: string): number {
-  if ('₀₁₂₃₄₅₆₇₈₉⁰¹²³⁴⁵⁶⁷⁸⁹⁺⁻'.includes(c)) return 0.42;
+  if (SUBSCRIPT_DIGITS.includes(c) || SUPERSCRIPT_CHARACTERS.includes(c)) return 0.42;
   if (c === ' ') return 0.33;
   if ('il.,:;\'|!·()[]'.includes(c)) return 0.36;
   if ('mwMW%@'.includes(c)) return 0.95;

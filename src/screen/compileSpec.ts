@@ -14,6 +14,7 @@ import { parseSpec, type SpecNode } from './specParse.js';
 import { SpecFields, type SpecType } from './specFields.js';
 import type { SpecOutcome } from './screenRow.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 
 const COMPILE_SPEC_OPTIONS = optionNames<CompileSpecOptions>('compileSpec', { schema: true, unavailable: true });
 
@@ -225,7 +226,7 @@ export function compileSpec(text: string, options: CompileSpecOptions = {}): Com
   };
   const finite = (x: number, n: SpecNode): number => {
     if (!Number.isFinite(x)) throw new Mismatch(`${src(n)} has no finite value (a division by zero?)`);
-    return x === 0 ? 0 : x;
+    return unsignedZero(x);
   };
 
   const evaluate = (n: SpecNode, row: unknown): Value => {

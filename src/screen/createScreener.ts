@@ -6,12 +6,13 @@
  *
  * @module
  */
+import { mergeOverrides } from '../data/recordCheck.js';
 import { describeValue, checkOptionKeys, optionNames } from '../quantity/argumentChecks.js';
 import type { Dataset, TableOverrides } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import { BoundedCache } from '../data/boundedCache.js';
 import type { HazardClass, SourceEntry } from '../data/schemas.js';
-import { hazardClassSchema } from '../data/schemas.js';
+import { HAZARD_CLASSES, isTerm } from '../data/tableTerms.js';
 import { parseSalt } from '../chem/parseSalt.js';
 import { typoSuspicion } from '../chem/typoSuspicion.js';
 import { findIon } from '../chem/ionIndex.js';
@@ -21,7 +22,7 @@ import type { Salt } from '../chem/salt.js';
 import { IonheatError, isIonheatError } from '../error.js';
 import { dissolve, type DissolveResult } from '../solution/dissolve.js';
 import { packFinalTemperature, type PackResult } from '../pack/packFinalTemperature.js';
-import { parseFillSpec } from './parseFillSpec.js';
+import { checkFillSpec } from './parseFillSpec.js';
 import { ownMeasuredEstimate, withOwnMeasurement } from './ownMeasurement.js';
 import { readCandidate, type CandidateInput, type CandidateLike } from './candidate.js';
 import { compileSpec, type CompiledSpec } from './compileSpec.js';
@@ -32,6 +33,7 @@ import { latentWarmer } from '../warmer/latentWarmer.js';
 import { screenSpecSchema } from './screenOutputJsonSchema.js';
 import { screenSources } from './screenSources.js';
 import { RepeatIndex } from './repeatIndex.js';
+import { caution } from '../quantity/caution.js';
 import {
   directionSchema,
   objectiveNameSchema,
@@ -121,21 +123,6 @@ type Computed =
 
 const SCREEN_OPTIONS = optionNames<ScreenOptions>('the screen', { objective: true, direction: true, spec: true, filters: true, excludeMeasured: true, sources: true, fill: true });
 const FILTER_KEYS = optionNames<ScreenFilters>('the screen filters', { excludeSalts: true, excludeIons: true, excludeHazards: true, minMolarMass: true, maxMolarMass: true });
-const FILL_SPEC_KEYS = optionNames<FillSpec>('a standard fill', { saltMassG: true, waterMassG: true, startC: true });
-
-/** A fill as given, checked: positive masses, a start where water is liquid. */
-function checkFill(fill: FillSpec | string): FillSpec {
-  if (typeof fill === 'string') return parseFillSpec(fill);
-  if (fill === null || typeof fill !== 'object') throw new IonheatError('INVALID_ARGUMENT', 'fill: a standard fill is { saltMassG, waterMassG, startC } or text such as 40:80@22', { field: 'fill' });
-  checkOptionKeys(fill, FILL_SPEC_KEYS, 'fill');
-  const { saltMassG, waterMassG, startC } = fill;
-  const ok = (x: unknown): x is number => typeof x === 'number' && Number.isFinite(x);
-  if (!ok(saltMassG) || saltMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.saltMassG must be a positive number of grams, got ${describeValue(saltMassG)}`, { field: 'fill.saltMassG' });
-  if (!ok(waterMassG) || waterMassG <= 0) throw new IonheatError('INVALID_ARGUMENT', `fill.waterMassG must be a positive number of grams, got ${describeValue(waterMassG)}`, { field: 'fill.waterMassG' });
-  if (!ok(startC) || startC < 0 || startC >= 100) throw new IonheatError('INVALID_ARGUMENT', `fill.startC must be a temperature from 0 °C up to (not including) 100 °C, where water is liquid; got ${describeValue(startC)}`, { field: 'fill.startC' });
-  return { saltMassG, waterMassG, startC };
-}
-
 /** The message of anything thrown, without trusting it (it may itself be a hostile object). */
 function thrownText(e: unknown): string {
   try {
@@ -200,7 +187,7 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
     if (!findIon(id, dataset)) throw new IonheatError('UNKNOWN_ION', `excludeIons: "${id}" is not an ion id of the ${dataset.label} ion table (ids look like NH4[+], NO3[-])`, { field: 'excludeIons', text: id });
   }
   for (const h of filters.excludeHazards ?? []) {
-    if (!hazardClassSchema.safeParse(h).success) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: ${describeValue(h)} is not a hazard class (known: ${hazardClassSchema.options.join(', ')})`, { field: 'excludeHazards' });
+    if (!isTerm(HAZARD_CLASSES, h)) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: ${describeValue(h)} is not a hazard class (known: ${HAZARD_CLASSES.join(', ')})`, { field: 'excludeHazards' });
   }
   for (const [name, v] of [['minMolarMass', filters.minMolarMass], ['maxMolarMass', filters.maxMolarMass]] as const) {
     if (v !== undefined && !(Number.isFinite(v) && v > 0)) throw new IonheatError('INVALID_ARGUMENT', `${name} is a molar mass in g/mol and must be a positive number, got ${describeValue(v)}`, { field: name });
@@ -228,7 +215,7 @@ function checkFilters(filters: ScreenFilters, dataset: Dataset): { salts: Set<st
  * // a hot pack: 30 g CaCl2 in 100 g water from 20 °C
  * const hot = createScreener({ direction: 'heat', fill: '30:100@20' }).row('CaCl2');
  * hot.suitability; // 'suitable'
- * hot.fill.finalTemperature.value; // ≈ 62.6 °C
+ * hot.fill.finalTemperature.value; // ≈ 72.0 °C
  * ```
  */
 export function createScreener(options: ScreenOptions = {}, dataset: Dataset = builtinDataset()): Screener {
@@ -241,7 +228,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
     if (isIonheatError(e)) throw e;
     throw new IonheatError('INVALID_ARGUMENT', `the options of the screen could not be read: ${thrownText(e)}`, { field: 'options' });
   }
-  const fill: FillSpec | null = options.fill === undefined ? null : checkFill(options.fill);
+  const fill: FillSpec | null = options.fill === undefined ? null : checkFillSpec(options.fill);
   const objectiveParsed = objectiveNameSchema.safeParse(options.objective ?? (fill ? 'fill-temperature' : 'enthalpy'));
   if (!objectiveParsed.success) throw new IonheatError('INVALID_ARGUMENT', `objective: ${describeValue(options.objective)} is not one of ${objectiveNameSchema.options.join(', ')}`, { field: 'objective' });
   const directionParsed = directionSchema.safeParse(options.direction ?? 'cool');
@@ -306,7 +293,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         },
       ];
     }
-    const merged = dataset.withOverrides(overrides, 'screening input', dataset.source(source) ? {} : { [source]: sources[source]! });
+    const merged = mergeOverrides(dataset, overrides, 'screening input', dataset.source(source) ? {} : { [source]: sources[source]! });
     datasets.set(key, merged);
     return merged;
   };
@@ -428,7 +415,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       const { salt, result, hazards, pack, warmer } = computed;
       const excludedBy = exclusion(salt, () => hazards);
       if (excludedBy !== undefined) {
-        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: hazards.statements, hazardData: hazards.data });
+        return finish({ line: at, status: 'excluded', input, ...duplicate, formula: salt.formula, salt, excludedBy, hazards: hazards.classes, cautions: result.cautions, hazardData: hazards.data });
       }
       const notes: string[] = [];
       if (input.measuredEnthalpy !== undefined) notes.push(`measured enthalpy of solution from the screening input (source ${input.source ?? 'screenInput'})${excludeMeasured ? ', hidden by excludeMeasured' : ''}`);
@@ -437,7 +424,6 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
       if (first !== undefined) notes.push(`the same candidate as line ${first}`);
       // A formula that reads through a likely slip is computed (both readings are real salts) but never ranked silently.
       const typo = read.salt ? undefined : typoSuspicion(input.formula, salt, dataset);
-      if (typo) notes.push(typo.message);
       const cost = input.pricePerKg === undefined ? undefined : costPerKJ(input.pricePerKg, result.perGram.salt, direction);
       if (input.pricePerKg !== undefined && cost === undefined) notes.push(`no cost per kJ: the 95 % interval of the heat per gram reaches zero or the wrong sign for ${direction === 'cool' ? 'cooling' : 'heating'}`);
       if (warmer && !warmer.ok) notes.push(`no standard warmer (100 g triggered at 20 °C): ${warmer.why}`);
@@ -455,7 +441,7 @@ export function createScreener(options: ScreenOptions = {}, dataset: Dataset = b
         ...result,
         notes: notes.length > 0 ? [...result.notes, ...notes] : result.notes,
         hazards: hazards.classes,
-        cautions: hazards.statements,
+        cautions: typo ? [caution('suspected-typo', 'warning', `Suspected typo: ${typo.message}. The values given are those of ${salt.formula} as read; the row is ranked as undetermined.`), ...result.cautions] : result.cautions,
         hazardData: hazards.data,
         ...(pack ? { fill: pack as unknown as NonNullable<ScreenRow['fill']> } : {}),
         ...(warmerRow ? { warmer: warmerRow } : {}),

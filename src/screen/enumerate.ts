@@ -8,13 +8,13 @@ import { describeValue, checkOptionKeys, optionNames } from '../quantity/argumen
 import type { Dataset } from '../data/dataset.js';
 import { builtinDataset } from '../data/builtin.js';
 import type { HazardClass, IonKind, IonRecord } from '../data/schemas.js';
-import { hazardClassSchema } from '../data/schemas.js';
+import { HAZARD_CLASSES, isTerm } from '../data/tableTerms.js';
 import { formatIons } from '../chem/formatSalt.js';
 import { findIon } from '../chem/ionIndex.js';
 import { molarMass } from '../chem/molarMass.js';
 import type { Salt } from '../chem/salt.js';
 import { IonheatError } from '../error.js';
-import { saltHazards } from '../pack/saltHazards.js';
+import { saltHazards } from '../solution/saltHazards.js';
 
 /** Which salts {@link enumerate} produces. Every filter is optional; together they must all hold. */
 export interface EnumerateFilters {
@@ -120,7 +120,7 @@ export function enumerate(filters: EnumerateFilters = {}, dataset: Dataset = bui
     if (k !== 'monatomic' && k !== 'polyatomic') throw new IonheatError('INVALID_ARGUMENT', `an ion kind for enumerate is "monatomic" or "polyatomic", got ${describeValue(k)}`, { field: 'kinds' });
   }
   for (const h of filters.excludeHazards ?? []) {
-    if (!hazardClassSchema.safeParse(h).success) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: ${describeValue(h)} is not a hazard class (known: ${hazardClassSchema.options.join(', ')})`, { field: 'excludeHazards' });
+    if (!isTerm(HAZARD_CLASSES, h)) throw new IonheatError('INVALID_ARGUMENT', `excludeHazards: ${describeValue(h)} is not a hazard class (known: ${HAZARD_CLASSES.join(', ')})`, { field: 'excludeHazards' });
   }
   const excluded = new Set(filters.excludeIons ?? []);
   const allowed = (ion: IonRecord, ids: readonly string[] | undefined, charges: readonly number[] | undefined, kinds: readonly string[] | undefined): boolean =>

@@ -1,9 +1,10 @@
 import type { Dataset } from '../data/dataset.js';
 import { saltArgument } from '../chem/saltArgument.js';
 import { builtinDataset } from '../data/builtin.js';
-import { hazardClassSchema, type HazardClass } from '../data/schemas.js';
+import type { HazardClass } from '../data/schemas.js';
+import { HAZARD_CLASSES } from '../data/tableTerms.js';
 import type { Salt } from '../chem/salt.js';
-import { hazardCoverage, saltHazards, type HazardCoverage } from '../pack/saltHazards.js';
+import { hazardCoverage, saltHazards, type HazardCoverage } from '../solution/saltHazards.js';
 
 /** The hazard classes and statements of a salt, as one screen row shows them. */
 export interface HazardSummary {
@@ -38,7 +39,7 @@ export interface HazardSummary {
  */
 export function hazardSummary(salt: Salt, dataset: Dataset = builtinDataset()): HazardSummary {
   const records = saltHazards(saltArgument(salt, dataset), dataset);
-  const order = hazardClassSchema.options;
+  const order: readonly string[] = HAZARD_CLASSES;
   const classes = [...new Set(records.flatMap((r) => r.classes))].sort((a, b) => order.indexOf(a) - order.indexOf(b));
   const coverage = hazardCoverage(salt, dataset);
   const statements = [...new Set(records.map((r) => r.statement))];

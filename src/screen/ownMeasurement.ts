@@ -21,6 +21,7 @@
  *
  * @module
  */
+import { mergeOverrides } from '../data/recordCheck.js';
 import { measuredValueDisagreement } from '../solution/userValueCheck.js';
 import { Dataset } from '../data/dataset.js';
 import type { SourceEntry } from '../data/schemas.js';
@@ -61,7 +62,7 @@ export function ownMeasuredEstimate(salt: Salt, tableFormula: string, own: OwnMe
   if (!solutionTable || !ions || !elements) throw new IonheatError('MISSING_DATA', `the ${dataset.label} tables lack the ion, element or solution-enthalpy table`, {});
   const small = new Dataset({ 'ions.json': ions, 'elements.json': elements, 'solution-enthalpies.json': { ...solutionTable, records: [] } }, dataset.sources, dataset.label);
   const record = { formula: tableFormula, value: own.value, unit: 'kJ/mol', uncertainty: own.u ?? null, source: own.source, fromMemory: false, note: 'given with the candidate in the screening input' };
-  const merged = small.withOverrides({ 'solution-enthalpies.json': [record] }, OWN_MEASUREMENT_LABEL, own.citation ? { [own.source]: own.citation } : {});
+  const merged = mergeOverrides(small, { 'solution-enthalpies.json': [record] }, OWN_MEASUREMENT_LABEL, own.citation ? { [own.source]: own.citation } : {});
   const measured = measuredSolutionEnthalpy(salt, merged);
   if (!measured) throw new IonheatError('INVALID_ARGUMENT', `measuredEnthalpy: the value given for ${salt.formula} could not be matched to the salt`, { field: 'measuredEnthalpy' });
   return measured;

@@ -1,12 +1,8 @@
 import { IonheatError } from '../error.js';
+import { checkOptionKeys, describeValue, numberProblem, optionNames, withinRule } from '../quantity/argumentChecks.js';
+import { packInputNumber, PACK_INPUT_RANGES, type PackInputName } from '../pack/packInput.js';
+import { unsignedZero } from '../numeric/unsignedZero.js';
 import type { FillSpec } from './screenRow.js';
-
-/**
- * Masses a standard fill may have, g: a milligram to a tonne (as `ionheat pack` accepts). Outside them the
- * numbers say nothing about a pack.
- */
-const MIN_MASS_G = 1e-3;
-const MAX_MASS_G = 1e6;
 
 /** Reads a plain decimal number (digits, optional point, optional sign); undefined for anything else. */
 function decimal(text: string): number | undefined {
@@ -27,8 +23,9 @@ function decimal(text: string): number | undefined {
 /**
  * Reads a standard fill written `<salt-g>:<water-g>@<start-°C>`, e.g.
  * `40:80@22` for 40 g of salt in 80 g of water starting at 22 °C (a trailing
- * `°C` or `C` is allowed). Masses must lie between a milligram and a tonne; the start temperature
- * must lie between 0 and 100 °C (liquid water).
+ * `°C` or `C` is allowed). Masses and the start temperature take the ranges of
+ * a pack fill ({@link packFinalTemperature}): a milligram to a tonne, and from
+ * 0 °C up to (not including) 100 °C, where water is liquid.
  *
  * @param text - `<salt-g>:<water-g>@<start-°C>`, masses in g, start temperature in °C
  * @returns masses in g and the start temperature in °C
@@ -39,6 +36,7 @@ function decimal(text: string): number | undefined {
  * ```ts
  * parseFillSpec('40:80@22'); // { saltMassG: 40, waterMassG: 80, startC: 22 }
  * parseFillSpec('25.5:100@20 °C').waterMassG; // 100
+ * parseFillSpec('40:80@0').startC; // 0
  * ```
  */
 export function parseFillSpec(text: string): FillSpec {
@@ -49,14 +47,31 @@ export function parseFillSpec(text: string): FillSpec {
   if (at < 0 || colon < 0 || colon > at) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": ${usage}`, { field: 'fill', text });
   let start = text.slice(at + 1).trim();
   for (const suffix of ['°C', 'C', '°']) if (start.endsWith(suffix)) start = start.slice(0, -suffix.length).trim();
-  const saltMassG = decimal(text.slice(0, colon).replace(/g$/i, ''));
-  const waterMassG = decimal(text.slice(colon + 1, at).replace(/g$/i, ''));
-  const startC = decimal(start);
-  if (saltMassG === undefined || !(saltMassG > 0)) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": the salt mass (before ":") must be a positive number of grams`, { field: 'fill', text });
-  if (waterMassG === undefined || !(waterMassG > 0)) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": the water mass (between ":" and "@") must be a positive number of grams`, { field: 'fill', text });
-  for (const [mass, part] of [[saltMassG, 'the salt mass (before ":")'], [waterMassG, 'the water mass (between ":" and "@")']] as const) {
-    if (mass < MIN_MASS_G || mass > MAX_MASS_G) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": ${part} must lie between ${MIN_MASS_G} g and ${MAX_MASS_G} g`, { field: 'fill', text });
-  }
-  if (startC === undefined || !(startC > 0 && startC < 100)) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": the start temperature (after "@") must be a number of °C above 0 and below 100, where water is liquid`, { field: 'fill', text });
-  return { saltMassG, waterMassG, startC };
+  const part = (value: number | undefined, name: PackInputName, words: string): number => {
+    if (value === undefined) throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": ${words} must be a number, ${usage}`, { field: 'fill', text });
+    if (withinRule(value, PACK_INPUT_RANGES[name])) return unsignedZero(value);
+    throw new IonheatError('INVALID_ARGUMENT', `fill "${text}": ${words} ${numberProblem(value, PACK_INPUT_RANGES[name])}`, { field: 'fill', text });
+  };
+  return {
+    saltMassG: part(decimal(text.slice(0, colon).replace(/g$/i, '')), 'massG', 'the salt mass (before ":")'),
+    waterMassG: part(decimal(text.slice(colon + 1, at).replace(/g$/i, '')), 'waterG', 'the water mass (between ":" and "@")'),
+    startC: part(decimal(start), 'startC', 'the start temperature (after "@")'),
+  };
+}
+
+const FILL_SPEC_KEYS = optionNames<FillSpec>('a standard fill', { saltMassG: true, waterMassG: true, startC: true });
+
+/**
+ * A screen's standard fill as given — an object `{ saltMassG, waterMassG, startC }` or its text `40:80@22` —
+ * checked against the ranges of a pack fill, errors naming the key or the part of the text.
+ */
+export function checkFillSpec(fill: FillSpec | string): FillSpec {
+  if (typeof fill === 'string') return parseFillSpec(fill);
+  if (fill === null || typeof fill !== 'object') throw new IonheatError('INVALID_ARGUMENT', `fill: a standard fill is { saltMassG, waterMassG, startC } or text such as 40:80@22, got ${describeValue(fill)}`, { field: 'fill' });
+  checkOptionKeys(fill, FILL_SPEC_KEYS, 'fill');
+  return {
+    saltMassG: packInputNumber(fill.saltMassG, 'massG', 'fill.saltMassG', 'the salt of the standard fill'),
+    waterMassG: packInputNumber(fill.waterMassG, 'waterG', 'fill.waterMassG', 'the water of the standard fill'),
+    startC: packInputNumber(fill.startC, 'startC', 'fill.startC', 'the start temperature of the standard fill'),
+  };
 }

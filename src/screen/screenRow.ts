@@ -8,10 +8,11 @@
  */
 import { z } from 'zod';
 import { errorCodes } from '../error.js';
-import { estimateSchema } from '../quantity/estimate.js';
-import { saltSchema } from '../chem/salt.js';
+import { estimateSchema } from '../quantity/estimateSchema.js';
+import { saltSchema } from '../chem/saltSchema.js';
 import { hazardClassSchema } from '../data/schemas.js';
 import { candidateInputSchema } from './candidate.js';
+import { cautionSchema } from '../quantity/caution.js';
 
 /** Which way the pack should go: `cool` wants an endothermic salt, `heat` an exothermic one. */
 export const directionSchema = z.enum(['cool', 'heat']);
@@ -58,7 +59,7 @@ export const fillResultSchema = z
       .describe('grams loaded, dissolved and left undissolved, per solid'),
     heat: z.looseObject({ unit: z.literal('kJ'), absorbed: z.number() }).describe('heat absorbed by dissolution, kJ (negative = released)'),
     clamp: z.looseObject({ kind: z.enum(['freezing', 'eutectic', 'boiling']), temperature: z.number(), message: z.string() }).nullable(),
-    cautions: z.array(z.string()).describe('burn, cold-injury and chemical cautions for the fill'),
+    cautions: z.array(cautionSchema).describe('burn, cold-injury, boiling, undissolved-salt and chemical cautions for the fill'),
     notes: z.array(z.string()),
   })
   .describe('the pack model result for the standard fill');
@@ -72,7 +73,7 @@ export const warmerRowSchema = z
     heatPerGram: estimateSchema.describe('heat released per gram of fill, J/g'),
     plateauDuration: estimateSchema.describe('time on the plateau against the assumed heat loss, s'),
     rechargeTemperature: estimateSchema.nullable().describe('temperature at which the fill is all liquid again, °C; null when heating in water cannot melt it all'),
-    cautions: z.array(z.string()),
+    cautions: z.array(cautionSchema).describe('burn, recharge and chemical cautions for the warmer'),
     notes: z.array(z.string()),
   })
   .describe('the latent-heat warmer of the standard warmer fill');
@@ -111,7 +112,10 @@ export const screenRowSchema = z
     temperature: z.looseObject({ celsius: z.number(), heatCapacityOfSolution: estimateSchema.optional() }).optional().describe('the temperature the values refer to, °C, and ΔsolCp° where tabulated'),
     notes: z.array(z.string()).optional(),
     hazards: z.array(hazardClassSchema).optional().describe('hazard classes of the salt and its ions from the hazards table'),
-    cautions: z.array(z.string()).optional().describe('the hazards table statements for the salt and its ions'),
+    cautions: z
+      .array(cautionSchema)
+      .optional()
+      .describe('what to take care of with this salt: a suspected typo, a hypothetical hydrate, the hazards of the salt and its ions (from the hazards table), the screening line'),
     hazardData: z
       .enum(['classified', 'not classified', 'no hazard data'])
       .optional()

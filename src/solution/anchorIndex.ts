@@ -144,6 +144,16 @@ export function ionDistance(a: string, b: string, dataset: Dataset): number {
   return dr + (x.charge !== y.charge ? ION_DISTANCE.charge : 0) + (x.kind !== y.kind ? ION_DISTANCE.kind : 0) + (x.charge > 0 && x.nobleCore !== y.nobleCore ? ION_DISTANCE.core : 0);
 }
 
+/**
+ * Whether two cations bond alike: both with a noble-gas core, or both
+ * without (d-block and post-transition cations, whose covalent lattice
+ * excess depends on the anion they meet).
+ */
+export function cationCoresAlike(a: string, b: string, dataset: Dataset): boolean {
+  const f = ionFeatures(dataset);
+  return f.get(a)?.nobleCore === f.get(b)?.nobleCore;
+}
+
 function byName(a: string, b: string): number {
   return a < b ? -1 : a > b ? 1 : 0;
 }
@@ -165,9 +175,9 @@ function gridOf(anchors: readonly AnchorSalt[], inPool: { cation: Set<string>; a
   return { cationIndex, anionIndex, byCation, byAnion, neighbours: pooled };
 }
 
-/** The anchor index of a dataset, built on first use. */
-export function anchorIndex(dataset: Dataset): AnchorIndex {
-  return dataset.memo('solution.anchorIndex', () => {
+/** The anchors of a dataset in formula order, built on first use (the costly part of the index: a lattice enthalpy by every estimator). */
+function anchorSalts(dataset: Dataset): readonly AnchorSalt[] {
+  return dataset.memo('solution.anchorSalts', () => {
     const salts = tableSalts(dataset);
     const anchors: AnchorSalt[] = [];
     for (const formula of [...salts.keys()].sort(byName)) {
@@ -191,6 +201,14 @@ export function anchorIndex(dataset: Dataset): AnchorIndex {
         lattice,
       });
     }
+    return anchors;
+  });
+}
+
+/** The anchor index of a dataset, built on first use. */
+export function anchorIndex(dataset: Dataset): AnchorIndex {
+  return dataset.memo('solution.anchorIndex', () => {
+    const anchors = anchorSalts(dataset);
     const byIons = new Map<string, Map<string, AnchorSalt>>();
     const inPool = { cation: new Set<string>(), anion: new Set<string>() };
     for (const a of anchors) {
@@ -201,19 +219,19 @@ export function anchorIndex(dataset: Dataset): AnchorIndex {
       row.set(a.anion, a);
     }
     const neighbours = new Map<string, Neighbour[]>();
+    const features = ionFeatures(dataset);
     for (const ion of dataset.records('ions.json')) {
       if (ion.charge === 0) continue;
       const candidates = ion.charge > 0 ? inPool.cation : inPool.anion;
-      const list: Neighbour[] = [];
+      // Ions of the same charge first, then by distance, then by name; the charge test once per neighbour, not per comparison.
+      const ranked: { neighbour: Neighbour; otherCharge: number }[] = [];
       for (const other of candidates) {
         if (other === ion.id) continue;
         const distance = ionDistance(ion.id, other, dataset);
-        if (Number.isFinite(distance)) list.push({ ion: other, distance });
+        if (Number.isFinite(distance)) ranked.push({ neighbour: { ion: other, distance }, otherCharge: features.get(other)?.charge === ion.charge ? 0 : 1 });
       }
-      const features = ionFeatures(dataset);
-      const otherCharge = (n: Neighbour): number => (features.get(n.ion)?.charge === ion.charge ? 0 : 1);
-      list.sort((a, b) => otherCharge(a) - otherCharge(b) || a.distance - b.distance || byName(a.ion, b.ion));
-      neighbours.set(ion.id, list);
+      ranked.sort((a, b) => a.otherCharge - b.otherCharge || a.neighbour.distance - b.neighbour.distance || byName(a.neighbour.ion, b.neighbour.ion));
+      neighbours.set(ion.id, ranked.map((r) => r.neighbour));
     }
     return { anchors, byIons, neighbours, grid: gridOf(anchors, inPool, neighbours) };
   });

@@ -14,10 +14,11 @@ import { saltRecords } from '../chem/saltRecords.js';
 import { COVERAGE_95 } from '../quantity/constants.js';
 import { makeEstimate, type Estimate } from '../quantity/estimate.js';
 import { latticeModels, type LatticeModel } from '../lattice/latticeModel.js';
-import { anchorIndex, binaryIons, type AnchorSalt, type IndexedAnchor } from './anchorIndex.js';
+import { anchorIndex, binaryIons, cationCoresAlike, type AnchorSalt, type IndexedAnchor } from './anchorIndex.js';
 import { saltIonClass, type SaltIonClass } from '../lattice/saltIonClass.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+import { quantile } from '../numeric/quantile.js';
 
 const ANCHORED_OPTIONS = optionNames<{ excludeMeasured?: boolean }>('anchoredSolutionEnthalpies', { excludeMeasured: true });
 
@@ -34,6 +35,15 @@ const STRUCTURE_PENALTY = 1;
 const SAME_STRUCTURE_ONLY: ReadonlySet<LatticeModel> = new Set(['born-lande', 'born-mayer']);
 /** Fewest calibration salts of one charge type that get their own floor; others use the pooled floor. */
 const MIN_FLOOR_GROUP = 10;
+/**
+ * The quantile of |miss|/(1.96·spread) over a calibration group that scales
+ * the spread down where the pool shows it overstates the misses. Above 0.95
+ * because `dissolve` returns the most precise of several anchored
+ * estimates, and picking the narrowest of several intervals holds its
+ * value less often than each does alone; 0.975 brought the 2:1 salts back
+ * above 90 % coverage in the leave-one-out validation, 0.95 did not.
+ */
+const SPREAD_SCALE_QUANTILE = 0.975;
 /** Fewest pool salts of one charge type that fit their own bracket scale; others use the pooled scale. */
 const MIN_SCALE_GROUP = 5;
 /**
@@ -96,46 +106,66 @@ interface Sides {
   ys: { index: number; distance: number; my: IndexedAnchor }[];
 }
 
-/** True when every estimator of `models` has found `ANCHOR_NEIGHBOURS` on a side. */
-function enough(found: number[], models: readonly number[]): boolean {
-  for (const m of models) if (found[m]! < ANCHOR_NEIGHBOURS) return false;
+/** True when every estimator of `models` has found `ANCHOR_NEIGHBOURS` on a side, of every kind of anchor asked for. */
+function enough(found: readonly number[][], models: readonly number[]): boolean {
+  for (const kind of found) for (const m of models) if (kind[m]! < ANCHOR_NEIGHBOURS) return false;
   return true;
 }
 
-function sidesOf(target: Target, models: readonly number[], dataset: Dataset): Sides {
+/**
+ * How anchor sets are chosen: `same`, all four salts of the target's charge
+ * type; `cross`, the fallback for a salt with no set of its own charge type,
+ * sets in which at least one anchor is of another charge type (Kapustinskii
+ * differences only, see {@link CROSS_MODEL}).
+ */
+export type SetMode = 'same' | 'cross';
+
+/**
+ * The one estimator whose form holds across charge types:
+ * Kapustinskii's equation, 1202.5·ν·|z₊z₋|/(r₊ + r₋)·(1 − 0.345/(r₊ + r₋)),
+ * has the same constants for every charge type, whereas the volume-based
+ * equation fits its coefficients to each charge type and the Born–Landé and
+ * Born–Mayer Madelung constants belong to one structure.
+ */
+const CROSS_MODEL = latticeModels.indexOf('kapustinskii');
+
+function sidesOf(target: Target, models: readonly number[], dataset: Dataset, mode: SetMode): Sides {
   const { cationIndex, anionIndex, byCation, byAnion, neighbours } = anchorIndex(dataset).grid;
+  // found[kind][model]: anchors taken so far of the target's charge type (0) and, in cross mode, of another (1).
+  const kinds = mode === 'cross' ? 2 : 1;
+  const found = Array.from({ length: kinds }, () => [0, 0, 0, 0]);
+  const take = (a: IndexedAnchor): boolean => {
+    const kind = a.anchor.chargeType === target.chargeType ? 0 : 1;
+    if (kind >= kinds) return false;
+    let useful = false;
+    for (const m of models) {
+      if (Number.isNaN(a.lattice[m]!) || found[kind]![m]! >= ANCHOR_NEIGHBOURS) continue;
+      found[kind]![m]!++;
+      useful = true;
+    }
+    return useful;
+  };
   const ns: Sides['ns'] = [];
-  const found = [0, 0, 0, 0];
   // The anchors N_X of every pool cation N with the target's anion X.
   const x = anionIndex.get(target.anion);
   const withX = x === undefined ? undefined : byAnion[x]!;
   for (const n of (withX && neighbours.get(target.cation)) || []) {
     const nx = withX![n.index];
-    if (!nx || nx.anchor.formula === target.formula || nx.anchor.chargeType !== target.chargeType) continue;
-    let useful = false;
-    for (const m of models) {
-      if (Number.isNaN(nx.lattice[m]!) || found[m]! >= ANCHOR_NEIGHBOURS) continue;
-      found[m]!++;
-      useful = true;
-    }
-    if (useful) ns.push({ distance: n.distance, nx, row: byCation[n.index]! });
+    if (!nx || nx.anchor.formula === target.formula) continue;
+    // Across charge types a d-block cation's covalent excess differs with the anion's charge, so N must bond like M.
+    if (mode === 'cross' && !cationCoresAlike(n.ion, target.cation, dataset)) continue;
+    if (take(nx)) ns.push({ distance: n.distance, nx, row: byCation[n.index]! });
     if (enough(found, models)) break;
   }
   const ys: Sides['ys'] = [];
   const m = cationIndex.get(target.cation);
   if (m !== undefined) {
     const own = byCation[m]!;
-    found.fill(0);
+    for (const kind of found) kind.fill(0);
     for (const y of neighbours.get(target.anion) ?? []) {
       const my = own[y.index];
-      if (!my || my.anchor.formula === target.formula || my.anchor.chargeType !== target.chargeType) continue;
-      let useful = false;
-      for (const m of models) {
-        if (Number.isNaN(my.lattice[m]!) || found[m]! >= ANCHOR_NEIGHBOURS) continue;
-        found[m]!++;
-        useful = true;
-      }
-      if (useful) ys.push({ index: y.index, distance: y.distance, my });
+      if (!my || my.anchor.formula === target.formula) continue;
+      if (take(my)) ys.push({ index: y.index, distance: y.distance, my });
       if (enough(found, models)) break;
     }
   }
@@ -181,12 +211,14 @@ const PART = 5;
  * estimators. `keep` collects the sets themselves (for inspection, one
  * estimator); without it nothing is allocated per set.
  */
-function combine(target: Target, models: readonly number[], dataset: Dataset, keep?: AnchorSet[]): (Combination | undefined)[] {
+function combine(target: Target, models: readonly number[], dataset: Dataset, mode: SetMode, keep?: AnchorSet[]): (Combination | undefined)[] {
   const out: (Combination | undefined)[] = [];
   const lts = models.map((m) => target.lattice.get(latticeModels[m]!));
   const wanted = models.filter((_, i) => lts[i] !== undefined);
   if (wanted.length === 0) return out;
-  const { ns, ys } = sidesOf(target, wanted, dataset);
+  const { ns, ys } = sidesOf(target, wanted, dataset, mode);
+  const cross = mode === 'cross';
+  const perSide = cross ? 2 * ANCHOR_NEIGHBOURS : ANCHOR_NEIGHBOURS;
   // Filled as sets are met (a plain array: a typed array costs more to allocate than the few sets it would hold).
   const parts: number[] = new Array<number>(ns.length * ys.length * PART);
   for (let k = 0; k < models.length; k++) {
@@ -205,7 +237,7 @@ function combine(target: Target, models: readonly number[], dataset: Dataset, ke
     let ww = 0;
     let top: AnchorSet | undefined;
     let takenN = 0;
-    for (let i = 0; i < ns.length && takenN < ANCHOR_NEIGHBOURS; i++) {
+    for (let i = 0; i < ns.length && takenN < perSide; i++) {
       const n = ns[i]!;
       const nx = n.nx;
       const lnx = nx.lattice[m]!;
@@ -213,7 +245,7 @@ function combine(target: Target, models: readonly number[], dataset: Dataset, ke
       takenN++;
       const beta = target.anionCount / nx.anchor.anionCount;
       let takenY = 0;
-      for (let j = 0; j < ys.length && takenY < ANCHOR_NEIGHBOURS; j++) {
+      for (let j = 0; j < ys.length && takenY < perSide; j++) {
         const y = ys[j]!;
         const my = y.my;
         const lmy = my.lattice[m]!;
@@ -245,6 +277,8 @@ function combine(target: Target, models: readonly number[], dataset: Dataset, ke
         if (Number.isNaN(lny)) continue;
         const mismatches = parts[at + 3]!;
         if (sameStructure && (mismatches > 0 || target.structure === undefined)) continue;
+        // A cross set must span charge types: a set of the target's own type belongs to the same mode.
+        if (cross && my.anchor.chargeType === target.chargeType && nx.anchor.chargeType === target.chargeType && ny.anchor.chargeType === target.chargeType) continue;
         const alpha = target.cationCount / my.anchor.cationCount;
         const gamma = parts[at + 1]!;
         const u = parts[at + 2]!;
@@ -292,12 +326,17 @@ interface FloorPoint {
   keys: string[];
   /** √max(0, (miss/1.96)² − spread_used²) / ΔH_L. */
   needed: number;
+  /** |miss| / (1.96·spread_used): below 1, the spread alone would have held the salt with room to spare. */
+  ratio: number;
 }
 
 /** Needed floors sorted ascending, with each formula's position. */
 interface FloorGroup {
   needed: number[];
   position: Map<string, number>;
+  /** |miss| / (1.96·spread used) of each salt, sorted ascending, with each formula's position. */
+  ratios: number[];
+  ratioPosition: Map<string, number>;
 }
 
 /** Least-squares sums of the bracket scale over the pool salts of one group, and each salt's own terms (to leave it out). */
@@ -357,15 +396,20 @@ function typicalSpreadOf(calibration: FloorCalibration | undefined, type: string
   return calibration?.typicalSpread.get(type) ?? calibration?.typicalSpread.get('*') ?? 0;
 }
 
-/** Per estimator, the floor calibration; built once per dataset. */
-function floorGroups(dataset: Dataset): ReadonlyMap<LatticeModel, FloorCalibration> {
-  return dataset.memo('solution.anchorFloors', () => {
+/**
+ * Per estimator, the floor calibration of one way of choosing sets; built
+ * once per dataset. In `cross` mode every pool salt is estimated from sets
+ * that span charge types only, as a salt without sets of its own type is.
+ */
+function floorGroups(dataset: Dataset, mode: SetMode = 'same'): ReadonlyMap<LatticeModel, FloorCalibration> {
+  return dataset.memo(`solution.anchorFloors.${mode}`, () => {
     const out = new Map<LatticeModel, FloorCalibration>();
     for (const [mi, model] of latticeModels.entries()) {
+      if (mode === 'cross' && mi !== CROSS_MODEL) continue;
       const rows: { a: AnchorSalt; type: string; c: Combination }[] = [];
       for (const a of anchorIndex(dataset).anchors) {
         if (!a.lattice.has(model)) continue;
-        const [c] = combine({ formula: a.formula, cation: a.cation, anion: a.anion, cationCount: a.cationCount, anionCount: a.anionCount, chargeType: a.chargeType, structure: a.structure, lattice: a.lattice }, [mi], dataset);
+        const [c] = combine({ formula: a.formula, cation: a.cation, anion: a.anion, cationCount: a.cationCount, anionCount: a.anionCount, chargeType: a.chargeType, structure: a.structure, lattice: a.lattice }, [mi], dataset, mode);
         if (c) rows.push({ a, type: a.chargeType, c });
       }
       const calibration: FloorCalibration = { scale: new Map(), typicalSpread: new Map(), groups: new Map() };
@@ -393,33 +437,35 @@ function floorGroups(dataset: Dataset): ReadonlyMap<LatticeModel, FloorCalibrati
       for (const { a, type, c } of scaled) {
         // The anchors' stated uncertainties are not subtracted, so that a wider input never narrows a result.
         const miss = c.value - a.value;
-        const needed2 = (miss / COVERAGE_95) ** 2 - usedSpread(c, typicalSpreadOf(calibration, type)) ** 2;
-        points.push({ formula: a.formula, keys: [`${type}|${a.ionClass}`, type, '*'], needed: Math.sqrt(Math.max(0, needed2)) / Math.abs(c.lattice) });
+        const spread = usedSpread(c, typicalSpreadOf(calibration, type));
+        const needed2 = (miss / COVERAGE_95) ** 2 - spread ** 2;
+        points.push({ formula: a.formula, keys: [`${type}|${a.ionClass}`, type, '*'], needed: Math.sqrt(Math.max(0, needed2)) / Math.abs(c.lattice), ratio: spread > 0 ? Math.abs(miss) / (COVERAGE_95 * spread) : Infinity });
       }
+      const group = (key: string): FloorGroup => {
+        let g = calibration.groups.get(key);
+        if (!g) calibration.groups.set(key, (g = { needed: [], position: new Map(), ratios: [], ratioPosition: new Map() }));
+        return g;
+      };
       points.sort((x, y) => x.needed - y.needed || (x.formula < y.formula ? -1 : 1));
       for (const p of points) {
         for (const key of p.keys) {
-          let g = calibration.groups.get(key);
-          if (!g) calibration.groups.set(key, (g = { needed: [], position: new Map() }));
+          const g = group(key);
           g.position.set(p.formula, g.needed.length);
           g.needed.push(p.needed);
+        }
+      }
+      points.sort((x, y) => x.ratio - y.ratio || (x.formula < y.formula ? -1 : 1));
+      for (const p of points) {
+        for (const key of p.keys) {
+          const g = group(key);
+          g.ratioPosition.set(p.formula, g.ratios.length);
+          g.ratios.push(p.ratio);
         }
       }
       out.set(model, calibration);
     }
     return out;
   });
-}
-
-/** The 0.95 quantile of a sorted list with the element at `skip` left out (−1: none), linear between order statistics. */
-function quantile95(sorted: readonly number[], skip: number): number {
-  const n = sorted.length - (skip >= 0 ? 1 : 0);
-  if (n <= 0) return 0;
-  const at = (i: number): number => sorted[skip >= 0 && i >= skip ? i + 1 : i]!;
-  const h = (n - 1) * 0.95;
-  const lo = Math.floor(h);
-  const hi = Math.min(n - 1, lo + 1);
-  return at(lo) + (h - lo) * (at(hi) - at(lo));
 }
 
 /** The calibration group of a target: its charge type and the class of its ions. */
@@ -436,26 +482,50 @@ export interface FloorGroupKey {
  * spread of its sets that each would have needed for its 95 % interval to
  * hold its own value (each pool salt estimated from the others); and never
  * less than the largest such need within the smaller, more specific groups
- * passed over. The anchors' stated uncertainties are added on top rather
+ * passed over, as seen by any estimator (a small group is small for each of
+ * them, and the structure-bound ones see fewer of its salts). The anchors' stated uncertainties are added on top rather
  * than taken out, which errs wide but keeps a wider input from ever
  * narrowing a result. `excludeFormula` leaves one salt's own miss out
- * (leave-one-out).
+ * (leave-one-out). `mode` `cross` gives the floor of the sets that span
+ * charge types (see {@link anchoredEstimates}).
+ *
+ * Where the spread alone overstates the misses, the floor is zero and the
+ * spread itself is scaled down: `spreadScale` κ = min(1, the
+ * {@link SPREAD_SCALE_QUANTILE} quantile of |miss|/(1.96·spread) over the same
+ * group, and at least the largest such ratio of the smaller groups passed
+ * over). The anchors' own uncertainties are never scaled.
  */
-export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options: { excludeFormula?: string } = {}, dataset: Dataset = builtinDataset()): { relative: number; salts: number; group: string } {
-  const groups = floorGroups(dataset).get(model)?.groups;
+export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options: { excludeFormula?: string; mode?: SetMode } = {}, dataset: Dataset = builtinDataset()): { relative: number; spreadScale: number; salts: number; group: string } {
+  const groups = floorGroups(dataset, options.mode).get(model)?.groups;
   let atLeast = 0;
+  let ratioAtLeast = 0;
+  /** The largest of a sorted list with the element at `skip` left out. */
+  const largest = (sorted: readonly number[], skip: number): number => sorted[skip === sorted.length - 1 ? sorted.length - 2 : sorted.length - 1] ?? 0;
   for (const key of [`${group.chargeType}|${group.ionClass}`, group.chargeType, '*']) {
     const g = groups?.get(key);
     if (!g) continue;
     const skip = options.excludeFormula !== undefined ? (g.position.get(options.excludeFormula) ?? -1) : -1;
+    const ratioSkip = options.excludeFormula !== undefined ? (g.ratioPosition.get(options.excludeFormula) ?? -1) : -1;
     const n = g.needed.length - (skip >= 0 ? 1 : 0);
     if (n >= MIN_FLOOR_GROUP || key === '*') {
       const label = key === '*' ? 'all charge types' : key.replace('|', ', ');
-      return { relative: Math.max(quantile95(g.needed, skip), atLeast), salts: n, group: atLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
+      const spreadScale = Math.min(1, Math.max(quantile(g.ratios, SPREAD_SCALE_QUANTILE, ratioSkip), ratioAtLeast));
+      return { relative: Math.max(quantile(g.needed, 0.95, skip), atLeast), spreadScale, salts: n, group: atLeast > 0 || ratioAtLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
     }
-    if (n > 0) atLeast = Math.max(atLeast, g.needed[skip === g.needed.length - 1 ? g.needed.length - 2 : g.needed.length - 1]!);
+    if (n > 0) {
+      atLeast = Math.max(atLeast, largest(g.needed, skip));
+      ratioAtLeast = Math.max(ratioAtLeast, largest(g.ratios, ratioSkip));
+    }
+    // The largest need any estimator saw in a small group stands for all of them: Born–Mayer sees only the
+    // rock-salt silver halides, and AgCl alone would let AgBr claim ±12 kJ/mol.
+    for (const other of floorGroups(dataset, options.mode).values()) {
+      const h = other.groups.get(key);
+      if (!h) continue;
+      const hs = options.excludeFormula !== undefined ? (h.position.get(options.excludeFormula) ?? -1) : -1;
+      if (h.needed.length - (hs >= 0 ? 1 : 0) > 0) atLeast = Math.max(atLeast, largest(h.needed, hs));
+    }
   }
-  return { relative: atLeast, salts: 0, group: 'none' };
+  return { relative: atLeast, spreadScale: 1, salts: 0, group: 'none' };
 }
 
 /**
@@ -476,19 +546,27 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
  * is one form for every charge type, its radius errors enter as
  * ν·|z₊z₋|/(r₊ + r₋), so sets that mix charge types leave them uncancelled
  * (K₂CO₃ from KClO₃ + Na₂CO₃ − NaClO₃ missed by about 180 kJ/mol, Al₂(SO₄)₃
- * from 1:1 and 2:2 salts by about 1000). No estimator is therefore allowed
- * to mix charge types; a salt with no anchor set of its own charge type
- * gets no anchored estimate. The standard uncertainty is √(u_data² + spread² + f²):
- * the anchors' own uncertainties, the weighted spread of the sets, and a
- * floor f calibrated so that 95 % of the pool salts, each estimated from
- * the others, fall inside their intervals. The salt itself is never an
- * anchor; `excludeMeasured` also leaves its own miss out of the floor.
+ * from 1:1 and 2:2 salts by about 1000) when they were mixed in among sets
+ * of one type under the same calibration. Sets of the target's own charge
+ * type are therefore used wherever one exists. Only a salt with none gets
+ * one fallback estimate, method `anchored-cross-kapustinskii`, from sets
+ * that span charge types, with Kapustinskii differences alone (the one
+ * form with the same constants for every charge type), a substituting
+ * cation N that bonds like M (noble-gas core or not, both), and a bracket
+ * scale, typical spread and floors of their own, calibrated by estimating
+ * every pool salt from such sets only. The standard uncertainty is
+ * √(u_data² + (κ·spread)² + f²): the anchors' own uncertainties, the
+ * weighted spread of the sets (scaled by κ ≤ 1 where the pool shows it
+ * overstating the misses), and a floor f calibrated so that 95 % of the
+ * pool salts, each estimated from the others, fall inside their intervals
+ * (see {@link anchoredFloor}). The salt itself is never an anchor;
+ * `excludeMeasured` also leaves its own miss out of the calibration.
  *
  * @param salt - an anhydrous salt of one cation and one anion
  * @param options - leave-one-out switches
  * @param options.excludeMeasured - leave the salt's own miss out of the floor calibration
  * @param dataset - measured and cycle enthalpies of solution of the anchor salts, and the lattice estimators' inputs (default: built-in)
- * @returns basis `anchored`, method `anchored-<estimator>`; empty when no set applies
+ * @returns basis `anchored`, method `anchored-<estimator>` (or `anchored-cross-kapustinskii`); empty when no set applies
  * @see Jenkins, H. D. B.; Glasser, L. on difference rules in thermochemistry; the four-salt difference is common practice in estimating thermochemical quantities
  * @example
  * ```ts
@@ -511,16 +589,24 @@ export function anchoredEstimates(salt: Salt, lattice: () => SaltLattice, option
   const type = chargeType(salt) ?? 'other';
   const group: FloorGroupKey = { chargeType: type, ionClass: saltIonClass(salt, dataset) };
   const out: Estimate[] = [];
-  const combinations = combine(target, ALL_MODELS, dataset);
+  let mode: SetMode = 'same';
+  let combinations = combine(target, ALL_MODELS, dataset, mode);
+  if (!combinations.some((c) => c !== undefined)) {
+    // No set of the target's own charge type: sets that span charge types, with Kapustinskii differences and their own calibration.
+    mode = 'cross';
+    const [c] = combine(target, [CROSS_MODEL], dataset, mode);
+    combinations = [];
+    combinations[CROSS_MODEL] = c;
+  }
   for (const [mi, model] of latticeModels.entries()) {
     const c = combinations[mi];
     if (!c) continue;
-    const floor = anchoredFloor(model, group, options.excludeMeasured ? { excludeFormula: salt.formula } : {}, dataset);
+    const floor = anchoredFloor(model, group, { ...(options.excludeMeasured ? { excludeFormula: salt.formula } : {}), mode }, dataset);
     const f = floor.relative * Math.abs(c.lattice);
-    const calibration = floorGroups(dataset).get(model);
+    const calibration = floorGroups(dataset, mode).get(model);
     const scale = bracketScale(calibration, type, options.excludeMeasured ? salt.formula : undefined);
     const at = atScale(c, scale.k);
-    const spread = usedSpread({ ...c, spread: at.spread }, typicalSpreadOf(calibration, type));
+    const spread = floor.spreadScale * usedSpread({ ...c, spread: at.spread }, typicalSpreadOf(calibration, type));
     const u = Math.sqrt(c.dataU ** 2 + spread ** 2 + f ** 2);
     const top = c.top;
     out.push(
@@ -530,12 +616,12 @@ export function anchoredEstimates(salt: Salt, lattice: () => SaltLattice, option
         u,
         unit: 'kJ/mol',
         basis: 'anchored',
-        method: `anchored-${model}`,
+        method: mode === 'cross' ? `anchored-cross-${model}` : `anchored-${model}`,
         sources: [...top.my.sources, ...top.nx.sources, ...top.ny.sources, ...(lattice().byMethod.get(model)?.sources ?? [])],
         notes: [
-          `${c.count} anchor set${c.count === 1 ? '' : 's'} with ${model} lattice differences; the closest: ${top.my.formula} + ${top.nx.formula} − ${top.ny.formula}${top.alpha !== 1 || top.beta !== 1 || top.gamma !== -1 ? ` (coefficients ${+fixedDecimal(top.alpha, 3)}, ${+fixedDecimal(top.beta, 3)}, ${+fixedDecimal(top.gamma, 3)})` : ''}`,
+          `${c.count} anchor set${c.count === 1 ? '' : 's'} with ${model} lattice differences${mode === 'cross' ? `, spanning charge types (no set of ${type} salts alone exists; Kapustinskii's equation has one form for every charge type)` : ''}; the closest: ${top.my.formula} + ${top.nx.formula} − ${top.ny.formula}${top.alpha !== 1 || top.beta !== 1 || top.gamma !== -1 ? ` (coefficients ${+fixedDecimal(top.alpha, 3)}, ${+fixedDecimal(top.beta, 3)}, ${+fixedDecimal(top.gamma, 3)})` : ''}`,
           `lattice brackets scaled by ${fixedDecimal(scale.k, 2)} (fitted on ${scale.salts} pool salts, ${scale.group}; 1 trusts the model's differences in full, 0 drops them for ion additivity)`,
-          `u = √(anchors ${fixedDecimal(c.dataU, 1)}² + spread ${fixedDecimal(spread, 1)}² + floor ${fixedDecimal(f, 1)}²) kJ/mol: the sets' own spread ${fixedDecimal(at.spread, 1)} (${fixedDecimal(c.effectiveSets, 1)} effective sets) mixed with the typical spread of ${type} salts; floor ${fixedDecimal(100 * floor.relative, 2)} % of the lattice enthalpy, calibrated on ${floor.salts} salts (${floor.group})`,
+          `u = √(anchors ${fixedDecimal(c.dataU, 1)}² + spread ${fixedDecimal(spread, 1)}² + floor ${fixedDecimal(f, 1)}²) kJ/mol: the sets' own spread ${fixedDecimal(at.spread, 1)} (${fixedDecimal(c.effectiveSets, 1)} effective sets) mixed with the typical spread of ${type} salts${floor.spreadScale < 1 ? `, scaled by ${fixedDecimal(floor.spreadScale, 2)} (the pool salts of the group show the spread overstating their misses)` : ''}; floor ${fixedDecimal(100 * floor.relative, 2)} % of the lattice enthalpy, calibrated on ${floor.salts} salts (${floor.group}${mode === 'cross' ? ', each estimated from sets spanning charge types' : ''})`,
         ],
       }),
     );
@@ -543,12 +629,12 @@ export function anchoredEstimates(salt: Salt, lattice: () => SaltLattice, option
   return out;
 }
 
-/** The anchor sets behind an anchored estimate, for inspection. */
-export function anchorSets(salt: Salt, model: LatticeModel, dataset: Dataset = builtinDataset()): AnchorCombination | undefined {
+/** The anchor sets behind an anchored estimate, for inspection: of the target's own charge type, or (`cross`) spanning charge types. */
+export function anchorSets(salt: Salt, model: LatticeModel, dataset: Dataset = builtinDataset(), mode: SetMode = 'same'): AnchorCombination | undefined {
   const target = targetOf(salt, () => saltLattice(salt, dataset), dataset);
   if (!target) return undefined;
   const sets: AnchorSet[] = [];
-  const [c] = combine(target, [latticeModels.indexOf(model)], dataset, sets);
+  const [c] = combine(target, [latticeModels.indexOf(model)], dataset, mode, sets);
   return c ? { sets, value: c.value, dataU: c.dataU, spread: c.spread, effectiveSets: c.effectiveSets, lattice: c.lattice } : undefined;
 }
 

@@ -18,7 +18,7 @@ interface CycleTerm extends Term {
 }
 
 function ionFormationAq(ion: string, dataset: Dataset) {
-  return dataset.memo('solution.ionFormationAq', () => new Map(dataset.records('ion-formation-aq.json').map((r) => [r.ion, r]))).get(ion);
+  return dataset.index('ion-formation-aq.json').get(ion);
 }
 
 /** The formation-enthalpy terms of the dissolution, or undefined when one is missing. */

@@ -32,6 +32,17 @@ import { hypotheticalHydrate, type HypotheticalHydrate } from './knownHydrates.j
 import { hydrationText, modelEstimate } from './modelSolution.js';
 import { saltLattice, type SaltLattice } from './saltLattice.js';
 import { fixedDecimal } from '../quantity/fixedDecimal.js';
+import { caution, type Caution } from '../quantity/caution.js';
+import { hazardCautions } from './hazardCautions.js';
+
+/** The caution every dissolve result ends with (common practice). */
+export const DISSOLVE_SCREENING_CAUTION: Caution = Object.freeze(
+  caution(
+    'screening',
+    'notice',
+    'Screening estimate. A dissolving salt can scald or freeze skin, and some salts are oxidisers, toxic or restricted: follow the safety data sheet, local codes, product-safety regulation and licensed practice.',
+  ),
+);
 
 const DISSOLVE_OPTIONS = optionNames<DissolveOptions>('dissolve', { excludeMeasured: true, temperatureC: true });
 
@@ -73,13 +84,25 @@ export interface DissolveResult {
     heatCapacityOfSolution?: Estimate;
   };
   /**
-   * Set when the salt is a hydrate no table knows (`KCl·50H2O`): its
-   * estimates come from the difference rule applied to a solid nobody has
-   * made, so they are given on the `model` basis, with a note, and describe
-   * no real crystal.
+   * Set when the salt is a hydrate no table lists but with no more waters
+   * than a known form of its salt (`MgSO4·4H2O` between the known mono- and
+   * hexahydrates): its estimates come from the difference rule applied to a
+   * solid the tables do not know, so they are given on the `model` basis,
+   * with a note. A hydrate with more waters than any known form
+   * (`KCl·50H2O`) is refused instead (`NOT_APPLICABLE`).
    */
   hypotheticalHydrate?: HypotheticalHydrate;
+  /**
+   * Set when the formula as written reads through a likely slip of the keyboard while another salt is one slip
+   * away (`KN3` for `KNO3`): the values are those of the salt as read, and `suggestion` is the one probably meant.
+   */
+  suspectedTypo?: { suggestion: string; message: string };
   notes: string[];
+  /**
+   * What to take care of, each `{ kind, severity, text }`: a suspected typo (`suspected-typo`), a hypothetical
+   * hydrate (`data-quality`), the salt's hazards from the hazards table, and the closing screening line.
+   */
+  cautions: Caution[];
 }
 
 /** Within one basis, methods in order of preference (lower first); others after. */
@@ -164,6 +187,8 @@ interface SaltProfile {
   failure: { open?: IonheatError; hidden?: IonheatError };
   /** The salt's lattice values, once computed. */
   lattice?: SaltLattice;
+  /** The salt's hazard cautions, once computed. */
+  hazards?: readonly Caution[];
 }
 
 function profileOf(salt: Salt, dataset: Dataset, store: ProfileStore): SaltProfile {
@@ -285,6 +310,21 @@ function hypotheticalText(salt: Salt, h: HypotheticalHydrate): string {
   return `${salt.formula} is a hypothetical hydrate (${h.reason}; the tables know ${forms.length > 0 ? forms.join(', ') : `no form of ${salt.anhydrous}`}): the difference rule gives what a crystal of that formula would have if it existed, not a property of a real solid`;
 }
 
+/**
+ * The refusal for a hydrate with more waters than any known form of its
+ * salt: the difference rule would extrapolate each water as if it were
+ * bound in a crystal (KCl·50H₂O would come out near +900 kJ/mol), a number
+ * that describes no solid and would read as a strong cooling effect.
+ */
+function overHydrated(salt: Salt, h: HypotheticalHydrate, dataset: Dataset): IonheatError {
+  const forms = h.knownWaters.map((w) => (w === 0 ? salt.anhydrous : `${salt.anhydrous}·${w === 1 ? '' : w}H2O`));
+  return new IonheatError(
+    'NOT_APPLICABLE',
+    `no enthalpy of solution is given for ${salt.formula}: it has more waters of crystallization than any form of ${salt.anhydrous} the ${dataset.label} tables know (${forms.join(', ')}), so no such solid is known and the difference rule would extrapolate to a crystal nobody has made; if the hydrate is real, give its measured enthalpy of solution or formation enthalpy in your own data`,
+    { text: salt.formula },
+  );
+}
+
 /** An estimate of a hypothetical hydrate: it rests on no real related solid, so it is never `anchored`. */
 function asHypothetical(e: Estimate, salt: Salt, h: HypotheticalHydrate): Estimate {
   return { ...e, basis: e.basis === 'anchored' ? 'model' : e.basis, sources: [...e.sources], notes: [hypotheticalText(salt, h), ...e.notes] };
@@ -347,7 +387,8 @@ function ranked(salt: Salt, profile: SaltProfile, hide: boolean, dataset: Datase
  *   `temperatureC` (°C, 0–40; default 25)
  * @param dataset - every table the bases draw on (default: built-in)
  * @returns kJ/mol, positive = endothermic (the pack cools); heats per gram in J/g
- * @throws IonheatError `MISSING_DATA` when no basis applies; `NOT_APPLICABLE` for a non-electrolyte without a measured value
+ * @throws IonheatError `MISSING_DATA` when no basis applies; `NOT_APPLICABLE` for a non-electrolyte without a measured value,
+ *   a salt that reacts with water, or a hydrate with more waters than any form of its salt the tables know (`KCl·50H2O`)
  * @see measured values: the CRC table, source key `crcSolution`, Parker (1965), `parker1965`; formation enthalpies:
  *   Wagman et al. (1982), `wagman1982`; hydration: Marcus (1997), `marcus1997`; the difference rule: Jenkins and
  *   Glasser (2004), `jenkinsGlasser2004`; docs/methods.md, "Enthalpy of solution".
@@ -390,8 +431,8 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
   if (Object.is(celsius, -0)) return dissolveWith(salt, { ...options, temperatureC: 0 }, dataset, store);
   const notes: string[] = [];
   const typo = typeof formula === 'string' ? typoSuspicion(formula, salt, dataset) : undefined;
-  if (typo) notes.push(typo.message);
   const hypothetical = hypotheticalHydrate(salt, dataset);
+  if (hypothetical?.reason === 'more waters than any known hydrate' && hypothetical.knownWaters.length > 0) throw overHydrated(salt, hypothetical, dataset);
   if (hypothetical) notes.push(hypotheticalText(salt, hypothetical));
   if (hide) notes.push("the salt's own measured enthalpy of solution and crystal formation enthalpy were hidden (excludeMeasured)");
 
@@ -428,6 +469,13 @@ function dissolveWith(formula: string | Salt, options: DissolveOptions, dataset:
     ...(hydration ? { hydration } : {}),
     temperature: { celsius, ...(heatCapacity ? { heatCapacityOfSolution: heatCapacity } : {}) },
     ...(hypothetical ? { hypotheticalHydrate: hypothetical } : {}),
+    ...(typo ? { suspectedTypo: { suggestion: typo.suggestion, message: typo.message } } : {}),
     notes,
+    cautions: [
+      ...(typo ? [caution('suspected-typo', 'warning', `Suspected typo: ${typo.message}. The values given are those of ${salt.formula} as read.`)] : []),
+      ...(hypothetical ? [caution('data-quality', 'warning', `Hypothetical hydrate: ${hypotheticalText(salt, hypothetical)}.`)] : []),
+      ...(profile.hazards ??= hazardCautions(salt, dataset).map((c) => (profile.kept ? Object.freeze(c) : c))),
+      DISSOLVE_SCREENING_CAUTION,
+    ],
   };
 }

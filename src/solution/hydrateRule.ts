@@ -76,8 +76,10 @@ export interface HydrateRuleScatter {
   family: string;
   /**
    * Standard uncertainty of θ itself, kJ/mol per water: 0 where the family
-   * fits its own θ; where it falls back to every pair, the spread of the θ
-   * of the families that do fit their own, since its own θ is not known.
+   * fits its own θ; where it falls back to every pair, its own θ is not
+   * known, and may lie as far from the pooled θ as any single pair's: the
+   * largest |θᵢ − θ_pooled| over the pairs (and at least the spread of the
+   * θ of the families that fit their own).
    * It enters linearly in Δn, being the same for every water.
    */
   thetaU: number;
@@ -170,7 +172,8 @@ function rulePairs(dataset: Dataset): readonly RulePair[] {
  * pooled scatter (about the θ fitted to every pair) as `FAMILY_PRIOR_PAIRS`
  * pseudo-pairs, s² = (N_f·s_f² + 4·s²_all)/(N_f + 4); a family with fewer
  * than `MIN_FAMILY_PAIRS` pairs uses every pair and the pooled fit instead,
- * and its θ is then uncertain by the spread of the fitted family θs (`thetaU`). `excludeFormula`
+ * and its θ is then uncertain by as much as the farthest single pair's θ
+ * lies from the pooled one (`thetaU`). `excludeFormula`
  * leaves out the pairs involving one salt (its own values are hidden in
  * leave-one-out), so neither θ nor the scatter sees them.
  *
@@ -206,7 +209,11 @@ export function hydrateRuleScatter(options: { excludeFormula?: string; family?: 
     for (const p of pairs) families.set(p.family, [...(families.get(p.family) ?? []), p]);
     const thetas = [...families.values()].filter((l) => l.length >= MIN_FAMILY_PAIRS).map(fitted);
     const mean = thetas.reduce((s, t) => s + t, 0) / Math.max(1, thetas.length);
-    const thetaU = thetas.length > 1 ? Math.sqrt(thetas.reduce((s, t) => s + (t - mean) ** 2, 0) / (thetas.length - 1)) : 0;
+    const familySpread = thetas.length > 1 ? Math.sqrt(thetas.reduce((s, t) => s + (t - mean) ** 2, 0) / (thetas.length - 1)) : 0;
+    // A family the tables cannot calibrate may sit as far from the pooled θ as the most extreme salt seen (AlCl₃ binds its
+    // six waters some 30 kJ/mol per water more strongly than the pooled θ), not merely as far as the fitted families' means.
+    const widest = pairs.reduce((w, p) => Math.max(w, Math.abs(p.theta - pooledTheta)), 0);
+    const thetaU = Math.max(familySpread, widest);
     return { perSqrtWater: pooled, pairs: pairs.length, theta: pooledTheta, family: 'all', thetaU };
   }
   const theta = fitted(own);

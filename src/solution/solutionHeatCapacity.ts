@@ -24,7 +24,7 @@ export const KIRCHHOFF_RANGE_C = { min: 0, max: 40 } as const;
 export const TABLE_TEMPERATURE_C = 25;
 
 function ionCpIndex(dataset: Dataset) {
-  return dataset.memo('solution.ionCp', () => new Map(dataset.records('ion-heat-capacities-aq.json').map((r) => [r.ion, r])));
+  return dataset.index('ion-heat-capacities-aq.json');
 }
 
 /**

@@ -8,7 +8,7 @@
  *
  * @module
  */
-import { bracketedRoot } from '../pack/bracketedRoot.js';
+import { bracketedRoot } from '../numeric/bracketedRoot.js';
 
 /** One point of the hydrate's liquidus: temperature (°C) and grams of anhydrous salt per gram of water. */
 export interface LiquidusPoint {

@@ -18,7 +18,9 @@ import { parameter, type TimeCourseOptions, type TimeCourseParameter } from '../
 import { fillConstants, type CrystallisingFill, type LiquidusPoint } from './crystallisingFill.js';
 import { PLATEAU_BAND_K, runWarmer, type WarmerRun } from './warmerCourse.js';
 import { warmerMelt, type WarmerMelt } from './warmerMelt.js';
+import type { Caution } from '../quantity/caution.js';
 import { warmerCautions } from './warmerCautions.js';
+import { PACK_INPUT_RANGES } from '../pack/packInput.js';
 
 /** A warmer fill: the hydrate and its mass, extra water, the start temperature and the container. */
 export interface WarmerFill {
@@ -94,7 +96,8 @@ export interface WarmerResult {
   secondsAboveBurnThreshold: number;
   /** The energy balance of the nominal run, J: latent heat released = sensible heat stored (+ heat lost); residuals near zero. */
   energy: WarmerRun['energy'];
-  cautions: string[];
+  /** Burns at the plateau, recharging, the salt's hazards and the screening line, each `{ kind, severity, text }`. */
+  cautions: Caution[];
   notes: string[];
   sources: string[];
 }
@@ -125,10 +128,10 @@ function checkFill(fill: WarmerFill): { massG: number; extraWaterG: number; star
   if (fill === null || typeof fill !== 'object' || Array.isArray(fill)) throw new IonheatError('INVALID_ARGUMENT', `a warmer fill is { salt, massG, extraWaterG?, startC?, containerJPerK? }, got ${describeValue(fill)}`, { field: 'fill' });
   checkOptionKeys(fill, WARMER_FILL, 'fill');
   return {
-    massG: numberArgument(fill.massG, 'massG', 'the mass of hydrate in g', { min: 1e-3, max: 1e6 }),
+    massG: numberArgument(fill.massG, 'massG', 'the mass of hydrate', PACK_INPUT_RANGES.massG),
     extraWaterG: fill.extraWaterG === undefined ? 0 : numberArgument(fill.extraWaterG, 'extraWaterG', 'the extra water in g', { min: 0, max: 1e6 }),
     startC: fill.startC === undefined ? DEFAULT_START_C : numberArgument(fill.startC, 'startC', 'the start temperature in °C', { min: -40, max: 100 }),
-    containerJPerK: fill.containerJPerK === undefined ? 0 : numberArgument(fill.containerJPerK, 'containerJPerK', 'the container heat capacity in J/K', { min: 0, max: 1e8 }),
+    containerJPerK: fill.containerJPerK === undefined ? 0 : numberArgument(fill.containerJPerK, 'containerJPerK', 'the container heat capacity', PACK_INPUT_RANGES.containerJPerK),
   };
 }
 

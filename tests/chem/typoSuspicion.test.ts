@@ -50,10 +50,12 @@ describe('a reading through a slip is refused with what was probably meant', () 
 describe('where both readings are measured salts, compute and warn', () => {
   // A user's measured enthalpy of solution for KN3 (a test value, not data) makes the literal reading a measured salt.
   const withAzide = builtinDataset().withOverrides({ 'solution-enthalpies.json': [{ formula: 'KN3', value: 20, unit: 'kJ/mol', uncertainty: 1, source: 'test', fromMemory: false }] }, 'test', { test: { citation: 'invented for this test', kind: 'inHouse' } } as never);
-  it('dissolve computes KN03 as KN3 and names KNO3 in a note', () => {
+  it('dissolve computes KN03 as KN3 and names KNO3 in a suspected-typo caution and in suspectedTypo', () => {
     const r = dissolve('KN03', {}, withAzide);
     expect(r.formula).toBe('KN3');
-    expect(r.notes.some((n) => n.includes('KNO₃ is one slip away'))).toBe(true);
+    expect(r.suspectedTypo?.suggestion).toBe('KNO3');
+    expect(r.cautions[0]).toMatchObject({ kind: 'suspected-typo', severity: 'warning' });
+    expect(r.cautions[0]!.text).toContain('KNO₃ is one slip away');
   });
   it('the screen carries the warning in the row and ranks it as undetermined, not silently first', () => {
     const result = screen(['KN03', 'NH4Cl'], {}, withAzide);

@@ -4,11 +4,11 @@
 // (The records below are deliberately broken; their numbers are the built-in
 // ones, CRC Handbook and NBS tables, and play no part in the checks.)
 import { describe, expect, it } from 'vitest';
-import { builtinDataset } from '../../src/data/builtin.js';
+import { builtinDataset } from '../../src/data/recordCheck.js';
 import { IonheatError } from '../../src/error.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { measuredSolutionEnthalpy } from '../../src/solution/measuredSolution.js';
-import { saltHazards } from '../../src/pack/saltHazards.js';
+import { saltHazards } from '../../src/solution/saltHazards.js';
 import { solubilityCurve } from '../../src/pack/solubilityCurve.js';
 
 function refusal(f: () => unknown): IonheatError {

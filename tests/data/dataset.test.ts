@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { builtinDataset } from '../../src/data/builtin.js';
+import { builtinDataset } from '../../src/data/recordCheck.js';
 import { IonheatError } from '../../src/error.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { measuredSolutionEnthalpy } from '../../src/solution/measuredSolution.js';

@@ -176,13 +176,13 @@ describe('the command line under hostile arguments', () => {
 
   // Named cases: each was, or could easily be, a failure; they run on every seed.
   const named: [string[], RegExp][] = [
-    [['pack', '--salt', 'NH4NO3', '--salt-mass', '1e308', '--water', '100', '--json'], /^ionheat: --salt-mass .*at most/],
-    [['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', '1e308'], /^ionheat: --water .*at most/],
-    [['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', '100', '--container', '1e308'], /^ionheat: --container .*at most/],
-    [['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', '100', '--heat-capacity', '1e308'], /^ionheat: --heat-capacity .*at most/],
+    [['pack', '--salt', 'NH4NO3', '--salt-mass', '1e308', '--water', '100', '--json'], /^ionheat: --salt-mass: .*at most/],
+    [['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', '1e308'], /^ionheat: --water: .*at most/],
+    [['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', '100', '--container', '1e308'], /^ionheat: --container: .*at most/],
+    [['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', '100', '--heat-capacity', '1e308'], /^ionheat: --heat-capacity: .*at most/],
     [['pack', '--salt', 'NH4NO3', '--salt-mass', 'NaN', '--water', '100'], /^ionheat: --salt-mass needs a number, got "NaN"/],
     [['pack', '--salt', 'NH4NO3', '--salt-mass', '40', '--water', 'Infinity'], /^ionheat: --water needs a number, got "Infinity"/],
-    [['pack', '--salt', 'NH4NO3', '--salt-mass', '-0', '--water', '100'], /^ionheat: --salt-mass must be greater than zero/],
+    [['pack', '--salt', 'NH4NO3', '--salt-mass', '-0', '--water', '100'], /^ionheat: --salt-mass: the mass of NH4NO3 must be at least 0.001 g/],
     [['dissolve', 'NaCl', '--temperature', '1e308'], /^ionheat: .*temperature/],
     [['dissolve', 'Na999999999Cl999999999'], /^ionheat: the count 999999999 at position 3 is too large/],
     [['salt', HUGE], /^ionheat: the formula is 100000 characters long/],

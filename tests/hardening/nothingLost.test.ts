@@ -17,7 +17,7 @@ import { parseJsonStrict } from '../../src/node/strictJson.js';
 import { textTable } from '../../src/node/cli/textTable.js';
 import { csvCell } from '../../src/node/table/csvCell.js';
 import { BoundedCache } from '../../src/data/boundedCache.js';
-import { builtinDataset } from '../../src/data/builtin.js';
+import { builtinDataset } from '../../src/data/recordCheck.js';
 import { parseSalt, screen, screenStream, dissolve } from '../../src/index.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'ionheat-nothing-lost-'));

@@ -78,8 +78,8 @@ const cases: Record<string, Case> = {
   makeEstimate: { samples: () => [[{ quantity: 'q', value: 787, u: 10, unit: 'kJ/mol', basis: 'model', method: 'kapustinskii', sources: ['a'], notes: ['n'] }], [{ quantity: 'q', value: 1, u: 0, unit: 'K', basis: 'measured', method: 'm', low: 0, high: 2 }]], userArgs: 1 },
   roundEstimate: { samples: () => [[s().estimate], [s().lattice]], userArgs: 1 },
   probabilityPositive: { samples: () => [[s().estimate], [{ value: 0, u: 0 }]], userArgs: 1 },
-  normalCdf: { samples: () => [[1.96], [-3]], userArgs: 1 },
   formatEstimate: { samples: () => [[s().estimate, { signed: true }], [s().hydration]], userArgs: 2 },
+  cautionLine: { samples: () => [[{ kind: 'screening', severity: 'notice', text: 'Screening estimate.' }], [{ kind: 'contact-burn', severity: 'danger', text: 'Contact-burn risk' }]], userArgs: 1 },
   roundToUncertainty: { samples: () => [[787.3456, 1.2345], [-3.14159, 0.0271]], userArgs: 2 },
   // Data
   builtinDataset: { samples: () => [[]], userArgs: 0 },

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { bornLande, bornMayer, formulaUnitVolume, glasserLatticeEnergy, kapustinskii, latticeEnthalpyCorrection, vbtLatticeEnergy } from '../../src/index.js';
 import { shortestDistance } from '../../src/lattice/latticeStructure.js';
-import { studentQuantile975 } from '../../src/lattice/studentQuantile.js';
+import { studentQuantile975 } from '../../src/numeric/studentQuantile.js';
 import { RT_STANDARD } from '../../src/quantity/constants.js';
 
 describe('Kapustinskii (1956 form: K = 1.2025e−4 J·m/mol, ρ = 0.345 Å; Kapustinskii, Q. Rev. Chem. Soc. 10, 283)', () => {

@@ -73,7 +73,7 @@ describe('boiling hold', () => {
     expect(r.finalTemperature.value).toBeGreaterThan(100);
     expect(r.vaporMass).toBeGreaterThan(0);
     closes(r);
-    expect(r.cautions[0]).toMatch(/^Boiling/);
-    expect(r.cautions.some((c) => c.startsWith('Contact-burn risk'))).toBe(true);
+    expect(r.cautions[0]?.text).toMatch(/^Boiling/);
+    expect(r.cautions.some((c) => c.text.startsWith('Contact-burn risk'))).toBe(true);
   });
 });

@@ -66,7 +66,7 @@ describe('time inside a band, and time above the burn threshold', () => {
     expect(hot.parameters.dissolutionTimeConstantS).toEqual({ value: 60, unit: 's', assumed: true });
     expect(hot.notes.some((n) => n.startsWith('assumed values for illustration'))).toBe(true);
     expect(hot.secondsAboveBurnThreshold).toBeGreaterThan(60);
-    expect(hot.cautions[0]).toContain('stays above 44 °C for about');
+    expect(hot.cautions[0]?.text).toContain('stays above 44 °C for about');
   });
   it('rejects a band the wrong way round, naming the field', () => {
     expect(() => packTimeCourse(dilute, { band: { lowC: 10, highC: 5 } })).toThrow(/band/);

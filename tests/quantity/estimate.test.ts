@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { makeEstimate, normalCdf, probabilityPositive, roundEstimate } from '../../src/quantity/estimate.js';
+import { makeEstimate, probabilityPositive, roundEstimate } from '../../src/quantity/estimate.js';
+import { normalCdf } from '../../src/numeric/normalCdf.js';
 import { roundToUncertainty } from '../../src/quantity/rounding.js';
 import { exactSum } from '../../src/quantity/exactSum.js';
 import { IonheatError } from '../../src/error.js';

@@ -6,7 +6,8 @@ import { describe, expect, it } from 'vitest';
 import { builtinDataset } from '../../src/data/builtin.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { anchoredSolutionEnthalpies, anchorSets, anchoredFloor } from '../../src/solution/anchoredSolution.js';
-import { anchorIndex } from '../../src/solution/anchorIndex.js';
+import { anchorIndex, cationCoresAlike } from '../../src/solution/anchorIndex.js';
+import { solutionEnthalpyFromCycle } from '../../src/solution/cycleSolution.js';
 import { dissolve } from '../../src/solution/dissolve.js';
 
 const dataset = builtinDataset();
@@ -118,5 +119,67 @@ describe('dissolve with excludeMeasured: verdicts over the measured table', () =
     const judged = cases.filter((c) => c.d);
     const inside = judged.filter(({ r, d }) => d!.best.low <= r.value && r.value <= d!.best.high);
     expect(inside.length / judged.length).toBeGreaterThanOrEqual(0.9);
+  });
+});
+
+describe('sets that span charge types (the fallback of a salt with no set of its own type)', () => {
+  const type = (f: string) => parseSalt(f).ions.map((i) => Math.abs(i.charge)).join(':');
+  // References: NBS formation enthalpies (Wagman et al. 1982) through the cycle, the salt's own crystal value hidden from the estimate.
+  it.each(['ZnCl2', 'CoSO4', 'Mg(ClO4)2', 'FeCl2'])('%s: one Kapustinskii estimate from sets spanning charge types, holding the NBS cycle value', (formula) => {
+    const salt = parseSalt(formula);
+    const est = anchoredSolutionEnthalpies(salt, { excludeMeasured: true });
+    expect(est.map((e) => e.method)).toEqual(['anchored-cross-kapustinskii']);
+    const reference = solutionEnthalpyFromCycle(salt)!.value;
+    expect(est[0]!.low).toBeLessThanOrEqual(reference);
+    expect(est[0]!.high).toBeGreaterThanOrEqual(reference);
+    expect(est[0]!.notes[0]).toMatch(/spanning charge types/);
+  });
+
+  it('balances the ions exactly, spans charge types in every set, and substitutes only a cation that bonds alike', () => {
+    for (const formula of ['ZnCl2', 'CoSO4', '(NH4)2SO4']) {
+      const c = anchorSets(parseSalt(formula), 'kapustinskii', dataset, 'cross');
+      expect(c?.sets.length, formula).toBeGreaterThan(0);
+      for (const s of c!.sets) {
+        const v = ionVector(s.my.formula, s.alpha);
+        ionVector(s.nx.formula, s.beta, v);
+        ionVector(s.ny.formula, s.gamma, v);
+        const target = ionVector(formula);
+        for (const ion of new Set([...v.keys(), ...target.keys()])) expect(v.get(ion) ?? 0, `${formula} ${ion}`).toBeCloseTo(target.get(ion) ?? 0, 12);
+        expect([s.my, s.nx, s.ny].some((a) => type(a.formula) !== type(formula)), `${formula}: ${s.my.formula} ${s.nx.formula} ${s.ny.formula}`).toBe(true);
+        expect(cationCoresAlike(s.nx.cation, parseSalt(formula).ions.find((i) => i.charge > 0)!.ion, dataset)).toBe(true);
+      }
+    }
+  });
+
+  it('is not used where a set of the salt’s own charge type exists, nor for a sulfide whose only relatives bond otherwise', () => {
+    expect(anchoredSolutionEnthalpies(parseSalt('KCl'), { excludeMeasured: true }).some((e) => e.method.includes('cross'))).toBe(false);
+    // Na2S: the only other sulfide in the tables is ZnS, whose d¹⁰ cation does not bond like Na⁺.
+    expect(anchoredSolutionEnthalpies(parseSalt('Na2S'), { excludeMeasured: true })).toEqual([]);
+  });
+
+  it('scales the spread down only by what the pool shows, never above 1, and leaves the salt out', () => {
+    for (const mode of ['same', 'cross'] as const) {
+      for (const chargeType of ['1:1', '2:1', '1:2', '2:2']) {
+        const f = anchoredFloor('kapustinskii', { chargeType, ionClass: 'polyatomic anion' }, { mode });
+        expect(f.spreadScale).toBeGreaterThan(0);
+        expect(f.spreadScale).toBeLessThanOrEqual(1);
+      }
+    }
+    expect(anchoredFloor('kapustinskii', { chargeType: '1:2', ionClass: 'polyatomic anion' }).spreadScale).toBeLessThan(1);
+  });
+});
+
+describe('floors of small groups', () => {
+  it('take the largest need any estimator saw in the group: AgBr (Born–Mayer sees only AgCl beside it) holds its NBS cycle value', () => {
+    // NBS formation enthalpies (Wagman et al. 1982) through the cycle: AgBr about +84.4 kJ/mol; its own crystal value hidden from the estimate.
+    const reference = solutionEnthalpyFromCycle(parseSalt('AgBr'))!.value;
+    for (const e of anchoredSolutionEnthalpies(parseSalt('AgBr'), { excludeMeasured: true })) {
+      expect(e.low, e.method).toBeLessThanOrEqual(reference);
+      expect(e.high, e.method).toBeGreaterThanOrEqual(reference);
+    }
+    const group = { chargeType: '1:1', ionClass: 'covalent-prone' } as const;
+    const bornMayer = anchoredFloor('born-mayer', group, { excludeFormula: 'AgBr' });
+    expect(bornMayer.relative).toBeGreaterThanOrEqual(anchoredFloor('kapustinskii', { chargeType: '1:1', ionClass: 'monatomic' }, { excludeFormula: 'AgBr' }).relative);
+    expect(bornMayer.group).toMatch(/at least the largest miss/);
   });
 });

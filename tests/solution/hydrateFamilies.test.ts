@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { hydrateRuleFamily, hydrateRuleScatter, MIN_FAMILY_PAIRS, WATER_OF_CRYSTALLIZATION_ENTHALPY } from '../../src/solution/hydrateRule.js';
 import { hypotheticalHydrate } from '../../src/solution/knownHydrates.js';
 import { dissolve } from '../../src/solution/dissolve.js';
+import { solutionEnthalpyFromCycle } from '../../src/solution/cycleSolution.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { builtinDataset } from '../../src/data/builtin.js';
 
@@ -36,6 +37,20 @@ describe('difference rule by salt family', () => {
     expect(c.pairs).toBe(hydrateRuleScatter().pairs);
     expect(hydrateRuleScatter().theta).toBe(WATER_OF_CRYSTALLIZATION_ENTHALPY);
   });
+
+  it('gives an uncalibrated family’s θ the uncertainty of the farthest pair, so AlCl3 and its hexahydrate are held', () => {
+    // Its own θ is unknown: it may lie as far from the pooled θ as any pair does (AlCl3·6H2O: about −331 against −300 kJ/mol per water).
+    const c = hydrateRuleScatter({ family: '3:1', excludeFormula: 'AlCl3·6H2O' });
+    const fitted = ['1:1', '2:1', '1:2', '2:2'].map((family) => hydrateRuleScatter({ family, excludeFormula: 'AlCl3·6H2O' }).theta);
+    for (const theta of fitted) expect(c.thetaU).toBeGreaterThanOrEqual(Math.abs(theta - c.theta));
+    // References: the NBS cycle values (Wagman et al. 1982), the salt's own crystal value hidden from the estimate.
+    for (const formula of ['AlCl3·6H2O', 'AlCl3']) {
+      const r = dissolve(formula, { excludeMeasured: true });
+      const reference = solutionEnthalpyFromCycle(parseSalt(formula))!.value;
+      expect(r.best.low, formula).toBeLessThanOrEqual(reference);
+      expect(r.best.high, formula).toBeGreaterThanOrEqual(reference);
+    }
+  });
 });
 
 describe('hypothetical hydrates', () => {
@@ -47,9 +62,15 @@ describe('hypothetical hydrates', () => {
     expect(hypotheticalHydrate(parseSalt('NaCl'), dataset)).toBeUndefined();
   });
 
-  it('dissolve gives KCl·50H2O no anchored estimate, only flagged ones', () => {
-    const r = dissolve('KCl·50H2O');
-    expect(r.hypotheticalHydrate?.reason).toBe('more waters than any known hydrate');
+  it('dissolve refuses KCl·50H2O (more waters than any known form) and names the known forms', () => {
+    // The difference rule would have given about +914 kJ/mol for a solid nobody has made.
+    expect(() => dissolve('KCl·50H2O')).toThrowError(expect.objectContaining({ code: 'NOT_APPLICABLE', message: expect.stringMatching(/more waters of crystallization than any form of KCl .*\(KCl\)/) }));
+    expect(() => dissolve('KCl·50H2O', { excludeMeasured: true })).toThrowError(expect.objectContaining({ code: 'NOT_APPLICABLE' }));
+  });
+
+  it('dissolve gives a hydrate no table lists, within the known waters, only flagged estimates', () => {
+    const r = dissolve('MgSO4·4H2O');
+    expect(r.hypotheticalHydrate?.reason).toBe('a hydrate no table lists');
     expect(r.estimates.every((e) => e.basis === 'model')).toBe(true);
     expect(r.notes[0]).toMatch(/hypothetical hydrate/);
     expect(r.best.notes[0]).toMatch(/not a property of a real solid/);

@@ -6,7 +6,7 @@
 // not checked against the NBS tables, given as an override because the
 // built-in table lacks it: the check is of the hydrate term of the sum.
 import { describe, expect, it } from 'vitest';
-import { builtinDataset } from '../../src/data/builtin.js';
+import { builtinDataset } from '../../src/data/recordCheck.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
 import { solutionHeatCapacity } from '../../src/solution/solutionHeatCapacity.js';
 
@@ -26,8 +26,8 @@ describe('solutionHeatCapacity', () => {
   it('is undefined where the crystal or an ion has no heat capacity', () => {
     // No crystal value for Na2SO4·10H2O in the built-in tables.
     expect(solutionHeatCapacity(parseSalt('Na2SO4·10H2O'))).toBeUndefined();
-    // CaCl2 has a crystal value but Ca²⁺ has no aqueous one in the built-in tables.
-    expect(solutionHeatCapacity(parseSalt('CaCl2'))).toBeUndefined();
+    // BaCl2 has a crystal value but Ba²⁺ has no aqueous one in the built-in tables (Ca²⁺ and Mg²⁺ now have).
+    expect(solutionHeatCapacity(parseSalt('BaCl2'))).toBeUndefined();
     // A non-electrolyte has no ions.
     expect(solutionHeatCapacity(parseSalt('urea'))).toBeUndefined();
   });

@@ -3,7 +3,8 @@
 // 95 % interval lies above zero (and falls below 0.025 exactly when it lies below).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { makeEstimate, normalCdf, solutionVerdict } from '../../src/index.js';
+import { makeEstimate, solutionVerdict } from '../../src/index.js';
+import { normalCdf } from '../../src/numeric/normalCdf.js';
 
 const estimate = (value: number, u: number, low?: number, high?: number) =>
   makeEstimate({ quantity: 'enthalpy of solution', value, u, unit: 'kJ/mol', basis: 'model', method: 'kapustinskii', ...(low === undefined ? {} : { low, high }) });

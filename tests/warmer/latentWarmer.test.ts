@@ -131,8 +131,8 @@ describe('recharge', () => {
   it('Glauber salt cannot be recharged by heating alone: its anhydrous salt is less soluble hot (CRC), so null and a caution', () => {
     const w = latentWarmer({ salt: 'Na2SO4·10H2O', massG: 100 });
     expect(w.rechargeTemperature).toBeNull();
-    expect(w.cautions.some((c) => c.includes('cannot be fully recharged'))).toBe(true);
-    expect(w.cautions.some((c) => c.startsWith('Repeated recharging of Na2SO4·10H2O: Incongruent melting'))).toBe(true);
+    expect(w.cautions.some((c) => c.text.includes('cannot be fully recharged'))).toBe(true);
+    expect(w.cautions.some((c) => c.text.startsWith('Repeated recharging of Na2SO4·10H2O: Incongruent melting'))).toBe(true);
   });
 });
 
@@ -149,10 +149,10 @@ describe('intervals and cautions', () => {
   });
   it('a plateau above 44 °C carries the contact-burn caution and the screening line; one below it the long-contact one', () => {
     const hot = latentWarmer({ salt: 'NaCH3COO·3H2O', massG: 100 });
-    expect(hot.cautions[0]).toMatch(/^Contact-burn risk: the warmer holds a plateau near 58.0 °C/);
-    expect(hot.cautions.at(-1)).toContain('licensed practice');
+    expect(hot.cautions[0]?.text).toMatch(/^Contact-burn risk: the warmer holds a plateau near 58.0 °C/);
+    expect(hot.cautions.at(-1)?.text).toContain('licensed practice');
     const mild = latentWarmer({ salt: 'Na2HPO4·12H2O', massG: 100 });
-    expect(mild.cautions[0]).toMatch(/^Long contact/);
+    expect(mild.cautions[0]?.text).toMatch(/^Long contact/);
   });
   it('a salt that is not a hydrate, or a hydrate without melt data, is refused naming what is missing', () => {
     expect(() => latentWarmer({ salt: 'NaCl', massG: 10 })).toThrow(/NaCl is not a salt hydrate/);

@@ -4,6 +4,7 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { cautionSchema } from '../../src/index.js';
 import { runCliInMemory } from '../node/runCliInMemory.js';
 
 const run = (args: string[], cwd = process.cwd()) => runCliInMemory(args, { cwd });
@@ -27,9 +28,9 @@ describe('warmer --json contract', () => {
     expect(j.crystallisedAtPlateau.low).toBeGreaterThanOrEqual(0);
     expect(j.crystallisedAtPlateau.high).toBeLessThanOrEqual(1);
     expect(j.heatReleased.value).toBeCloseTo(22.2, 1);
-    expect(Array.isArray(j.cautions) && j.cautions.every((c: unknown) => typeof c === 'string')).toBe(true);
-    expect(j.cautions[0]).toMatch(/^Contact-burn risk/);
-    expect(j.cautions.at(-1)).toContain('licensed practice');
+    expect(Array.isArray(j.cautions) && j.cautions.every((c: unknown) => cautionSchema.safeParse(c).success)).toBe(true);
+    expect(j.cautions[0].text).toMatch(/^Contact-burn risk/);
+    expect(j.cautions.at(-1).text).toContain('licensed practice');
   });
   it('takes --extra-water, --container, --ambient and --g-ambient, and marks the air as given, not assumed', async () => {
     const { status, out } = await run(['warmer', '--salt', 'NaCH3COO.3H2O', '--mass', '100', '--extra-water', '10', '--container', '15', '--ambient', '5', '--g-ambient', '0.3', '--json']);
@@ -56,7 +57,7 @@ describe('warmer errors: one line, exit status 2, naming what is missing', () =>
     [['warmer', '--salt', 'NaCH3COO·3H2O'], /^ionheat: --mass is required/],
     [['warmer', '--mass', '10'], /^ionheat: --salt is required/],
     [['warmer', '--salt', 'NaXy·3H2O', '--mass', '10'], /^ionheat: --salt "NaXy·3H2O": /],
-    [['warmer', '--salt', 'NaCH3COO·3H2O', '--mass', '0'], /^ionheat: --mass: the mass of hydrate in g \(massG\) must be at least 0.001/],
+    [['warmer', '--salt', 'NaCH3COO·3H2O', '--mass', '0'], /^ionheat: --mass: the mass of hydrate must be at least 0.001 g/],
   ];
   it.each(cases)('ionheat %j', async (argv, message) => {
     const { status, out, err } = await run(argv);

@@ -1,5 +1,5 @@
 import { parseArgs, type ParseArgsConfig } from 'node:util';
-import { IonheatError } from '../../error.js';
+import { IonheatError, isIonheatError } from '../../error.js';
 import { didYouMean } from '../../quantity/nearestName.js';
 
 export type OptionSpec = NonNullable<ParseArgsConfig['options']>;
@@ -77,4 +77,28 @@ export function joinNegativeValues(argv: readonly string[], numeric: ReadonlySet
     } else out.push(a);
   }
   return out;
+}
+
+/**
+ * From a table of flags and the library fields they set (`{ water: 'waterG' }`), the flag of a field as the
+ * library names it in an error: its last part (`solids[0].massG` → `massG`, `interval.seed` → `seed`).
+ */
+export function flagTable(flags: Readonly<Record<string, string>>): (field: string) => string | undefined {
+  const byField = new Map(Object.entries(flags).map(([flag, field]) => [field, flag]));
+  return (field) => byField.get(field.slice(Math.max(field.lastIndexOf('.'), field.lastIndexOf(']')) + 1));
+}
+
+/**
+ * A library error about a field, told under the flag the user typed: `--water: the water must be at least…`
+ * rather than `the water (waterG) must be…`. Errors about no known field pass unchanged.
+ */
+export function asFlagError(e: unknown, flagOf: (field: string) => string | undefined): unknown {
+  if (!isIonheatError(e) || !e.field || e.message.startsWith('--')) return e;
+  const flag = flagOf(e.field);
+  if (flag === undefined) return e;
+  const list = /^([A-Za-z]+)\[\d+\]/.exec(e.field)?.[1];
+  let message = e.message.split(` (${e.field})`).join('');
+  if (list) message = message.replace(new RegExp(` \\(${list}\\[\\d+\\]\\)`, 'g'), '');
+  message = message.startsWith(`${e.field} `) ? `--${flag} ${message.slice(e.field.length + 1)}` : `--${flag}: ${message}`;
+  return new IonheatError(e.code, message, { field: flag, ...(e.text !== undefined ? { text: e.text } : {}) });
 }

@@ -10,13 +10,19 @@ export interface CommandContext {
   inputFiles?: readonly string[];
 }
 
-/** One subcommand of `ionheat`. */
+/** One subcommand of `ionheat`: what its module exports. */
 export interface Command {
-  name: string;
-  /** One line for the command list. */
-  summary: string;
   /** The usage block shown by `ionheat help <name>`. */
   usage: string;
   /** Runs with the arguments after the command name; resolves to the exit status. */
   run(argv: readonly string[], context: CommandContext): Promise<number>;
+}
+
+/** One line of the command table: what `ionheat help` lists, and how to load the command when it runs. */
+export interface CommandEntry {
+  name: string;
+  /** One line for the command list. */
+  summary: string;
+  /** Imports the command's module (only the command that runs is loaded). */
+  load(): Promise<Command>;
 }

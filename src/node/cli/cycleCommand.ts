@@ -25,8 +25,6 @@ const rounded = (value: number, u: number) => roundToUncertainty(value, u > 0 ? 
 
 /** `ionheat cycle <formula>`: the Born–Haber cycle, step by step. */
 export const cycleCommand: Command = {
-  name: 'cycle',
-  summary: 'build the Born–Haber cycle of a salt step by step and solve it for one unknown; optionally draw it as SVG',
   usage: [
     'ionheat cycle <formula> [--solve lattice|formation|electron-affinity] [--svg <file>] [--json]',
     '',

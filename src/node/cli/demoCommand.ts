@@ -151,13 +151,12 @@ function rankedTable(result: ScreenResult): string {
  * concerns; the chemical hazards are in the table's last column.
  */
 function temperatureCautions(rows: readonly ScreenRow[]): string[] {
+  const TEMPERATURE_KINDS: ReadonlySet<string> = new Set(['contact-burn', 'warm-contact', 'cold-injury', 'boiling']);
   const bySentence = new Map<string, string[]>();
   for (const r of rows) {
     for (const c of r.fill?.cautions ?? []) {
-      const names = [r.formula, r.salt?.anhydrous].filter((n): n is string => n !== undefined);
-      const chemical = names.some((n) => c.startsWith(`${n} (`) || c.startsWith(`${n}:`));
-      if (chemical || c.startsWith('These are screening estimates')) continue;
-      const key = c.split(':')[0]!;
+      if (!TEMPERATURE_KINDS.has(c.kind)) continue;
+      const key = c.text.split(':')[0]!;
       bySentence.set(key, [...(bySentence.get(key) ?? []), r.formula ?? r.input.formula]);
     }
   }
@@ -187,8 +186,6 @@ export function runDemoPart(part: DemoPart, dataset?: Dataset): { result: Screen
 
 /** `ionheat demo`: the built-in demonstration. */
 export const demoCommand: Command = {
-  name: 'demo',
-  summary: 'run the demonstration: screen cold-pack and hand-warmer candidates for a first-aid supplier (prices invented)',
   usage: `ionheat demo [--out <dir>] [--json]
 
   --out <dir>   where to write the candidate lists (CSV), the charts (SVG) and the

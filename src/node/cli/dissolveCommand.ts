@@ -1,7 +1,6 @@
 import type { Dataset } from '../../data/dataset.js';
 import { GENERAL_CAUTION, VERDICT_WORDS, cautionsFor, perGramText as perGram } from './dissolveWords.js';
 import { formatSalt } from '../../chem/formatSalt.js';
-import type { Salt } from '../../chem/salt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { dissolve, type DissolveResult } from '../../solution/dissolve.js';
 import { integralEnthalpyOfSolution } from '../../solution/integralEnthalpy.js';
@@ -10,6 +9,7 @@ import { userSourceOf } from '../../solution/userValueCheck.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
 import { bulletLines } from './paragraphs.js';
+import { cautionLine } from '../../quantity/caution.js';
 import { outputWidth } from './io.js';
 import { formatNumber, withTrueMinus } from '../../notation/minus.js';
 import { wrapText } from '../../notation/wrapText.js';
@@ -17,7 +17,7 @@ import { wrapText } from '../../notation/wrapText.js';
 const rounded = (e: Estimate | undefined): Estimate | undefined => (e ? roundEstimate(e) : undefined);
 
 /** The JSON contract of `ionheat dissolve --json`. */
-function toJson(r: DissolveResult, cautions: string[], integral: { molality: number; estimate: Estimate } | undefined) {
+function toJson(r: DissolveResult, integral: { molality: number; estimate: Estimate } | undefined) {
   const i = integral ? roundEstimate(integral.estimate) : undefined;
   return {
     formula: r.formula,
@@ -30,9 +30,10 @@ function toJson(r: DissolveResult, cautions: string[], integral: { molality: num
     temperature: { celsius: r.temperature.celsius, heatCapacityOfSolution: rounded(r.temperature.heatCapacityOfSolution) ?? null },
     ...(integral && i ? { integral: { molality: integral.molality, value: i.value, low: i.low, high: i.high, unit: 'kJ/mol', basis: i.basis, method: i.method, sources: i.sources } } : {}),
     ...(r.hypotheticalHydrate ? { hypotheticalHydrate: r.hypotheticalHydrate } : {}),
+    ...(r.suspectedTypo ? { suspectedTypo: r.suspectedTypo } : {}),
     molarMass: r.salt.molarMass,
     notes: r.notes,
-    cautions,
+    cautions: r.cautions,
   };
 }
 
@@ -53,8 +54,6 @@ function basisText(e: Estimate, dataset: Dataset): string {
 
 /** `ionheat dissolve <formula>`: the enthalpy of solution with its basis and verdict. */
 export const dissolveCommand: Command = {
-  name: 'dissolve',
-  summary: 'enthalpy of solution of a salt: best estimate, every basis, verdict, heat per gram',
   usage: [
     'ionheat dissolve <formula> [--exclude-measured] [--temperature <°C>] [--molality <mol/kg>] [--json]',
     '',
@@ -72,16 +71,17 @@ export const dissolveCommand: Command = {
     );
     const temperatureC = numberOption(values.temperature, 'temperature');
     const r = dissolve(positionals[0]!, { excludeMeasured: values['exclude-measured'] === true, ...(temperatureC !== undefined ? { temperatureC } : {}) }, dataset);
-    const cautions = [...cautionsFor(r.salt, dataset), GENERAL_CAUTION];
     const molality = numberOption(values.molality, 'molality');
     const integral = molality !== undefined ? { molality, estimate: integralEnthalpyOfSolution(r.salt, molality, temperatureC ?? 25, dataset) } : undefined;
     if (values.json) {
-      io.stdout(JSON.stringify(toJson(r, cautions, integral), null, 2) + '\n');
+      io.stdout(JSON.stringify(toJson(r, integral), null, 2) + '\n');
       return 0;
     }
     const best = roundEstimate(r.best);
     const out: string[] = [];
     out.push(`${formatSalt(r.salt, { style: 'unicode' })}  (${r.salt.molarMass.toFixed(2)} g/mol)`);
+    // Said second: every number below is that of the salt as read, not of the one probably meant.
+    if (r.suspectedTypo) out.push(`Suspected typo: ${r.suspectedTypo.message}. The numbers below are those of ${r.formula}.`);
     if (r.hypotheticalHydrate) {
       // Said first: every number below extrapolates the hydrate rule to a solid no table lists.
       const h = r.hypotheticalHydrate;
@@ -106,7 +106,7 @@ export const dissolveCommand: Command = {
     }
     const notes = [...new Set([...r.notes, ...r.best.notes])];
     if (notes.length > 0) tail.push('', 'Notes:', ...bulletLines(notes, outputWidth(io)));
-    tail.push('', 'Cautions:', ...bulletLines(cautions, outputWidth(io)));
+    tail.push('', 'Cautions:', ...bulletLines(r.cautions.map(cautionLine), outputWidth(io)));
     io.stdout('\n' + tail.join('\n') + '\n');
     return 0;
   },

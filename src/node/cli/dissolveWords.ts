@@ -8,7 +8,7 @@
 import type { Dataset } from '../../data/dataset.js';
 import type { Salt } from '../../chem/salt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
-import { hazardCoverage, saltHazards } from '../../pack/saltHazards.js';
+import { hazardCoverage, saltHazards } from '../../solution/saltHazards.js';
 import { formatNumber } from '../../notation/minus.js';
 
 /** The caution every dissolve result carries (common practice). */

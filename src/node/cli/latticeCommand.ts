@@ -25,8 +25,6 @@ function view(e: Estimate) {
 
 /** `ionheat lattice <formula>`: lattice enthalpy estimates with calibrated intervals. */
 export const latticeCommand: Command = {
-  name: 'lattice',
-  summary: 'estimate the lattice enthalpy of a salt by each model, with calibrated 95 % intervals',
   usage: [
     'ionheat lattice <formula> [--method kapustinskii|born-lande|born-mayer|vbt|all] [--structure <type>] [--json]',
     '',

@@ -8,24 +8,27 @@
 import { withTrueMinus } from '../../notation/minus.js';
 import { builtinDataset } from '../../data/builtin.js';
 import { isIonheatError } from '../../error.js';
-import { loadDataset } from '../loadDataset.js';
 import { didYouMean } from '../../quantity/nearestName.js';
-import type { Command } from './command.js';
-import { demoCommand } from './demoCommand.js';
+import type { CommandEntry } from './command.js';
 import { processIO, type CliIO, type ProcessIO } from './io.js';
 import { escapeControls } from '../terminalText.js';
-import { saltCommand } from './saltCommand.js';
-import { latticeCommand } from './latticeCommand.js';
-import { cycleCommand } from './cycleCommand.js';
-import { dissolveCommand } from './dissolveCommand.js';
-import { screenCommand } from './screenCommand.js';
-import { packCommand } from './packCommand.js';
-import { warmerCommand } from './warmerCommand.js';
-import { workbenchCommand } from './workbenchCommand.js';
 import { version as PACKAGE_VERSION } from '../../../package.json';
 
-/** Every command, in the order `ionheat help` lists them. */
-export const commands: readonly Command[] = [demoCommand, saltCommand, latticeCommand, cycleCommand, dissolveCommand, packCommand, warmerCommand, screenCommand, workbenchCommand];
+/**
+ * Every command, in the order `ionheat help` lists them. Each is loaded only when it runs (or its usage is
+ * asked for), so a run pays for its own command's modules and no other's.
+ */
+export const commands: readonly CommandEntry[] = [
+  { name: 'demo', summary: 'run the demonstration: screen cold-pack and hand-warmer candidates for a first-aid supplier (prices invented)', load: async () => (await import('./demoCommand.js')).demoCommand },
+  { name: 'salt', summary: 'show how a formula is read: its ions, water of crystallization and molar mass', load: async () => (await import('./saltCommand.js')).saltCommand },
+  { name: 'lattice', summary: 'estimate the lattice enthalpy of a salt by each model, with calibrated 95 % intervals', load: async () => (await import('./latticeCommand.js')).latticeCommand },
+  { name: 'cycle', summary: 'build the Born–Haber cycle of a salt step by step and solve it for one unknown; optionally draw it as SVG', load: async () => (await import('./cycleCommand.js')).cycleCommand },
+  { name: 'dissolve', summary: 'enthalpy of solution of a salt: best estimate, every basis, verdict, heat per gram', load: async () => (await import('./dissolveCommand.js')).dissolveCommand },
+  { name: 'pack', summary: 'design a hot or cold pack: final temperature (solubility-limited), 95 % interval, inverse design, time course, cautions', load: async () => (await import('./packCommand.js')).packCommand },
+  { name: 'warmer', summary: 'a latent-heat warmer (supercooled hydrate melt): plateau, share crystallised at once, heat, plateau duration, recharge, cautions', load: async () => (await import('./warmerCommand.js')).warmerCommand },
+  { name: 'screen', summary: 'rank candidate salts for a hot or cold pack and check them against a specification', load: async () => (await import('./screenCommand.js')).screenCommand },
+  { name: 'workbench', summary: 'open the workbench in a browser: salts, packs, warmers, screens and your data, computed in the page', load: async () => (await import('./workbenchCommand.js')).workbenchCommand },
+];
 
 function overview(): string {
   const width = Math.max(...commands.map((c) => c.name.length));
@@ -107,7 +110,7 @@ async function dispatch(argv: readonly string[], io: CliIO): Promise<number> {
         io.stderr(`ionheat: no command "${escapeControls(args[0])}"${didYouMean(args[0], commands.map((c) => c.name))}; try: ionheat help\n`);
         return 2;
       }
-      io.stdout(topic ? `${topic.summary}\n\n${topic.usage}\n` : overview());
+      io.stdout(topic ? `${topic.summary}\n\n${(await topic.load()).usage}\n` : overview());
       return name === undefined ? 2 : 0;
     }
     if (name === '--version') {
@@ -119,13 +122,15 @@ async function dispatch(argv: readonly string[], io: CliIO): Promise<number> {
       io.stderr(`ionheat: no command "${escapeControls(name)}"${didYouMean(name, [...commands.map((c) => c.name), 'help'])}; the commands are ${commands.map((c) => c.name).join(', ')} (ionheat help)\n`);
       return 2;
     }
+    const loaded = await command.load();
     if (args.includes('--help') || args.includes('-h')) {
-      io.stdout(`${command.summary}\n\n${command.usage}\n`);
+      io.stdout(`${command.summary}\n\n${loaded.usage}\n`);
       return 0;
     }
     const inputFiles = files.map((f) => (f.startsWith('/') ? f : `${io.cwd}/${f}`));
-    const dataset = files.length > 0 ? loadDataset(inputFiles) : builtinDataset();
-    return await command.run(args, { io, dataset, inputFiles });
+    // Your own tables need the schemas (zod) to be checked; the built-in ones were checked by the tests.
+    const dataset = files.length > 0 ? (await import('../loadDataset.js')).loadDataset(inputFiles) : builtinDataset();
+    return await loaded.run(args, { io, dataset, inputFiles });
   } catch (e) {
     // Messages may quote the user's text: control characters are shown, never sent to the terminal.
     if (isIonheatError(e)) {

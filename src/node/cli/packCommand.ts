@@ -5,23 +5,25 @@ import { IonheatError, isIonheatError } from '../../error.js';
 import { roundToExponent, roundToUncertainty } from '../../quantity/rounding.js';
 import type { Estimate } from '../../quantity/estimate.js';
 import { packFinalTemperature, type PackResult } from '../../pack/packFinalTemperature.js';
-import type { PackFill, PackOptions } from '../../pack/packFill.js';
+import type { PackFill, PackOptions } from '../../pack/packInput.js';
 import { packRatioCurve, type PackDesignPoint, type PackRatioCurve } from '../../pack/packRatioCurve.js';
 import { packTimeCourse, type PackTimeCourse, type TimeCourseOptions } from '../../pack/packTimeCourse.js';
 import { packCurveSvg } from '../../render/packCurve.js';
 import { timeCourseSvg } from '../../render/timeCourse.js';
-import { joinNegativeValues, numberOption, readArgs } from './args.js';
+import { asFlagError, flagTable, joinNegativeValues, numberOption, readArgs } from './args.js';
 import { userSourceOf } from '../../solution/userValueCheck.js';
 import { packDesignMargin, type PackDesignMargin } from '../../pack/designMargin.js';
 import type { Command } from './command.js';
 import { textTable } from './textTable.js';
 import { bulletLines } from './paragraphs.js';
+import { cautionLine } from '../../quantity/caution.js';
 import { outputWidth } from './io.js';
 import { formatNumber, withTrueMinus } from '../../notation/minus.js';
 import { formulaText } from '../../notation/formula.js';
 import { wrapText } from '../../notation/wrapText.js';
 import { writeChart } from './writeChart.js';
 import { warmerSalts } from '../../warmer/warmerMelt.js';
+import { unsignedZero } from '../../numeric/unsignedZero.js';
 
 const options = {
   salt: { type: 'string', multiple: true },
@@ -49,51 +51,43 @@ const options = {
   'time-svg': { type: 'string' },
 } as const;
 
+/**
+ * Each numeric flag and the field it sets in the fill, the pack options, the ratio curve or the time course.
+ * The library checks every range (the fill's and options' in `PACK_INPUT_RANGES`); an error about a field is
+ * reported under the flag that set it.
+ */
+const NUMBER_FLAGS = {
+  'salt-mass': 'massG',
+  water: 'waterG',
+  start: 'startC',
+  container: 'containerJPerK',
+  'heat-capacity': 'heatCapacityJPerK',
+  'heat-capacity-u': 'heatCapacityUJPerK',
+  'monte-carlo': 'samples',
+  seed: 'seed',
+  target: 'targetC',
+  points: 'points',
+  duration: 'durationS',
+  tau: 'dissolutionTimeConstantS',
+  ambient: 'ambientC',
+  'g-ambient': 'ambientConductanceWPerK',
+  skin: 'skinC',
+  'g-skin': 'skinConductanceWPerK',
+} as const satisfies Partial<Record<keyof typeof options, string>>;
+
+/** The flag that sets a field of the library's input (`solids[0].massG` → `salt-mass`). */
+const flagOfField = flagTable({ ...NUMBER_FLAGS, salt: 'formula' });
+
 /** Options whose value is a number that may be negative (`--start -5` means `--start=-5`). */
-const NUMERIC = new Set(['salt-mass', 'water', 'start', 'container', 'target', 'heat-capacity', 'heat-capacity-u', 'monte-carlo', 'seed', 'points', 'duration', 'tau', 'ambient', 'g-ambient', 'skin', 'g-skin', 'band']);
+const NUMERIC = new Set([...Object.keys(NUMBER_FLAGS), 'band']);
 
 function bad(field: string, message: string): IonheatError {
   return new IonheatError('INVALID_ARGUMENT', message, { field });
 }
 
-/**
- * Largest mass of salt or water accepted, g: a tonne, far beyond any pack. Bounds the arithmetic: near 1e308 g the
- * heat capacities overflow to Infinity and the temperature solver cannot converge.
- */
-const MAX_MASS_G = 1e6;
-/**
- * Smallest mass of salt or water accepted, g: a milligram. Below it the numbers say nothing about a pack, and
- * subnormal masses (1e-320 g) stall the temperature solver.
- */
-const MIN_MASS_G = 1e-3;
-/** Largest heat capacity accepted (container, or the whole fill), J/K: a tonne of water is about 4.2e6 J/K. */
-const MAX_HEAT_CAPACITY_J_PER_K = 1e8;
-/** Smallest heat capacity of the whole fill accepted, J/K (a milligram of water holds about 4e-3 J/K). */
-const MIN_HEAT_CAPACITY_J_PER_K = 1e-3;
-
-function atMost(n: number, max: number, name: string, unit: string): number {
-  if (n > max) throw bad(name, `--${name} must be at most ${max} ${unit}, got ${n} ${unit}`);
-  return n;
-}
-
-function atLeast(n: number, min: number, name: string, unit: string): number {
-  if (n < min) throw bad(name, `--${name} must be at least ${min} ${unit}, got ${n} ${unit}`);
-  return n;
-}
-
-function positive(value: string | undefined, name: string, unit: string, required: boolean, max: number, min = 0): number | undefined {
-  const n = numberOption(value, name);
-  if (n === undefined) {
-    if (required) throw bad(name, `--${name} is required (${unit})`);
-    return undefined;
-  }
-  if (!(n > 0)) throw bad(name, `--${name} must be greater than zero, got ${n} ${unit}`);
-  return atMost(atLeast(n, min, name, unit), max, name, unit);
-}
-
 const r = (x: number, digits: number): number => {
   const v = Number(x.toFixed(digits));
-  return v === 0 ? 0 : v;
+  return unsignedZero(v);
 };
 
 /** An estimate rounded for reporting: u to two significant digits, value and interval to the same place (at most 4 decimals). */
@@ -234,7 +228,7 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
     out.push(...bulletLines(course.notes.slice(0, 2), width, '  '));
   }
   out.push('\nCautions:');
-  out.push(...bulletLines([...(margin?.caution ? [margin.caution] : []), ...(course ? course.cautions : result.cautions)], width, '  • '));
+  out.push(...bulletLines([...(margin?.caution ? [margin.caution] : []), ...(course ? course.cautions : result.cautions)].map(cautionLine), width, '  • '));
   out.push('\nNotes:');
   out.push(...bulletLines(result.notes, width));
   // Sentences wrap to the width; the table (one entry of several lines) and the bullets (wrapped already) stay as they are.
@@ -242,20 +236,8 @@ function textReport(result: PackResult, curve: PackRatioCurve, course: PackTimeC
   return withTrueMinus(wrapped.join('\n')) + '\n';
 }
 
-/** Rewrites the library's `solids[i].formula "X": …` into the option the user typed. */
-function asOptionError(e: unknown): unknown {
-  if (!isIonheatError(e) || !e.field) return e;
-  const m = /^solids\[(\d+)\]\.(formula|massG)$/.exec(e.field);
-  if (!m) return e;
-  const option = m[2] === 'formula' ? 'salt' : 'salt-mass';
-  const message = e.message.replace(/^solids\[\d+\]\.(formula|massG) /, `--${option} `).replace(/ \(solids\[\d+\]\.massG\)/, '').replace(/ \(solids\[\d+\]\)/g, '');
-  return new IonheatError(e.code, message, { field: option, ...(e.text !== undefined ? { text: e.text } : {}) });
-}
-
 /** `ionheat pack`: the temperature a hot- or cold-pack fill reaches. */
 export const packCommand: Command = {
-  name: 'pack',
-  summary: 'design a hot or cold pack: final temperature (solubility-limited), 95 % interval, inverse design, time course, cautions',
   usage: [
     'ionheat pack --salt <formula> --salt-mass <g> --water <g> [--start <°C>] [--container <J/K>] [--target <°C>] [--json]',
     '',
@@ -298,27 +280,17 @@ export const packCommand: Command = {
         if (isIonheatError(e)) throw new IonheatError(e.code, `--salt "${formula}": ${e.message}`, { field: 'salt', text: formula });
         throw e;
       }
-      const mass = numberOption(massesGiven[i], 'salt-mass')!;
-      if (!(mass > 0)) throw bad('salt-mass', `--salt-mass must be greater than zero, got ${mass} g (for ${formula})`);
-      if (mass > MAX_MASS_G) throw bad('salt-mass', `--salt-mass must be at most ${MAX_MASS_G} g, got ${mass} g (for ${formula})`);
-      if (mass < MIN_MASS_G) throw bad('salt-mass', `--salt-mass must be at least ${MIN_MASS_G} g, got ${mass} g (for ${formula})`);
-      return { formula, massG: mass };
+      return { formula, massG: numberOption(massesGiven[i], 'salt-mass')! };
     });
-    const water = positive(values.water, 'water', 'g', true, MAX_MASS_G, MIN_MASS_G)!;
+    if (values.water === undefined) throw bad('water', '--water is required (g)');
+    const water = numberOption(values.water, 'water')!;
     const start = numberOption(values.start, 'start');
-    if (start !== undefined && !(start >= 0 && start < 100)) throw bad('start', `--start must lie where water is liquid at 1 bar, from 0 °C up to (not including) 100 °C; got ${start} °C`);
     const container = numberOption(values.container, 'container');
-    if (container !== undefined && !(container >= 0)) throw bad('container', `--container must be zero or more J/K, got ${container}`);
-    if (container !== undefined) atMost(container, MAX_HEAT_CAPACITY_J_PER_K, 'container', 'J/K');
     const target = numberOption(values.target, 'target');
-    const heatCapacity = positive(values['heat-capacity'], 'heat-capacity', 'J/K', false, MAX_HEAT_CAPACITY_J_PER_K, MIN_HEAT_CAPACITY_J_PER_K);
+    const heatCapacity = numberOption(values['heat-capacity'], 'heat-capacity');
     const heatCapacityU = numberOption(values['heat-capacity-u'], 'heat-capacity-u');
-    if (heatCapacityU !== undefined && !(heatCapacityU >= 0)) throw bad('heat-capacity-u', `--heat-capacity-u must be zero or more J/K, got ${heatCapacityU}`);
-    if (heatCapacityU !== undefined) atMost(heatCapacityU, MAX_HEAT_CAPACITY_J_PER_K, 'heat-capacity-u', 'J/K');
     const draws = numberOption(values['monte-carlo'], 'monte-carlo');
-    if (draws !== undefined && !(Number.isInteger(draws) && draws >= 20 && draws <= 1_000_000)) throw bad('monte-carlo', `--monte-carlo needs a whole number of draws from 20 to 1000000, got ${draws}`);
     const seed = numberOption(values.seed, 'seed');
-    if (seed !== undefined && !Number.isSafeInteger(seed)) throw bad('seed', `--seed must be a whole number of at most 15 digits, got ${seed}`);
     const points = numberOption(values.points, 'points');
 
     const fill: PackFill = { solids, waterG: water, ...(start !== undefined ? { startC: start } : {}), ...(container !== undefined ? { containerJPerK: container } : {}) };
@@ -359,12 +331,7 @@ export const packCommand: Command = {
       course = wantsCourse ? packTimeCourse(fill, courseOptions, packOptions, dataset) : undefined;
       margin = target !== undefined ? packDesignMargin(fill, target, packOptions, dataset) : undefined;
     } catch (e) {
-      const mapped = asOptionError(e);
-      if (isIonheatError(mapped) && mapped.field && !mapped.message.startsWith('--')) {
-        const cli = mapped.field.replace(/^(durationS|dissolutionTimeConstantS|ambientC|ambientConductanceWPerK|skinC|skinConductanceWPerK)$/, (k) => ({ durationS: 'duration', dissolutionTimeConstantS: 'tau', ambientC: 'ambient', ambientConductanceWPerK: 'g-ambient', skinC: 'skin', skinConductanceWPerK: 'g-skin' })[k] ?? k).replace(/^targetC$/, 'target');
-        throw new IonheatError(mapped.code, `--${cli}: ${mapped.message}`, { field: cli });
-      }
-      throw mapped;
+      throw asFlagError(e, flagOfField);
     }
 
     const written: string[] = [];

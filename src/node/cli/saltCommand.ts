@@ -7,8 +7,6 @@ import { chargeNumber, ionText } from '../../notation/charge.js';
 
 /** `ionheat salt <formula>`: how ionheat reads a formula. */
 export const saltCommand: Command = {
-  name: 'salt',
-  summary: 'show how a formula is read: its ions, water of crystallization and molar mass',
   usage: 'ionheat salt <formula> [--json]\n\n  <formula>   e.g. "CaCl2·6H2O", "(NH4)2SO4", "urea"\n  --json      print one JSON object',
   async run(argv, { io, dataset }) {
     const { values, positionals } = readArgs(argv, { json: { type: 'boolean' } }, { min: 1, max: 1, names: 'the formula' });

@@ -65,8 +65,6 @@ some row; 2 unusable arguments, an unreadable file, or a row that could not be c
 
 /** `ionheat screen`. */
 export const screenCommand: Command = {
-  name: 'screen',
-  summary: 'rank candidate salts for a hot or cold pack and check them against a specification',
   usage,
   async run(argv, { io, dataset, inputFiles = [] }) {
     const { values, positionals } = readArgs(

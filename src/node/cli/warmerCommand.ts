@@ -1,11 +1,15 @@
+import { cautionLine } from '../../quantity/caution.js';
 import { IonheatError, isIonheatError } from '../../error.js';
 import { parseSalt } from '../../chem/parseSalt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { latentWarmer, type WarmerFill, type WarmerOptions, type WarmerResult } from '../../warmer/latentWarmer.js';
 import { warmerCourseSvg } from '../../render/warmerCourse.js';
-import { joinNegativeValues, numberOption, readArgs } from './args.js';
+import { asFlagError, flagTable, joinNegativeValues, numberOption, readArgs } from './args.js';
 import type { Command } from './command.js';
 import { writeChart } from './writeChart.js';
+import { bulletLines } from './paragraphs.js';
+import { outputWidth } from './io.js';
+import { unsignedZero } from '../../numeric/unsignedZero.js';
 
 const options = {
   salt: { type: 'string' },
@@ -19,19 +23,21 @@ const options = {
   json: { type: 'boolean' },
 } as const;
 
-/** Options whose value is a number that may be negative (`--start -5`). */
-const NUMERIC = new Set(['mass', 'extra-water', 'start', 'container', 'ambient', 'g-ambient']);
-
-/** The library's field names as the options a user typed. */
-const OPTION_OF: Record<string, string> = {
+/** Each flag and the field of the warmer's fill or options it sets; an error about a field is reported under its flag. */
+const FIELD_OF_FLAG = {
   salt: 'salt',
-  massG: 'mass',
-  extraWaterG: 'extra-water',
-  startC: 'start',
-  containerJPerK: 'container',
-  ambientC: 'ambient',
-  ambientConductanceWPerK: 'g-ambient',
-};
+  mass: 'massG',
+  'extra-water': 'extraWaterG',
+  start: 'startC',
+  container: 'containerJPerK',
+  ambient: 'ambientC',
+  'g-ambient': 'ambientConductanceWPerK',
+} as const satisfies Partial<Record<keyof typeof options, string>>;
+
+const flagOfField = flagTable(FIELD_OF_FLAG);
+
+/** Options whose value is a number that may be negative (`--start -5`). */
+const NUMERIC = new Set(Object.keys(FIELD_OF_FLAG).filter((flag) => flag !== 'salt'));
 
 /** An estimate as the JSON report gives it: rounded by its uncertainty, with its unit. */
 function reported(e: Estimate) {
@@ -41,7 +47,7 @@ function reported(e: Estimate) {
 
 const r = (x: number, digits: number): number => {
   const v = Number(x.toFixed(digits));
-  return v === 0 ? 0 : v;
+  return unsignedZero(v);
 };
 
 function jsonReport(w: WarmerResult) {
@@ -75,7 +81,7 @@ function line(e: Estimate): string {
   return `${x.value} ${x.unit}   (95 % interval ${x.low} to ${x.high})`;
 }
 
-function textReport(w: WarmerResult): string {
+function textReport(w: WarmerResult, width: number): string {
   const f = w.fill;
   const out: string[] = [];
   out.push(`Warmer: ${f.massG} g ${f.formula}${f.extraWaterG > 0 ? ` + ${f.extraWaterG} g extra water` : ''}, supercooled at ${f.startC} °C${f.containerJPerK > 0 ? `, container ${f.containerJPerK} J/K` : ''}`);
@@ -89,9 +95,9 @@ function textReport(w: WarmerResult): string {
   out.push(`recharge above       ${w.rechargeTemperature ? line(w.rechargeTemperature) : 'not reachable by heating in water (see notes)'}`);
   out.push(`above 44 °C for about ${Math.round(w.secondsAboveBurnThreshold / 60)} min; energy balance closes to ${Math.abs(w.energy.course.residualJ).toExponential(1)} J`);
   out.push('\nCautions:');
-  for (const c of w.cautions) out.push(`  • ${c}`);
+  out.push(...bulletLines(w.cautions.map(cautionLine), width, '  • '));
   out.push('\nNotes:');
-  for (const n of w.notes) out.push(`  - ${n}`);
+  out.push(...bulletLines(w.notes, width));
   return out.join('\n') + '\n';
 }
 
@@ -101,8 +107,6 @@ function bad(field: string, message: string): IonheatError {
 
 /** `ionheat warmer`: a latent-heat warmer of a supercooled salt-hydrate melt. */
 export const warmerCommand: Command = {
-  name: 'warmer',
-  summary: 'a latent-heat warmer (supercooled hydrate melt): plateau, share crystallised at once, heat, plateau duration, recharge, cautions',
   usage: [
     'ionheat warmer --salt <hydrate> --mass <g> [--extra-water <g>] [--start <°C>] [--container <J/K>] [--ambient <°C> --g-ambient <W/K>] [--svg <file>] [--json]',
     '',
@@ -143,17 +147,14 @@ export const warmerCommand: Command = {
     try {
       result = latentWarmer(fill, warmerOptions, dataset);
     } catch (e) {
-      // Name the option the user typed, not the library's field.
-      const option = isIonheatError(e) && e.field ? OPTION_OF[e.field] : undefined;
-      if (isIonheatError(e) && option && !e.message.startsWith('--')) throw new IonheatError(e.code, `--${option}: ${e.message}`, { field: option, ...(e.text !== undefined ? { text: e.text } : {}) });
-      throw e;
+      throw asFlagError(e, flagOfField);
     }
     const written = values.svg !== undefined ? writeChart(io.cwd, values.svg, warmerCourseSvg(result), 'svg') : undefined;
     if (values.json) {
       io.stdout(JSON.stringify(jsonReport(result), null, 2) + '\n');
       return 0;
     }
-    io.stdout(textReport(result));
+    io.stdout(textReport(result, outputWidth(io)));
     if (written) io.stdout(`chart written to ${written}\n`);
     return 0;
   },

@@ -5,8 +5,6 @@ import { startWorkbenchServer } from '../workbenchServer.js';
 
 /** `ionheat workbench`: serves the browser workbench on this machine until stopped. */
 export const workbenchCommand: Command = {
-  name: 'workbench',
-  summary: 'open the workbench in a browser: salts, packs, warmers, screens and your data, computed in the page',
   usage: [
     'ionheat workbench [--port <n>]',
     '',

@@ -1,6 +1,7 @@
 /**
  * A dataset with the built-in tables and empty caches, so that a benchmark's
- * first pass pays for every index and calibration it needs.
+ * first pass pays for every index and calibration it needs (none comes from
+ * the snapshot computed ahead, builtinSnapshot.generated.ts).
  *
  * @module
  */
@@ -15,5 +16,5 @@ export function freshDataset(): Dataset {
     const t = base.table(name);
     if (t) (tables as Record<string, unknown>)[name] = t;
   }
-  return new Dataset(tables, base.sources, 'built-in (fresh)');
+  return new Dataset(tables, base.sources, base.label);
 }

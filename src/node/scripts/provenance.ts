@@ -11,6 +11,7 @@ import { readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { tableSchemas } from '../../data/schemas.js';
 import { FAMILIES, crossChecks, loadInputs } from './reference/crossCheck.js';
+import { UNREACHABLE } from './reference/unreachable.js';
 
 const root = join(import.meta.dirname, '..', '..', '..');
 const { tables, refs } = loadInputs(root);
@@ -28,7 +29,8 @@ for (const name of Object.keys(tableSchemas)) {
   const checked = records.filter((r) => typeof r.checkedAgainst === 'string');
   const byCopy = new Map<string, number>();
   for (const r of checked) {
-    const copy = (r.checkedAgainst as string).replace(/ \(.*\)$/, '').replaceAll('tests/reference/', '').replaceAll('.json', '');
+    // Keep what was compared (the parenthesis): a cycle or closure over a copy is not the same as the copy's own number.
+    const copy = (r.checkedAgainst as string).replaceAll('tests/reference/', '').replaceAll('.json', '');
     byCopy.set(copy, (byCopy.get(copy) ?? 0) + 1);
   }
   const memory = records.filter((r) => r.fromMemory === true).length;
@@ -46,6 +48,24 @@ for (const name of Object.keys(tableSchemas)) {
   ]);
 }
 tableRows.push(['**all tables**', String(total), `**${checkedTotal} (${percent(checkedTotal, total)})**`, '', String(memoryTotal), String(total - checkedTotal - memoryTotal)]);
+
+// Quantities nested inside records (each with its own provenance, as in warmer-melts.json).
+const nestedRows: string[][] = [];
+for (const name of Object.keys(tableSchemas)) {
+  const records: any[] = JSON.parse(readFileSync(join(root, 'data', name), 'utf8')).records;
+  const byField = new Map<string, { all: number; checked: number; memory: number }>();
+  for (const r of records) {
+    for (const [field, value] of Object.entries(r)) {
+      if (!value || typeof value !== 'object' || Array.isArray(value) || typeof (value as any).fromMemory !== 'boolean') continue;
+      const count = byField.get(field) ?? { all: 0, checked: 0, memory: 0 };
+      count.all++;
+      if (typeof (value as any).checkedAgainst === 'string') count.checked++;
+      if ((value as any).fromMemory === true) count.memory++;
+      byField.set(field, count);
+    }
+  }
+  for (const [field, c] of byField) nestedRows.push([name, field, String(c.all), String(c.checked), String(c.memory)]);
+}
 
 // Per family.
 const familyRows = Object.values(FAMILIES).map((f) => {
@@ -75,6 +95,11 @@ const table = (head: string[], rows: string[][]) =>
 const tablesMd = table(['table', 'records', 'checked against a copy', 'by copy', 'from memory', 'neither (sourced, not compared)'], tableRows);
 const familiesMd = table(['family', 'table', 'reference', 'compared', 'agree', 'agreement', 'differ, reason on the record', 'unresolved'], familyRows);
 const differencesMd = table(['table', 'record', 'ours', 'copy', 'copy file', 'tolerance'], differenceRows);
+const nestedMd = table(['table', 'quantity', 'records', 'checked against a copy', 'from memory'], nestedRows);
+const unreachableRows = tableRows
+  .filter((row) => row[0] !== '**all tables**' && Number(row[4]) > 0)
+  .map((row) => [row[0]!, row[4]!, UNREACHABLE[row[0]!] ?? '(no reason recorded: add one to src/node/scripts/reference/unreachable.ts)']);
+const unreachableMd = table(['table', 'from memory', 'why no reachable copy checks them'], unreachableRows);
 const copiesMd = table(['file', 'package', 'version', 'licence', 'file inside the package', 'entries'], copyRows);
 
 const report = `# Provenance of the data tables
@@ -86,6 +111,20 @@ Written by \`npm run provenance\` (src/node/scripts/provenance.ts); do not edit 
 A record is *checked* when its value was matched against an open copy of a reference (its \`checkedAgainst\` names the copy under tests/reference/, and \`fromMemory\` is false); *from memory* when it was typed without a copy of its source at hand.
 
 ${tablesMd}
+
+The *by copy* column names the copy (or copies) and, in parentheses, what was compared where it is not simply the copy's own number for the record: a cycle or closure built from the copies' numbers, a density, a composition.
+
+### Quantities inside records
+
+Some records hold several quantities, each with its own source and provenance; the counts above are of whole records (whose own \`fromMemory\` stays true while any part is from memory).
+
+${nestedMd}
+
+## What no reachable copy can check
+
+Reachable here means the npm and Debian package registries, the Python packages already installed (PyPI itself does not answer from this machine), the PHREEQC databases under ../shared/reference/phreeqc/, and the public repositories and pages held by the project's search tool. Written from src/node/scripts/reference/unreachable.ts.
+
+${unreachableMd}
 
 ## Agreement per comparison family
 

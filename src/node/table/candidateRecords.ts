@@ -10,7 +10,7 @@
 import { IonheatError } from '../../error.js';
 import { candidateFields, type CandidateLike } from '../../screen/candidate.js';
 import { parseJsonStrict } from '../strictJson.js';
-import { closestName } from '../closestName.js';
+import { nearestName } from '../../quantity/nearestName.js';
 import { csvRecords as splitCsv } from './csvSplitter.js';
 
 /** One record of the input: a candidate's fields, a blank line, or a record that could not be read. */
@@ -27,7 +27,7 @@ const MAX_CELL_LINES = 50;
 /** A hint for a header that is one cell holding another separator: semicolons or tabs, as some spreadsheets write. */
 function separatorHint(cell: string): string {
   for (const [sep, name] of [[';', 'semicolons'], ['\t', 'tabs']] as const) {
-    if (cell.includes(sep) && cell.split(sep).some((c) => c.trim() === 'formula' || closestName(c.trim(), candidateFields) !== undefined)) {
+    if (cell.includes(sep) && cell.split(sep).some((c) => c.trim() === 'formula' || nearestName(c.trim(), candidateFields) !== undefined)) {
       return `; this header is separated by ${name}, but a candidate list is separated by commas (save it as "CSV, comma-separated")`;
     }
   }
@@ -39,7 +39,7 @@ function columnsOf(header: readonly string[], label: string): string[] {
   for (const [i, c] of columns.entries()) {
     if (c === '') throw new IonheatError('INVALID_DATA', `${label}, line 1: column ${i + 1} has no name (the header names the columns: ${candidateFields.join(', ')})`, { field: label });
     if (!KNOWN.has(c)) {
-      const near = closestName(c, candidateFields);
+      const near = nearestName(c, candidateFields);
       const hint = separatorHint(c) || (near ? `; did you mean "${near}"? (names are case-sensitive)` : '');
       throw new IonheatError('INVALID_DATA', `${label}, line 1: unknown column "${c.length > 40 ? c.slice(0, 40) + '…' : c}" (the columns a candidate list may have: ${candidateFields.join(', ')})${hint}`, { field: c });
     }

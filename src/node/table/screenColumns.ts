@@ -9,11 +9,23 @@
  * @module
  */
 import type { ScreenRow, ScreenSettings } from '../../screen/screenRow.js';
+import { worstSeverity, type Caution } from '../../quantity/caution.js';
 
 type Cell = string | number | boolean | undefined;
 export interface Column {
   header: string;
   get(row: ScreenRow): Cell;
+}
+
+/** Every caution of a row: the salt's own, the standard fill's and the standard warmer's. */
+function rowCautions(r: ScreenRow): Caution[] {
+  return [...(r.cautions ?? []), ...(r.fill?.cautions ?? []), ...(r.warmer?.cautions ?? [])];
+}
+
+/** The distinct kinds of a row's cautions, space-separated, in order of first appearance. */
+function cautionKinds(r: ScreenRow): string | undefined {
+  const kinds = [...new Set(rowCautions(r).map((c) => c.kind))];
+  return kinds.length > 0 ? kinds.join(' ') : undefined;
 }
 
 const OVERRIDES = ['measuredEnthalpy', 'measuredUncertainty', 'solubility', 'source'] as const;
@@ -66,6 +78,8 @@ export function screenColumns(settings: ScreenSettings, inputColumns?: readonly 
   }
   for (const field of OVERRIDES) if (has(field)) columns.push({ header: `input.${field}`, get: (r) => r.input[field] });
   columns.push({ header: 'hazards', get: (r) => (r.hazards && r.hazards.length > 0 ? r.hazards.join(' ') : r.hazardData) });
+  // The JSON's cautions list in two cells: the most serious severity of the row (its fill and warmer included) and the kinds.
+  columns.push({ header: 'cautions.severity', get: (r) => worstSeverity(rowCautions(r)) }, { header: 'cautions.kind', get: cautionKinds });
   if (settings.spec !== null) columns.push({ header: 'spec.holds', get: (r) => r.spec?.holds }, { header: 'spec.reason', get: (r) => r.spec?.reason });
   columns.push(
     { header: 'duplicateOf', get: (r) => r.duplicateOf },

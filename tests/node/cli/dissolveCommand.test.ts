@@ -7,14 +7,21 @@ const run = (args: string[]) => runCliInMemory(args);
 
 describe('ionheat dissolve', () => {
   it('says first that a hydrate no table lists is hypothetical, in text and JSON', async () => {
-    const text = await run(['dissolve', 'KCl·50H2O']);
+    const text = await run(['dissolve', 'MgSO4·4H2O']);
     expect(text.status).toBe(0);
-    expect(text.out.split('\n')[1]).toMatch(/^Hypothetical hydrate \(more waters than any known hydrate; known forms: anhydrous/);
-    const j = JSON.parse((await run(['dissolve', 'KCl·50H2O', '--json'])).out);
-    expect(j.hypotheticalHydrate).toMatchObject({ reason: 'more waters than any known hydrate' });
+    expect(text.out.split('\n')[1]).toMatch(/^Hypothetical hydrate \(a hydrate no table lists; known forms: anhydrous/);
+    const j = JSON.parse((await run(['dissolve', 'MgSO4·4H2O', '--json'])).out);
+    expect(j.hypotheticalHydrate).toMatchObject({ reason: 'a hydrate no table lists' });
     expect(j.hypotheticalHydrate.knownWaters).toContain(0);
     const real = JSON.parse((await run(['dissolve', 'KCl', '--json'])).out);
     expect(real.hypotheticalHydrate).toBeUndefined();
+  });
+
+  it('refuses a hydrate with more waters than any known form, without a number', async () => {
+    const r = await run(['dissolve', 'KCl·50H2O']);
+    expect(r.status).not.toBe(0);
+    expect(r.out).toBe('');
+    expect(r.err).toMatch(/no enthalpy of solution is given for KCl·50H2O: it has more waters of crystallization than any form of KCl/);
   });
 
   it('--json prints one object with the contract fields', async () => {
@@ -31,7 +38,10 @@ describe('ionheat dissolve', () => {
     expect(j.perGram.salt.unit).toBe('J/g');
     expect(j.perGram.saturatedFill.unit).toBe('J/g');
     expect(j.estimates.length).toBeGreaterThanOrEqual(2);
-    expect(j.cautions.join(' ')).toMatch(/oxidiser/i);
+    // Structured cautions: the hazards table's classes for NH4NO3 (eu2019_1148), its restriction, the screening line last.
+    expect(j.cautions.map((c: { kind: string }) => c.kind)).toEqual(['hazard-class', 'restricted-salt', 'screening']);
+    expect(j.cautions[0]).toMatchObject({ kind: 'hazard-class', severity: 'warning' });
+    expect(j.cautions.map((c: { text: string }) => c.text).join(' ')).toMatch(/oxidiser/i);
   });
 
   it('--exclude-measured hides the measured value', async () => {

@@ -48,8 +48,8 @@ describe('text output notation', () => {
     expect(r.out).not.toMatch(/ambientConductanceWPerK|durationS|skinConductanceWPerK/);
   });
 
-  it('writes a hydrate with a decimal count as it is (NaCl·2.5H₂O, not NaCl·2.₅H₂O)', async () => {
-    const r = await run(['dissolve', 'NaCl·2.5H2O']);
-    expect(r.out.split('\n')[0]).toMatch(/^NaCl·2\.5H₂O /);
+  it('writes a hydrate with a decimal count as it is (CaSO4·0.5H₂O, not CaSO4·0.₅H₂O)', async () => {
+    const r = await run(['dissolve', 'CaSO4·0.5H2O']);
+    expect(r.out.split('\n')[0]).toMatch(/^CaSO₄·0\.5H₂O /);
   });
 });

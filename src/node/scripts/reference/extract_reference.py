@@ -228,6 +228,23 @@ def chemicals_files() -> None:
           "units": {"density": "g/cm³ (package: kg/m³)"},
           "formulaFrom": "Hill formula of the CAS number in the package's pubchem identifier table; a hydrate missing there takes the formula of the anhydrous row of the same label plus its water"}, out)
 
+    # CRC Handbook, physical constants of organic compounds: density of the few
+    # organic solutes a pack may use (urea, sugars, sugar alcohols).
+    rel = "chemicals/Misc/Physical Constants of Organic Compounds.csv"
+    rows = csv.DictReader(open(os.path.join(base, "Misc", "Physical Constants of Organic Compounds.csv")), delimiter="\t")
+    out = []
+    for r in rows:
+        rho = num(r["rho"])
+        formula = formula_of(r["CAS"])
+        if rho is None or not formula or re.search(r"[+-]", formula) or hill(_composition(formula)) not in PACK_ORGANICS:
+            continue
+        out.append({"cas": r["CAS"], "label": r["Name"].strip(), "hill": hill(_composition(formula)), "density": round(rho / 1000, 5)})
+    write("chemicals-crc-organic-densities.json", {**pkg, "file": rel,
+          "upstream": "CRC Handbook of Chemistry and Physics, physical constants of organic compounds, density column (as carried by the package)",
+          "units": {"density": "g/cm³ (package: kg/m³)"},
+          "selection": "only the Hill formulas of the organic solutes ionheat tabulates (PACK_ORGANICS)",
+          "formulaFrom": "Hill formula of the CAS number in the package's pubchem identifier table"}, out)
+
     # Active Thermochemical Tables 1.112, gas phase.
     rel = "chemicals/Reactions/ATcT 1.112 (g).tsv"
     rows = csv.DictReader(open(os.path.join(base, "Reactions", "ATcT 1.112 (g).tsv")), delimiter="\t")

@@ -9,7 +9,7 @@
  */
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { FAMILIES, checkedAgainstText, crossChecks, loadInputs } from './crossCheck.js';
+import { FAMILIES, checkedAgainstText, checkedObject, crossChecks, loadInputs } from './crossCheck.js';
 import { editRecords, type RecordEdit } from './jsonRecordEdit.js';
 
 const root = join(import.meta.dirname, '..', '..', '..', '..');
@@ -22,11 +22,11 @@ for (const check of checks) {
     open.push(`${check.table} ${check.subject}: ours ${check.ours}, ${check.reference} ${check.ref} (tolerance ${check.tolerance.toFixed(3)}) ${check.refLabel}`);
     continue;
   }
-  const record = tables[check.table].records[check.index];
+  const record = checkedObject(tables, check);
   const text = checkedAgainstText(FAMILIES[check.family]!);
   if (record.checkedAgainst === text && record.fromMemory === false) continue;
   const list = edits.get(check.table) ?? [];
-  list.push({ index: check.index, set: { fromMemory: false, checkedAgainst: text }, after: { checkedAgainst: 'fromMemory' } });
+  list.push({ index: check.index, set: { fromMemory: false, checkedAgainst: text }, after: { checkedAgainst: 'fromMemory' }, ...(check.field ? { field: check.field } : {}) });
   edits.set(check.table, list);
 }
 for (const [table, list] of edits) {

@@ -1,9 +1,9 @@
 // Root finding, maximisation, reproducible draws and solubility interpolation.
 import { describe, expect, it } from 'vitest';
 import { isIonheatError, solubilityAt, solubilityCurve } from '../../src/index.js';
-import { bracketedRoot } from '../../src/pack/bracketedRoot.js';
-import { goldenSectionMaximum } from '../../src/pack/goldenSectionMaximum.js';
-import { seededNormal } from '../../src/pack/seededNormal.js';
+import { bracketedRoot } from '../../src/numeric/bracketedRoot.js';
+import { goldenSectionMaximum } from '../../src/numeric/goldenSectionMaximum.js';
+import { seededNormal } from '../../src/numeric/seededNormal.js';
 
 describe('bracketedRoot (Brent)', () => {
   it('converges to its tolerance, not a fixed count', () => {
