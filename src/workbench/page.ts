@@ -158,8 +158,10 @@ async function run(out: HTMLElement, request: Request, show: (a: Answer) => void
   out.setAttribute('aria-busy', 'false');
   const received = performance.now();
   // Announced once in the status line (a live region), rather than reading out a whole table of results.
-  if (a.kind === 'error') showError(out, a); // an alert, announced as it appears
-  else {
+  if (a.kind === 'error') {
+    showError(out, a); // an alert, announced as it appears
+    status('');
+  } else {
     status(`${out.id === 'data-out' ? 'Data' : 'Result'} ready${a.kind === 'view' ? `: ${a.view.heading}` : ''}.`);
     const shown = show(a);
     out.dataset.layoutMs = String(Math.round(performance.now() - received));
