@@ -76,7 +76,16 @@ export function brineRecords(dataset: Dataset = builtinDataset()): readonly Brin
   });
 }
 
-/** The non-electrolytes of the table with their series, by the anhydrous formula of the solute, per dataset. */
+/**
+ * The non-electrolytes of the table with their series (φ − 1 = Σ aᵢ·mⁱ at T_ref in K, φL = Σ hᵢ·mⁱ in J/mol), by the
+ * formula of the solute, per dataset.
+ *
+ * @see data/brine-pitzer.json `nonElectrolytes` (urea: `crcConcentrative`, `guckerPickard1940`)
+ * @example
+ * ```ts
+ * nonElectrolyteRecords().get('CO(NH2)2')?.parameters.referenceK; // 273.15
+ * ```
+ */
 export function nonElectrolyteRecords(dataset: Dataset = builtinDataset()): ReadonlyMap<string, { record: NonElectrolyteBrineRecord; parameters: NonElectrolyteParameters }> {
   return dataset.memo('brine.nonElectrolytes', () => {
     // The envelope's extra field is validated by its schema; its static type is not carried through `table()`.

@@ -44,15 +44,29 @@ export function powerSeries(c: ArrayLike<number>, m: number): number {
 }
 
 /**
- * The osmotic series at tK written into `out` (up to five aᵢ(T), the rest zero),
- * aᵢ(T) = aᵢ(T_ref) + (i·hᵢ/R)·(1/T − 1/T_ref).
+ * The osmotic series at tK (K) written into `out` (up to five aᵢ(T), kg^i/mol^i, the rest zero),
+ * aᵢ(T) = aᵢ(T_ref) + (i·hᵢ/R)·(1/T − 1/T_ref), R in J/(mol·K), hᵢ in J·kg^i/mol^(i+1).
+ *
+ * @example
+ * ```ts
+ * const out = new Float64Array(5);
+ * nonElectrolyteOsmoticTerms({ osmotic: new Float64Array([-0.03]), enthalpy: new Float64Array([-360]), referenceK: 273.15 }, 298.15, out);
+ * out[0]; // ≈ -0.01671 (−0.03 + (−360/8.314)·(1/298.15 − 1/273.15))
+ * ```
  */
 export function nonElectrolyteOsmoticTerms(p: NonElectrolyteParameters, tK: number, out: Float64Array): void {
   const shift = (1 / tK - 1 / p.referenceK) / GAS_CONSTANT;
   for (let i = 0; i < out.length; i++) out[i] = (p.osmotic[i] ?? 0) + (i + 1) * (p.enthalpy[i] ?? 0) * shift;
 }
 
-/** φ = 1 + Σ aᵢ(T)·mⁱ from the terms {@link nonElectrolyteOsmoticTerms} wrote. */
+/**
+ * φ = 1 + Σ aᵢ(T)·mⁱ at m (mol/kg) from the terms {@link nonElectrolyteOsmoticTerms} wrote.
+ *
+ * @example
+ * ```ts
+ * nonElectrolyteOsmoticWith(2, new Float64Array([-0.03, 0.003, 0, 0, 0])); // 0.952 (1 − 0.06 + 0.012)
+ * ```
+ */
 export function nonElectrolyteOsmoticWith(m: number, terms: Float64Array): number {
   return m <= 0 ? 1 : 1 + powerSeries(terms, m);
 }

@@ -30,14 +30,15 @@ export const PREBUILT_KEYS: readonly string[] = [
   'solution.hydrateRulePairs',
   'solution.knownSaltForms',
   'solution.anchorSalts',
-  'solution.anchorFloors',
+  'solution.anchorFloors.same',
+  'solution.anchorFloors.cross',
   'brine.records',
   'brine.discrepancyScales',
   'pack.hazardIndex',
 ];
 
 /** Salts and a fill whose computation builds every key above (a fixed list: the snapshot must not vary). */
-const WARM_UP = ['NaCl', 'KNO3', 'NH4NO3', 'CaCl2', 'CaCl2·6H2O', 'RbSCN'];
+const WARM_UP = ['NaCl', 'KNO3', 'NH4NO3', 'CaCl2', 'CaCl2·6H2O', 'RbSCN', 'AlCl3'];
 
 /** The generated module's text. */
 export function builtinSnapshotText(): string {
