@@ -20,7 +20,8 @@ export { makeEstimate, roundEstimate, probabilityPositive, basisOrder, type Esti
 export { estimateSchema, basisSchema } from './quantity/estimateSchema.js';
 export { formatEstimate, type FormattedEstimate } from './quantity/formatEstimate.js';
 export { roundToUncertainty } from './quantity/rounding.js';
-export { cautionLine, cautionSchema, cautionKindSchema, cautionSeveritySchema, type Caution, type CautionKind, type CautionSeverity } from './quantity/caution.js';
+export { cautionLine, CAUTION_KINDS, CAUTION_SEVERITIES, type Caution, type CautionKind, type CautionSeverity } from './quantity/caution.js';
+export { cautionSchema, cautionKindSchema, cautionSeveritySchema } from './quantity/cautionSchema.js';
 export * as constants from './quantity/constants.js';
 
 // Data

@@ -6,20 +6,14 @@
  * @module
  */
 import type { Salt } from './salt.js';
-
-const issued = new WeakSet<object>();
+import { issueObject, wasIssued } from '../data/issuedObjects.js';
 
 /** Freezes `salt` (its ions and composition too) and remembers it as issued. @internal */
 export function issueSalt(salt: Salt): Salt {
-  for (const ion of salt.ions) Object.freeze(ion);
-  Object.freeze(salt.ions);
-  Object.freeze(salt.composition);
-  Object.freeze(salt);
-  issued.add(salt);
-  return salt;
+  return issueObject(salt);
 }
 
 /** Whether `value` is a salt that {@link parseSalt} made (and, being frozen, nobody changed since). @internal */
 export function isIssuedSalt(value: unknown): value is Salt {
-  return typeof value === 'object' && value !== null && issued.has(value);
+  return wasIssued(value);
 }

@@ -84,7 +84,7 @@ export class Dataset {
    * @param sources - citations by source key
    * @param label - where the tables came from, for messages
    * @param origins - which override set gave each user source (`source:key`) and record (`table:key`)
-   * @param prebuilt - memo values computed ahead from exactly these tables (see {@link Dataset.memoSnapshot}); a
+   * @param prebuilt - memo values computed ahead from exactly these tables (see `Dataset.memoSnapshot`); a
    *   dataset with other tables must not be given them
    */
   constructor(tables: Tables, sources: Readonly<Record<string, SourceEntry>>, label = 'built-in', origins: ReadonlyMap<string, string> = new Map(), prebuilt?: Readonly<Record<string, unknown>>) {
@@ -125,7 +125,7 @@ export class Dataset {
   }
 
   /**
-   * The records of a table by their key ({@link tableKeys}: ions by id,
+   * The records of a table by their key (`tableKeys`: ions by id,
    * formation enthalpies by ion, Madelung constants by structure …), built
    * on first use and kept for the dataset's life. Use it rather than a map
    * of one's own, so that each table is indexed once.

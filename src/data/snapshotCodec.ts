@@ -15,8 +15,7 @@
  *
  * @module
  */
-import { issueSalt, isIssuedSalt } from '../chem/issuedSalts.js';
-import type { Salt } from '../chem/salt.js';
+import { issueObject, wasIssued } from './issuedObjects.js';
 import type { TableName } from './schemas.js';
 
 /** What the codec needs of a dataset: its tables' records. */
@@ -70,7 +69,7 @@ export function encodeSnapshot(value: unknown, tables: SnapshotTables, tableName
         if (k.startsWith('$')) throw new Error(`snapshot: a key starting with $ (${k}) at ${path}`);
         fields[k] = write(x, `${path}.${k}`);
       }
-      body = isIssuedSalt(v) ? { $salt: fields } : fields;
+      body = wasIssued(v) ? { $salt: fields } : fields;
     }
     return shared ? { $id: ids.get(v)!, $v: body } : body;
   };
@@ -105,7 +104,7 @@ export function decodeSnapshot(json: unknown, tables: SnapshotTables): unknown {
     if ('$f64' in o) return Float64Array.from((o.$f64 as unknown[]).map(read) as number[]);
     if ('$m' in o) return new Map((o.$m as [unknown, unknown][]).map(([k, x]) => [read(k), read(x)]));
     if ('$s' in o) return new Set((o.$s as unknown[]).map(read));
-    if ('$salt' in o) return issueSalt(read(o.$salt) as Salt);
+    if ('$salt' in o) return issueObject(read(o.$salt) as object);
     throw new Error(`snapshot: unknown tag ${keys[0]}`);
   };
   return read(json);

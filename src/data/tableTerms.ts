@@ -20,7 +20,6 @@ export const STRUCTURE_TYPES = [
   'corundum',
   'perovskite',
 ] as const;
-export type StructureType = (typeof STRUCTURE_TYPES)[number];
 
 /** Hazard classes of hazards.json, in the order a summary lists them. */
 export const HAZARD_CLASSES = [
@@ -34,7 +33,6 @@ export const HAZARD_CLASSES = [
   'explosive-precursor',
   'carcinogen',
 ] as const;
-export type HazardClass = (typeof HAZARD_CLASSES)[number];
 
 /** Whether `name` is one of `list` (a narrowing check for the vocabularies above). */
 export function isTerm<T extends string>(list: readonly T[], name: unknown): name is T {

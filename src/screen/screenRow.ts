@@ -12,7 +12,7 @@ import { estimateSchema } from '../quantity/estimateSchema.js';
 import { saltSchema } from '../chem/saltSchema.js';
 import { hazardClassSchema } from '../data/schemas.js';
 import { candidateInputSchema } from './candidate.js';
-import { cautionSchema } from '../quantity/caution.js';
+import { cautionSchema } from '../quantity/cautionSchema.js';
 
 /** Which way the pack should go: `cool` wants an endothermic salt, `heat` an exothermic one. */
 export const directionSchema = z.enum(['cool', 'heat']);

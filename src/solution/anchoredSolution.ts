@@ -332,11 +332,27 @@ interface FloorPoint {
 
 /** Needed floors sorted ascending, with each formula's position. */
 interface FloorGroup {
-  needed: number[];
+  needed: Ranked;
+  /** |miss| / (1.96·spread used) of each salt. */
+  ratios: Ranked;
+}
+
+/** One quantity of a group's salts, sorted ascending, with each formula's position. */
+interface Ranked {
+  values: number[];
   position: Map<string, number>;
-  /** |miss| / (1.96·spread used) of each salt, sorted ascending, with each formula's position. */
-  ratios: number[];
-  ratioPosition: Map<string, number>;
+}
+
+/** Adds one quantity of every point to the sorted lists of the point's groups. */
+function rankInto(points: readonly FloorPoint[], value: (p: FloorPoint) => number, list: (key: string) => Ranked): void {
+  const sorted = [...points].sort((x, y) => value(x) - value(y) || (x.formula < y.formula ? -1 : 1));
+  for (const p of sorted) {
+    for (const key of p.keys) {
+      const l = list(key);
+      l.position.set(p.formula, l.values.length);
+      l.values.push(value(p));
+    }
+  }
 }
 
 /** Least-squares sums of the bracket scale over the pool salts of one group, and each salt's own terms (to leave it out). */
@@ -443,25 +459,11 @@ function floorGroups(dataset: Dataset, mode: SetMode = 'same'): ReadonlyMap<Latt
       }
       const group = (key: string): FloorGroup => {
         let g = calibration.groups.get(key);
-        if (!g) calibration.groups.set(key, (g = { needed: [], position: new Map(), ratios: [], ratioPosition: new Map() }));
+        if (!g) calibration.groups.set(key, (g = { needed: { values: [], position: new Map() }, ratios: { values: [], position: new Map() } }));
         return g;
       };
-      points.sort((x, y) => x.needed - y.needed || (x.formula < y.formula ? -1 : 1));
-      for (const p of points) {
-        for (const key of p.keys) {
-          const g = group(key);
-          g.position.set(p.formula, g.needed.length);
-          g.needed.push(p.needed);
-        }
-      }
-      points.sort((x, y) => x.ratio - y.ratio || (x.formula < y.formula ? -1 : 1));
-      for (const p of points) {
-        for (const key of p.keys) {
-          const g = group(key);
-          g.ratioPosition.set(p.formula, g.ratios.length);
-          g.ratios.push(p.ratio);
-        }
-      }
+      rankInto(points, (p) => p.needed, (key) => group(key).needed);
+      rankInto(points, (p) => p.ratio, (key) => group(key).ratios);
       out.set(model, calibration);
     }
     return out;
@@ -499,30 +501,30 @@ export function anchoredFloor(model: LatticeModel, group: FloorGroupKey, options
   const groups = floorGroups(dataset, options.mode).get(model)?.groups;
   let atLeast = 0;
   let ratioAtLeast = 0;
-  /** The largest of a sorted list with the element at `skip` left out. */
-  const largest = (sorted: readonly number[], skip: number): number => sorted[skip === sorted.length - 1 ? sorted.length - 2 : sorted.length - 1] ?? 0;
+  /** Where the salt left out sits in a list (−1: not in it, or nothing left out). */
+  const skipOf = (r: Ranked): number => (options.excludeFormula !== undefined ? (r.position.get(options.excludeFormula) ?? -1) : -1);
+  /** The largest of a list with the salt left out; undefined when nothing is left. */
+  const largest = (r: Ranked): number | undefined => {
+    const skip = skipOf(r);
+    const n = r.values.length;
+    return n - (skip >= 0 ? 1 : 0) > 0 ? r.values[skip === n - 1 ? n - 2 : n - 1] : undefined;
+  };
   for (const key of [`${group.chargeType}|${group.ionClass}`, group.chargeType, '*']) {
     const g = groups?.get(key);
     if (!g) continue;
-    const skip = options.excludeFormula !== undefined ? (g.position.get(options.excludeFormula) ?? -1) : -1;
-    const ratioSkip = options.excludeFormula !== undefined ? (g.ratioPosition.get(options.excludeFormula) ?? -1) : -1;
-    const n = g.needed.length - (skip >= 0 ? 1 : 0);
+    const skip = skipOf(g.needed);
+    const n = g.needed.values.length - (skip >= 0 ? 1 : 0);
     if (n >= MIN_FLOOR_GROUP || key === '*') {
       const label = key === '*' ? 'all charge types' : key.replace('|', ', ');
-      const spreadScale = Math.min(1, Math.max(quantile(g.ratios, SPREAD_SCALE_QUANTILE, ratioSkip), ratioAtLeast));
-      return { relative: Math.max(quantile(g.needed, 0.95, skip), atLeast), spreadScale, salts: n, group: atLeast > 0 || ratioAtLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
+      const spreadScale = Math.min(1, Math.max(quantile(g.ratios.values, SPREAD_SCALE_QUANTILE, skipOf(g.ratios)), ratioAtLeast));
+      return { relative: Math.max(quantile(g.needed.values, 0.95, skip), atLeast), spreadScale, salts: n, group: atLeast > 0 || ratioAtLeast > 0 ? `${label}; at least the largest miss of the salts more like it` : label };
     }
-    if (n > 0) {
-      atLeast = Math.max(atLeast, largest(g.needed, skip));
-      ratioAtLeast = Math.max(ratioAtLeast, largest(g.ratios, ratioSkip));
-    }
+    ratioAtLeast = Math.max(ratioAtLeast, largest(g.ratios) ?? 0);
     // The largest need any estimator saw in a small group stands for all of them: Born–Mayer sees only the
     // rock-salt silver halides, and AgCl alone would let AgBr claim ±12 kJ/mol.
     for (const other of floorGroups(dataset, options.mode).values()) {
       const h = other.groups.get(key);
-      if (!h) continue;
-      const hs = options.excludeFormula !== undefined ? (h.position.get(options.excludeFormula) ?? -1) : -1;
-      if (h.needed.length - (hs >= 0 ? 1 : 0) > 0) atLeast = Math.max(atLeast, largest(h.needed, hs));
+      if (h) atLeast = Math.max(atLeast, largest(h.needed) ?? 0);
     }
   }
   return { relative: atLeast, spreadScale: 1, salts: 0, group: 'none' };

@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { builtinDataset } from '../../src/data/builtin.js';
 import { parseSalt } from '../../src/chem/parseSalt.js';
-import { anchoredSolutionEnthalpies, anchorSets, anchoredFloor } from '../../src/solution/anchoredSolution.js';
+import { anchoredSolutionEnthalpies, anchorSets, anchoredFloor, type AnchorSet } from '../../src/solution/anchoredSolution.js';
 import { anchorIndex, cationCoresAlike } from '../../src/solution/anchorIndex.js';
 import { solutionEnthalpyFromCycle } from '../../src/solution/cycleSolution.js';
 import { dissolve } from '../../src/solution/dissolve.js';
@@ -19,17 +19,20 @@ function ionVector(formula: string, factor = 1, into = new Map<string, number>()
   return into;
 }
 
+/** α·MY + β·NX + γ·NY must hold exactly the ions of the target, so that hydration cancels. */
+function expectBalanced(formula: string, s: AnchorSet): void {
+  const v = ionVector(s.my.formula, s.alpha);
+  ionVector(s.nx.formula, s.beta, v);
+  ionVector(s.ny.formula, s.gamma, v);
+  const target = ionVector(formula);
+  for (const ion of new Set([...v.keys(), ...target.keys()])) expect(v.get(ion) ?? 0, `${formula} ${ion}`).toBeCloseTo(target.get(ion) ?? 0, 12);
+}
+
 describe('anchor sets', () => {
   it.each(['KCl', 'CaCl2', 'Na2SO4', 'MgSO4', 'K2CO3', 'BaBr2'])('%s: α·MY + β·NX + γ·NY holds exactly the ions of the target, so hydration cancels', (formula) => {
     const c = anchorSets(parseSalt(formula), 'kapustinskii');
     expect(c, formula).toBeDefined();
-    for (const s of c!.sets) {
-      const v = ionVector(s.my.formula, s.alpha);
-      ionVector(s.nx.formula, s.beta, v);
-      ionVector(s.ny.formula, s.gamma, v);
-      const target = ionVector(formula);
-      for (const ion of new Set([...v.keys(), ...target.keys()])) expect(v.get(ion) ?? 0, `${formula} ${ion}`).toBeCloseTo(target.get(ion) ?? 0, 12);
-    }
+    for (const s of c!.sets) expectBalanced(formula, s);
   });
 
   it('never mixes charge types: every anchor of a set shares the target’s (K2CO3 from K2SO4 + Na2CO3 − Na2SO4, not from 1:1 salts)', () => {
@@ -140,11 +143,7 @@ describe('sets that span charge types (the fallback of a salt with no set of its
       const c = anchorSets(parseSalt(formula), 'kapustinskii', dataset, 'cross');
       expect(c?.sets.length, formula).toBeGreaterThan(0);
       for (const s of c!.sets) {
-        const v = ionVector(s.my.formula, s.alpha);
-        ionVector(s.nx.formula, s.beta, v);
-        ionVector(s.ny.formula, s.gamma, v);
-        const target = ionVector(formula);
-        for (const ion of new Set([...v.keys(), ...target.keys()])) expect(v.get(ion) ?? 0, `${formula} ${ion}`).toBeCloseTo(target.get(ion) ?? 0, 12);
+        expectBalanced(formula, s);
         expect([s.my, s.nx, s.ny].some((a) => type(a.formula) !== type(formula)), `${formula}: ${s.my.formula} ${s.nx.formula} ${s.ny.formula}`).toBe(true);
         expect(cationCoresAlike(s.nx.cation, parseSalt(formula).ions.find((i) => i.charge > 0)!.ion, dataset)).toBe(true);
       }

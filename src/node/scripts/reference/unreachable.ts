@@ -39,7 +39,7 @@ export const UNREACHABLE: Record<string, string> = {
     'the CRC copies have no density for Zn(NO3)2·6H2O, KAl(SO4)2·12H2O, NiCl2·6H2O and xylitol, and carry ZnS as wurtzite only (the record is sphalerite); RbF, CuBr and SrO hold a structure type and lattice parameter (Wyckoff 1963, in no reachable copy) and no density.',
   'heat-capacities.json': 'NBS heat capacities of MgCl2·4H2O, Na2CO3·H2O, Na2CO3·10H2O and urea: in none of the CRC, JANAF or Perry copies.',
   'hydration-enthalpies.json':
-    "Marcus's proton value (the scale itself) and the ions whose gas-phase enthalpy no copy gives (ClO4−, HS−, CH3COO−) or whose cycle the comparison does not build (I−, Sn2+): Marcus's printed table is in no reachable copy.",
+    "Marcus's proton value (the scale itself); ions whose gas-phase enthalpy no copy gives (ClO4−, HS−, CH3COO−; Sn2+, since no copy has gaseous tin); and I−, which has no gaseous-ion record to close the cycle with (the comparison builds the atom cycle for cations only). Marcus's printed table is in no reachable copy.",
   'ion-formation-gas.json':
     'lattice-energy estimates of the unbound O2− and S2− (Jenkins 1999), and HS− and CH3COO− derived from gas-phase acidities and electron affinities that no reachable copy tabulates.',
   'shannon-radii.json': "OH− (Shannon lists it beside the monatomic anions), Sn2+ at CN 8 and a commonly quoted NH4+ radius: pymatgen's copy of the Shannon table is by element and carries none of them.",
