@@ -46,8 +46,8 @@ export function packView(request: PackRequest, dataset: Dataset): PanelView {
   const f = result.fill;
   const solids = f.solids.map((s) => `${s.massG} g ${formatSalt(parseSalt(s.formula, dataset), { style: 'unicode' })}`).join(' + ');
   const view = panelView(`Pack: ${solids} in ${f.waterG} g water, start ${f.startC} °C${f.containerJPerK > 0 ? `, container ${f.containerJPerK} J/K` : ''}`);
-  if (margin?.caution) view.cautions.push(margin.caution.text);
-  view.cautions.push(...course.cautions.map((c) => c.text));
+  if (margin?.caution) view.cautions.push(margin.caution);
+  view.cautions.push(...course.cautions);
   const t = result.finalTemperature;
   view.quantities.push(estimateQuantity('Final temperature', t, 'result.finalTemperature', '°C', { strong: true, words: result.interval.method === 'bounds' ? '95 % interval by bounds' : `Monte Carlo, ${result.interval.samples} draws` }));
   view.quantities.push(plainQuantity('Change', result.temperatureChange, 'result.temperatureChange', 2, 'K', result.clamp ? `${result.clamp.kind} clamp` : undefined));

@@ -119,9 +119,13 @@ function sortableTable(caption: string, header: string[], rows: Cell[][], numeri
   return h('div', {}, h('div', { class: 'table-wrap', tabindex: '0', role: 'region', 'aria-label': caption }, table), note, more);
 }
 
-function cautionBox(cautions: string[]): HTMLElement | null {
+/** The words that lead a caution, as the command line writes them (cautionLine). */
+const SEVERITY_WORD = { danger: 'DANGER', warning: 'Warning', notice: 'Note' } as const;
+
+function cautionBox(cautions: PanelView['cautions']): HTMLElement | null {
   if (cautions.length === 0) return null;
-  return h('aside', { class: 'cautions', 'aria-label': 'Cautions' }, h('h3', {}, 'Cautions'), h('ul', {}, ...cautions.map((c) => h('li', {}, c))));
+  const items = cautions.map((c) => h('li', { class: `caution ${c.severity}` }, h('strong', {}, `${SEVERITY_WORD[c.severity]} — `), c.text));
+  return h('aside', { class: 'cautions', 'aria-label': 'Cautions' }, h('h3', {}, 'Cautions'), h('ul', {}, ...items));
 }
 
 /** Lays out a panel's answer in its output region; cautions first, where they cannot be missed. */
@@ -154,8 +158,10 @@ async function run(out: HTMLElement, request: Request, show: (a: Answer) => void
   out.setAttribute('aria-busy', 'false');
   const received = performance.now();
   // Announced once in the status line (a live region), rather than reading out a whole table of results.
-  if (a.kind === 'error') showError(out, a); // an alert, announced as it appears
-  else {
+  if (a.kind === 'error') {
+    showError(out, a); // an alert, announced as it appears
+    status('');
+  } else {
     status(`${out.id === 'data-out' ? 'Data' : 'Result'} ready${a.kind === 'view' ? `: ${a.view.heading}` : ''}.`);
     const shown = show(a);
     out.dataset.layoutMs = String(Math.round(performance.now() - received));

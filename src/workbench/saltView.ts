@@ -8,11 +8,10 @@
 import type { Dataset } from '../data/dataset.js';
 import { formatSalt } from '../chem/formatSalt.js';
 import { dissolve } from '../solution/dissolve.js';
-import { typoSuspicion } from '../chem/typoSuspicion.js';
 import { integralEnthalpyOfSolution } from '../solution/integralEnthalpy.js';
 import { userSourceOf } from '../solution/userValueCheck.js';
 import { basisChart } from '../render/basisChart.js';
-import { GENERAL_CAUTION, VERDICT_WORDS, cautionsFor, perGramWords } from '../node/cli/dissolveWords.js';
+import { VERDICT_WORDS, perGramWords } from '../node/cli/dissolveWords.js';
 import { estimateQuantity, panelView, shown, type PanelView, type Quantity } from './view.js';
 import type { Estimate } from '../quantity/estimate.js';
 
@@ -35,15 +34,12 @@ function perGramQuantity(e: Estimate, what: string, path: string): Quantity {
 export function saltView(request: SaltRequest, dataset: Dataset): PanelView {
   const r = dissolve(request.formula, { excludeMeasured: request.excludeMeasured === true, ...(request.temperatureC !== undefined ? { temperatureC: request.temperatureC } : {}) }, dataset);
   const view = panelView(`${formatSalt(r.salt, { style: 'unicode' })}  (${r.salt.molarMass.toFixed(2)} g/mol)`);
-  view.cautions.push(...cautionsFor(r.salt, dataset), GENERAL_CAUTION);
+  view.cautions.push(...r.cautions);
   if (r.hypotheticalHydrate) {
     const h = r.hypotheticalHydrate;
     const known = h.knownWaters.length > 0 ? `known forms: ${h.knownWaters.map((w) => (w === 0 ? 'anhydrous' : `·${w}H₂O`)).join(', ')}` : 'no form of this salt is known to the tables';
     view.lines.push(`Hypothetical hydrate (${h.reason}; ${known}): the numbers below extrapolate the hydrate rule and describe no real solid.`);
   }
-  // A formula that reads only through a likely slip of the keyboard: said first, not among the notes.
-  const typo = typoSuspicion(request.formula, r.salt, dataset);
-  if (typo) view.cautions.unshift(`Check the formula: ${typo.message}`);
   const mine = userSourceOf(r.best, dataset);
   view.lines.push(`Verdict: ${VERDICT_WORDS[r.verdict]}; P(endothermic) = ${r.probabilityEndothermic.toFixed(3)}`);
   view.lines.push(`Best basis: ${mine ? `${r.best.basis}, your value: ${r.best.sources.join(', ')} in ${mine}` : `${r.best.basis}, ${r.best.method}`}`);
@@ -66,6 +62,7 @@ export function saltView(request: SaltRequest, dataset: Dataset): PanelView {
   });
   view.charts.push({ title: 'Every basis with its 95 % interval', svg: basisChart(r) });
   if (r.hydration?.absolute) view.quantities.push(estimateQuantity(`Hydration enthalpy of the ions, Σν·ΔhydH° (${r.hydration.absolute.method})`, r.hydration.absolute, 'hydration.absolute', 'kJ/mol'));
-  view.notes.push(...[...new Set([...r.notes, ...r.best.notes])].filter((n) => n !== typo?.message));
+  // A suspected typo is among the cautions already.
+  view.notes.push(...[...new Set([...r.notes, ...r.best.notes])].filter((n) => n !== r.suspectedTypo?.message));
   return view;
 }

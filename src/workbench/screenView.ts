@@ -67,8 +67,11 @@ export async function screenOutcome(request: ScreenRequest, dataset: Dataset, pr
     records = once(salts.map((salt, i): InputRecord => ({ kind: 'candidate', line: i + 1, candidate: salt })));
   } else {
     const { text, name } = request.source;
+    // As the command line decides: by the file's extension, else (pasted text) by its first character.
+    const lower = name.toLowerCase();
     const first = text.replace(/^\uFEFF/, '').trimStart()[0];
-    if (first === '[' || first === '{') {
+    const json = lower.endsWith('.json') || (!lower.endsWith('.csv') && !lower.endsWith('.txt') && (first === '[' || first === '{'));
+    if (json) {
       records = jsonCandidateRecords(text.replace(/^\uFEFF/, ''), name);
       columns = () => undefined;
     } else {
@@ -113,7 +116,7 @@ export async function screenOutcome(request: ScreenRequest, dataset: Dataset, pr
   const inOrder = [...ranked.filter(isRankable).sort((a, b) => compareRanked(a, b, settings.objective, settings.direction)), ...ranked.filter((r) => !isRankable(r))];
   const view = panelView(`Screen: ${request.source.kind === 'enumerate' ? 'every salt of the built-in ions' : request.source.name}`);
   const cells = screenTableCells(inOrder, settings);
-  view.cautions.push(cells.caution);
+  view.cautions.push({ severity: 'notice', text: cells.caution });
   view.lines.push(summaryLine(summary, settings.spec !== null));
   view.tables.push({ caption: 'Ranked candidates (click a column heading to sort; rows that could not be computed keep their error)', header: cells.header, rows: cells.body, numeric: [0, 1] });
   const best = inOrder.filter(isRankable).slice(0, CHART_ROWS);

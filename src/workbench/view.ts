@@ -9,6 +9,7 @@
 import type { Estimate } from '../quantity/estimate.js';
 import { formatEstimate } from '../quantity/formatEstimate.js';
 import { formatNumber } from '../notation/minus.js';
+import type { Caution } from '../quantity/caution.js';
 
 /** One number as shown, and where it comes from in the result (`best.value`, `dissolved.0.dissolvedMass`). */
 export interface ShownNumber {
@@ -51,8 +52,8 @@ export interface Chart {
 /** A whole panel's result. */
 export interface PanelView {
   heading: string;
-  /** Said first, in a warning box above everything: cautions a person must not miss. */
-  cautions: string[];
+  /** Said first, in a box above everything, in the result's own order: cautions a person must not miss. */
+  cautions: Pick<Caution, 'severity' | 'text'>[];
   /** Sentences shown under the heading (a verdict, the basis, a hypothetical hydrate). */
   lines: string[];
   quantities: Quantity[];

@@ -16,7 +16,7 @@ export function warmerView(fill: WarmerFill, dataset: Dataset): PanelView {
   const w = latentWarmer(fill, {}, dataset);
   const f = w.fill;
   const view = panelView(`Warmer: ${f.massG} g ${f.formula}${f.extraWaterG > 0 ? ` + ${f.extraWaterG} g extra water` : ''}, supercooled at ${f.startC} °C${f.containerJPerK > 0 ? `, container ${f.containerJPerK} J/K` : ''}`);
-  view.cautions.push(...w.cautions.map((c) => c.text));
+  view.cautions.push(...w.cautions);
   view.lines.push(`Melts ${MELTS[w.melt.melting]} at ${w.melt.meltingPoint.value} °C, latent heat ${w.melt.latentHeat.value} J/g.`);
   view.quantities.push(estimateQuantity('Plateau', w.plateau, 'plateau', '°C', { strong: true }));
   view.quantities.push(estimateQuantity('Crystallised at once (fraction of the hydrate)', w.crystallisedAtPlateau, 'crystallisedAtPlateau', ''));

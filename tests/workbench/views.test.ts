@@ -33,7 +33,7 @@ describe('the workbench panels, computed in Node', () => {
     expect(mismatches(numbers, { ...r, integral })).toEqual([]);
     // KNO3 dissolves endothermically (Parker 1965, NSRDS-NBS 2: ΔsolH° = +34.89 kJ/mol): the verdict says it cools.
     expect(view.lines.some((l) => l.startsWith('Verdict: endothermic'))).toBe(true);
-    expect(view.cautions.at(-1)).toMatch(/^Screening estimate/);
+    expect(view.cautions).toEqual(r.cautions);
     expect(view.charts[0]!.svg).toContain('<svg');
   });
 
@@ -41,7 +41,8 @@ describe('the workbench panels, computed in Node', () => {
     // A user's measured value for KN3 (a test value, not data) makes both readings of KN03 measured salts: computed, warned.
     const withAzide = dataset.withOverrides({ 'solution-enthalpies.json': [{ formula: 'KN3', value: 20, unit: 'kJ/mol', uncertainty: 1, source: 'test', fromMemory: false }] }, 'test', { test: { citation: 'invented for this test', kind: 'inHouse' } } as never);
     const view = saltView({ formula: 'KN03' }, withAzide);
-    expect(view.cautions[0]).toMatch(/^Check the formula: .*KNO₃ is one slip away/);
+    expect(view.cautions[0]!.severity).toBe('warning');
+    expect(view.cautions[0]!.text).toMatch(/^Suspected typo: .*KNO₃ is one slip away/);
     expect(view.notes.some((n) => n.includes('one slip away'))).toBe(false);
   });
 
@@ -63,7 +64,7 @@ describe('the workbench panels, computed in Node', () => {
     const fill = { salt: 'NaCH3COO·3H2O', massG: 100 };
     const view = warmerView(fill, dataset);
     expect(mismatches(numbersOf(view), latentWarmer(fill, {}, dataset))).toEqual([]);
-    expect(view.cautions.some((c) => c.includes('burn'))).toBe(true);
+    expect(view.cautions.some((c) => c.severity === 'danger' && c.text.includes('burn'))).toBe(true);
   });
 
   describe('Screen', () => {
@@ -90,6 +91,15 @@ describe('the workbench panels, computed in Node', () => {
         expect(o.view.tables[0]!.rows).toHaveLength(5);
       });
     }
+
+    it('a JSON candidate list, with a row that is neither a formula nor an object, as the command line reads it', async () => {
+      const list = '[\n  "KNO3",\n  {"formula": "NaCl", "note": "table salt"},\n  5\n]\n';
+      writeFileSync(join(dir, 'list.json'), list);
+      const o = await screenOutcome({ source: { kind: 'text', text: list, name: 'list.json' } }, dataset);
+      expect(o.json).toBe((await runCliInMemory(['screen', 'list.json', '--json'], { cwd: dir })).out);
+      expect(o.csv).toBe((await runCliInMemory(['screen', 'list.json', '--format', 'csv'], { cwd: dir })).out);
+      expect(o.summary.failed).toBe(1);
+    });
 
     it('every built-in salt, enumerated, as the command line enumerates them', async () => {
       const ticks: number[] = [];

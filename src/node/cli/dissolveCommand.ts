@@ -1,5 +1,5 @@
 import type { Dataset } from '../../data/dataset.js';
-import { GENERAL_CAUTION, VERDICT_WORDS, cautionsFor, perGramText as perGram } from './dissolveWords.js';
+import { VERDICT_WORDS, perGramText as perGram } from './dissolveWords.js';
 import { formatSalt } from '../../chem/formatSalt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
 import { dissolve, type DissolveResult } from '../../solution/dissolve.js';

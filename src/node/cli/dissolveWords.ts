@@ -1,27 +1,12 @@
 /**
  * The words of a dissolve result that the command line and the workbench
- * page both show: the verdict in words, the heat per gram with the sign
- * read out, and the cautions. No Node built-in (the page bundles it).
+ * page both show: the verdict in words and the heat per gram with the sign
+ * read out. No Node built-in (the page bundles it).
  *
  * @module
  */
-import type { Dataset } from '../../data/dataset.js';
-import type { Salt } from '../../chem/salt.js';
 import { roundEstimate, type Estimate } from '../../quantity/estimate.js';
-import { hazardCoverage, saltHazards } from '../../solution/saltHazards.js';
 import { formatNumber } from '../../notation/minus.js';
-
-/** The caution every dissolve result carries (common practice). */
-export const GENERAL_CAUTION =
-  'Screening estimate. A dissolving salt can scald or freeze skin, and some salts are oxidisers, toxic or restricted: follow the safety data sheet, local codes, product-safety regulation and licensed practice.';
-
-/** Hazard statements of the salt (a hydrate shares its anhydrous salt's) and of its ions, from hazards.json. */
-export function cautionsFor(salt: Salt, dataset: Dataset): string[] {
-  const found = saltHazards(salt, dataset).map((h) => `${h.subject} (${h.classes.join(', ')}): ${h.statement}`);
-  const coverage = hazardCoverage(salt, dataset);
-  if (coverage.status === 'no hazard data') found.push(`No hazard data: the hazards table has no record for ${coverage.missingIons.join(' or ')}, which is not a sign of safety; check the safety data sheet.`);
-  return found;
-}
 
 /** The verdict in words. */
 export const VERDICT_WORDS = { endothermic: 'endothermic — dissolving absorbs heat (cools)', exothermic: 'exothermic — dissolving releases heat (heats)', undetermined: 'undetermined — the 95 % interval spans zero' } as const;
