@@ -81,15 +81,22 @@ function inputsLine(settings: ChartableScreen['settings']): string {
 
 /**
  * The lines to draw: the spec's thresholds from the screen's own settings, the start temperature of the standard
- * fill where the chart ranks by the temperature it reaches, then the caller's marks; a line given twice is drawn once.
+ * fill where the chart ranks by the temperature it reaches, then the caller's marks. A line is drawn once per
+ * position: a caller's mark where the chart already draws one gives that line its own label (the caller's words
+ * for the same threshold), and two automatic lines at one position keep the first.
  */
 function chartMarks(settings: ChartableScreen['settings'], extra: readonly ChartMark[]): ChartMark[] {
   const f = settings.fill;
   const start = f && settings.objective === 'fill-temperature' ? [{ at: f.startC, label: `start ${formatNumber(f.startC)} °C (fill ${formatNumber(f.saltMassG)} g salt in ${formatNumber(f.waterMassG)} g water)` }] : [];
   const out: ChartMark[] = [];
-  for (const m of [...(settings.specThresholds ?? []), ...start, ...extra]) {
-    if (!Number.isFinite(m.at) || out.some((o) => o.at === m.at && (o.label === m.label || m.label.startsWith('spec:')))) continue;
-    out.push({ at: m.at, label: m.label });
+  for (const m of [...(settings.specThresholds ?? []), ...start]) {
+    if (Number.isFinite(m.at) && !out.some((o) => o.at === m.at)) out.push({ at: m.at, label: m.label });
+  }
+  for (const m of extra) {
+    if (!Number.isFinite(m.at)) continue;
+    const same = out.findIndex((o) => o.at === m.at);
+    if (same >= 0) out[same] = { at: m.at, label: m.label };
+    else out.push({ at: m.at, label: m.label });
   }
   return out;
 }

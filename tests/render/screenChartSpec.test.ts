@@ -24,6 +24,15 @@ describe('the screen chart draws the spec and the fill from the result', () => {
     expect(count(again, '>spec: fill.finalTemperature.value &gt; 40<')).toBe(1);
     expect(count(again, 'burn threshold 44 °C')).toBe(1);
   });
+  it('draws one line per position: the caller’s own words for a threshold or the start replace the automatic label', () => {
+    const worded = intervalChart(result, { marks: [{ at: 40, label: 'warm enough ≥ 40 °C' }, { at: 20, label: 'start 20 °C' }] });
+    expect(count(worded, 'warm enough ≥ 40 °C')).toBe(1);
+    expect(worded).not.toContain('>spec: fill.finalTemperature.value &gt; 40<');
+    expect(count(worded, '>start 20 °C<')).toBe(1);
+    expect(worded).not.toContain('start 20 °C (fill');
+    // every drawn line is a dashed reference line; three positions (20, 40, 60), three lines
+    expect(count(worded, 'stroke-dasharray')).toBe(count(intervalChart(result), 'stroke-dasharray'));
+  });
   it('draws no threshold without a spec, and no start line when the objective is not the fill temperature', () => {
     const plain = intervalChart(screen(['CaCl2', 'MgSO4'], { direction: 'heat' }));
     expect(plain).not.toContain('spec:');
