@@ -77,22 +77,23 @@ function bSum(b0: number, b1: number, b2: number, p: PitzerParameters, sqrtI: nu
  * (for loops over molality at one temperature).
  */
 export function enthalpyTerms(p: PitzerParameters, tK: number, out: Float64Array): void {
-  out[0] = debyeHuckelEnthalpy(tK);
-  out[1] = pitzerSlope(p.beta0, tK);
-  out[2] = pitzerSlope(p.beta1, tK);
-  out[3] = pitzerSlope(p.beta2, tK);
-  out[4] = pitzerSlope(p.cphi, tK) / (2 * Math.sqrt(p.zM * p.zX));
+  termsInto(p, tK, debyeHuckelEnthalpy(tK), pitzerSlope, out);
+}
+
+/** The Debye–Hückel slope, then each of β⁰, β¹, β², Cᵠ taken through `derivative` (Cᵠ scaled to C). */
+function termsInto(p: PitzerParameters, tK: number, slope: number, derivative: (a: PitzerCoefficients, tK: number) => number, out: Float64Array): void {
+  out[0] = slope;
+  out[1] = derivative(p.beta0, tK);
+  out[2] = derivative(p.beta1, tK);
+  out[3] = derivative(p.beta2, tK);
+  out[4] = derivative(p.cphi, tK) / (2 * Math.sqrt(p.zM * p.zX));
 }
 
 /**
  * The temperature-dependent parts of φJ at tK into `out`: A_J, β⁰ᴶ, β¹ᴶ, β²ᴶ, Cᴶ.
  */
 export function heatCapacityTerms(p: PitzerParameters, tK: number, out: Float64Array): void {
-  out[0] = debyeHuckelHeatCapacity(tK);
-  out[1] = heatCapacityParameter(p.beta0, tK);
-  out[2] = heatCapacityParameter(p.beta1, tK);
-  out[3] = heatCapacityParameter(p.beta2, tK);
-  out[4] = heatCapacityParameter(p.cphi, tK) / (2 * Math.sqrt(p.zM * p.zX));
+  termsInto(p, tK, debyeHuckelHeatCapacity(tK), heatCapacityParameter, out);
 }
 
 /** φL or φJ from its terms at tK: ν|zMzX|·(A/2b)·ln(1 + b√I) − 2νMνX·R·T²·(m·Bˣ + m²·νM·zM·Cˣ). */
